@@ -120,6 +120,8 @@ export const apiError = z.object({
     message: z.string(),
     /** Field messages by path, for 400s. */
     fields: z.record(z.string(), z.string()).optional(),
+    /** Every problem of an uploaded document, one line each, led by its path. */
+    details: z.array(z.string()).optional(),
   }),
 });
 export type ApiError = z.output<typeof apiError>;
