@@ -1,0 +1,46 @@
+import type { Fitting, FittingBore } from '../catalog/fitting';
+import type { Placement, SystemSettings } from '../model/job-document';
+import type { PanelBore } from './bore';
+import { orientEdge, orientOffset } from './orientation';
+
+export interface PanelSize {
+  width: number;
+  height: number;
+  thickness: number;
+}
+
+/** The id of a bore expanded from a placement: stable as long as the placement and fitting keep theirs. */
+export function expandedBoreId(placementId: string, fittingBoreId: string): string {
+  return `${placementId}/${fittingBoreId}`;
+}
+
+function expandBore(bore: FittingBore, placement: Placement, fitting: Fitting, panel: PanelSize, system: SystemSettings): PanelBore {
+  const [dx, dy] = orientOffset(bore.x, bore.y, placement);
+  const x = placement.x + dx;
+  const y = placement.y + dy;
+  const origin = { id: expandedBoreId(placement.id, bore.id), purpose: fitting.purpose, placement: placement.id };
+  if (bore.kind === 'face') {
+    const depth = bore.depth === 'through' ? panel.thickness : bore.depth === 'system' ? system.holeDepth : bore.depth;
+    return { ...origin, kind: 'face', x, y, face: placement.face, diameter: bore.diameter, depth, through: bore.depth === 'through' };
+  }
+  const fromFace = bore.z === 'mid' ? panel.thickness / 2 : bore.z;
+  const z = placement.face === 'A' ? fromFace : panel.thickness - fromFace;
+  const edge = orientEdge(bore.toward, placement);
+  // The bore runs from its edge to its inner end at (x, y).
+  const at = edge === 'x0' || edge === 'x1' ? y : x;
+  const depth = { x0: x, x1: panel.width - x, y0: y, y1: panel.height - y }[edge];
+  return { ...origin, kind: 'edge', edge, at, z, diameter: bore.diameter, depth };
+}
+
+/**
+ * The bores a placement drills: the fitting's bores turned, mirrored and moved to the placement, with
+ * ids `${placement.id}/${fitting bore id}`. A placement on face B lands mirrored in x as seen from face A.
+ */
+export function expandPlacement(
+  placement: Placement,
+  fitting: Fitting,
+  panel: PanelSize,
+  system: SystemSettings,
+): PanelBore[] {
+  return fitting.bores.map((b) => expandBore(b, placement, fitting, panel, system));
+}
