@@ -37,6 +37,14 @@ export function looseBore(bore: Bore, thickness: number): PanelBore {
     : { ...bore, kind: 'face', purpose: 'loose', through: bore.depth >= thickness };
 }
 
+/**
+ * Whether two face bores are one hole: the same face, the same centre (within 0.01 mm) and the same
+ * diameter, as when a shelf pin or a plate screw goes into a line-bored system hole.
+ */
+export function isSameHole(a: { x: number; y: number; face: string; diameter: number }, b: PanelFaceBore): boolean {
+  return a.face === b.face && a.diameter === b.diameter && Math.abs(a.x - b.x) <= 0.01 && Math.abs(a.y - b.y) <= 0.01;
+}
+
 /** The length of an edge: edges x0 and x1 run along the panel's height, y0 and y1 along its width. */
 export function edgeLength(edge: EdgeBore['edge'], panel: { width: number; height: number }): number {
   return edge === 'x0' || edge === 'x1' ? panel.height : panel.width;

@@ -1,6 +1,6 @@
 import { jobDocument, type JobDocument, type JobDocumentInput } from '../model/job-document';
 
-type PanelInput = NonNullable<JobDocumentInput['panels']>[number];
+export type PanelInput = NonNullable<JobDocumentInput['panels']>[number];
 
 /** Materials for examples and tests; the figures come from trade-reference §4. */
 export const TEST_MATERIALS = [

@@ -1,0 +1,54 @@
+import { edgeLength, type PanelBore, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore';
+import { EDGE_NAME, INWARD, edgeDistances } from './edges';
+import type { Finding } from './finding';
+import { report, type PanelSite } from './panel-site';
+import { boreName, capitalize, formatNumber, mm } from './wording';
+
+/**
+ * The edge distance a bore needs: the shop's minimum, and for a construction bore (a dowel) at least its
+ * radius (trade-reference §6 and §7).
+ */
+function required(site: PanelSite, bore: PanelBore): number {
+  return bore.purpose === 'construction' ? Math.max(site.limits.minEdge, bore.diameter / 2) : site.limits.minEdge;
+}
+
+/** Where the bore (or, for a fitting's bore, its placement's anchor) goes once moved in by `shift`. */
+function movedTo(site: PanelSite, bore: PanelFaceBore, direction: [number, number], shift: number): Finding['fix'] {
+  const placement = site.layout.placed.find((p) => p.placement.id === bore.placement)?.placement;
+  const from = placement ?? bore;
+  const at = { x: from.x + direction[0] * shift, y: from.y + direction[1] * shift };
+  const what = placement ? `placement ${placement.id}` : bore.id;
+  return { message: `Move ${what} ${mm(shift)} further in, to x ${formatNumber(at.x)}, y ${formatNumber(at.y)}.`, at };
+}
+
+function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): Finding | null {
+  const need = required(site, bore);
+  const [nearest] = edgeDistances(bore, site.panel);
+  // A bore that crosses the edge is outside the panel, which another check reports.
+  if (nearest.distance < 0 || nearest.distance >= need) return null;
+  const message = `${capitalize(boreName(bore))} is ${mm(nearest.distance)} from ${EDGE_NAME[nearest.edge]}; keep at least ${mm(need)}.`;
+  return report(site, 'edge-too-close', 'error', message, [bore], movedTo(site, bore, INWARD[nearest.edge], need - nearest.distance));
+}
+
+function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): Finding | null {
+  const r = bore.diameter / 2;
+  const along = edgeLength(bore.edge, site.panel);
+  const [start, end] = bore.edge === 'x0' || bore.edge === 'x1' ? ['the lower edge', 'the upper edge'] : ['the reference edge', 'the far edge'];
+  const walls = [
+    { name: 'face A', distance: bore.z - r, need: site.limits.minEdge },
+    { name: 'face B', distance: site.panel.thickness - bore.z - r, need: site.limits.minEdge },
+    { name: start, distance: bore.at - r, need: required(site, bore) },
+    { name: end, distance: along - bore.at - r, need: required(site, bore) },
+  ];
+  const thin = walls.find((w) => w.distance >= 0 && w.distance < w.need);
+  if (!thin || walls.some((w) => w.distance < 0)) return null;
+  const message = `${capitalize(boreName(bore))} leaves ${mm(thin.distance)} of board to ${thin.name}; keep at least ${mm(thin.need)}.`;
+  return report(site, 'edge-too-close', 'error', message, [bore], { message: `Move it ${mm(thin.need - thin.distance)} away from ${thin.name}.` });
+}
+
+/** edge-too-close: a bore nearer an edge (or, in an edge, nearer a face) than the shop's minimum. */
+export function checkEdgeTooClose(site: PanelSite): Finding[] {
+  const faces = site.faceBores.map((b) => faceBoreFinding(site, b));
+  const edges = site.edgeBores.map((b) => edgeBoreFinding(site, b));
+  return [...faces, ...edges].filter((f): f is Finding => f !== null);
+}

@@ -1,0 +1,38 @@
+import type { Catalog } from '../catalog/fitting';
+import type { JobDocument, Material, Panel } from '../model/job-document';
+
+/** What the checks look up across a job, built once per run. */
+export interface JobSite {
+  job: JobDocument;
+  catalog: Catalog;
+  materials: ReadonlyMap<string, Material>;
+  /** For each panel id, the flaps that hang on it (a flap's `hang.on`). */
+  flapsOn: ReadonlyMap<string, Panel[]>;
+  /** For each flap id, the lift mechanisms placed on the panels it hangs on. */
+  liftsFor: ReadonlyMap<string, number>;
+  /** For each carcass id, the thickness of its material: the board that adjoins its sides. */
+  carcassBoard: ReadonlyMap<string, number>;
+}
+
+function liftCount(panel: Panel | undefined, catalog: Catalog): number {
+  return panel?.placements.filter((p) => catalog.get(p.fitting)?.purpose === 'lift-mechanism').length ?? 0;
+}
+
+/** Builds the job-wide lookups the panel checks share. */
+export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
+  const materials = new Map(job.materials.map((m) => [m.id, m]));
+  const panels = new Map(job.panels.map((p) => [p.id, p]));
+  const flapsOn = new Map<string, Panel[]>();
+  const liftsFor = new Map<string, number>();
+  for (const flap of job.panels) {
+    if (flap.role !== 'flap' || !flap.hang) continue;
+    for (const side of flap.hang.on) flapsOn.set(side, [...(flapsOn.get(side) ?? []), flap]);
+    liftsFor.set(flap.id, flap.hang.on.reduce((n, side) => n + liftCount(panels.get(side), catalog), 0));
+  }
+  const carcassBoard = new Map<string, number>();
+  for (const c of job.carcasses) {
+    const thickness = materials.get(c.material)?.thickness;
+    if (thickness !== undefined) carcassBoard.set(c.id, thickness);
+  }
+  return { job, catalog, materials, flapsOn, liftsFor, carcassBoard };
+}

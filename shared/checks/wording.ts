@@ -1,0 +1,35 @@
+import type { PanelBore } from '../layout/bore';
+import type { PlacedFitting } from '../layout/panel-layout';
+
+/** A length as a bench hand reads it: at most one decimal, in mm. */
+export function mm(value: number): string {
+  return `${formatNumber(value)} mm`;
+}
+
+/** A number rounded to one decimal, without a trailing `.0`. */
+export function formatNumber(value: number): string {
+  const rounded = Math.round(value * 10) / 10;
+  return String(Object.is(rounded, -0) ? 0 : rounded);
+}
+
+/** How a bore is named in a message: its id and size, `bore h1/cup (Ø35 × 13)`. */
+export function boreName(bore: PanelBore): string {
+  const depth = bore.kind === 'face' && bore.through ? 'through' : formatNumber(bore.depth);
+  const where = bore.kind === 'edge' ? ` in edge ${bore.edge}` : '';
+  return `bore ${bore.id} (Ø${formatNumber(bore.diameter)} × ${depth}${where})`;
+}
+
+/** Sorts ids so that a message names them in the same order whatever the order of the document. */
+export function sortedIds(...ids: (string | undefined)[]): string[] {
+  return [...new Set(ids.filter((id): id is string => id !== undefined))].sort();
+}
+
+/** How a placed fitting is named in a message: `placement pl1 (Mounting plate, 0 mm)`. */
+export function placementName(placed: PlacedFitting): string {
+  return `placement ${placed.placement.id} (${placed.fitting.name})`;
+}
+
+/** The same text with a capital first letter, to open a sentence. */
+export function capitalize(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
