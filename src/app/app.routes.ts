@@ -1,0 +1,17 @@
+import { Routes } from '@angular/router';
+import { authGuard } from './auth/auth-guard';
+import { Shell } from './layout/shell';
+
+export const routes: Routes = [
+  { path: 'sign-in', loadChildren: () => import('./auth/auth.routes') },
+  {
+    path: '',
+    component: Shell,
+    canActivate: [authGuard],
+    children: [
+      { path: '', pathMatch: 'full', redirectTo: 'jobs' },
+      { path: 'jobs', loadChildren: () => import('./jobs/jobs.routes') },
+    ],
+  },
+  { path: '**', redirectTo: 'jobs' },
+];

@@ -1,0 +1,24 @@
+import { Directive, effect, inject, input, TemplateRef, ViewContainerRef } from '@angular/core';
+import { Permission } from '../../../shared/api/contract';
+import { AuthStore } from './auth-store';
+
+/**
+ * Shows its element only to roles that hold the permission (contract.ts `permissions`), so nobody
+ * sees a control they may not use: `<button *bwCan="'editJobs'">`.
+ */
+@Directive({ selector: '[bwCan]' })
+export class Can {
+  private readonly auth = inject(AuthStore);
+  private readonly template = inject(TemplateRef<unknown>);
+  private readonly container = inject(ViewContainerRef);
+
+  readonly bwCan = input.required<Permission>();
+
+  constructor() {
+    effect(() => {
+      const allowed = this.auth.can(this.bwCan());
+      if (allowed && this.container.length === 0) this.container.createEmbeddedView(this.template);
+      if (!allowed) this.container.clear();
+    });
+  }
+}

@@ -1,0 +1,12 @@
+import { provideHttpClient, withInterceptors, withXsrfConfiguration } from '@angular/common/http';
+import { EnvironmentProviders } from '@angular/core';
+import { errorInterceptor } from './error-interceptor';
+
+/**
+ * HttpClient as the API expects it: the XSRF cookie/header pair with Angular's default names
+ * (`XSRF-TOKEN` / `X-XSRF-TOKEN`) and readable errors. The XHR backend is kept (no `withFetch`)
+ * because only it reports upload progress, which the job import shows.
+ */
+export function provideApiHttp(): EnvironmentProviders {
+  return provideHttpClient(withXsrfConfiguration({}), withInterceptors([errorInterceptor]));
+}

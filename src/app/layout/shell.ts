@@ -1,0 +1,38 @@
+import { Component, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatToolbarModule } from '@angular/material/toolbar';
+import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { AuthStore } from '../auth/auth-store';
+import { describeError } from '../core/api-problem';
+
+/**
+ * The frame around every signed-in page: product name, navigation, who is signed in, sign-out.
+ * It is in the first download, so it keeps to light widgets (no overlays: no tooltip, no snack bar).
+ */
+@Component({
+  selector: 'bw-shell',
+  imports: [MatButtonModule, MatIconModule, MatToolbarModule, RouterLink, RouterLinkActive, RouterOutlet],
+  templateUrl: './shell.html',
+  styleUrl: './shell.scss',
+})
+export class Shell {
+  private readonly router = inject(Router);
+  protected readonly auth = inject(AuthStore);
+
+  protected readonly signingOut = signal(false);
+  protected readonly signOutFailure = signal<string | null>(null);
+
+  protected async signOut(): Promise<void> {
+    this.signingOut.set(true);
+    this.signOutFailure.set(null);
+    try {
+      await this.auth.signOut();
+      await this.router.navigateByUrl('/sign-in');
+    } catch (error) {
+      this.signOutFailure.set(`Not signed out: ${describeError(error)}`);
+    } finally {
+      this.signingOut.set(false);
+    }
+  }
+}
