@@ -64,3 +64,15 @@ export async function signInAs(role: Role): Promise<void> {
 export function settle(): Promise<void> {
   return new Promise((resolve) => setTimeout(resolve));
 }
+
+/** What a screen reader announces for a control: its aria-label, else its text without the (aria-hidden) icon ligature. */
+export function accessibleName(element: Element): string {
+  const text = element.cloneNode(true) as Element;
+  text.querySelectorAll('mat-icon').forEach((icon) => icon.remove());
+  return (element.getAttribute('aria-label') ?? text.textContent ?? '').trim();
+}
+
+/** The button with this accessible name anywhere in the document (dialogs and menus live in the overlay). */
+export function buttonNamed(name: string): HTMLButtonElement | undefined {
+  return [...document.querySelectorAll('button')].find((b) => accessibleName(b) === name);
+}

@@ -1,0 +1,92 @@
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { Role } from '../../../shared/api/contract';
+import { accessibleName, aJobDetail, buttonNamed, settle, signInAs } from '../../testing/fixtures';
+import { errorInterceptor } from '../core/error-interceptor';
+import { JobPage } from './job-page';
+
+describe('JobPage', () => {
+  let http: HttpTestingController;
+  let page: HTMLElement;
+
+  async function openAs(role: Role): Promise<void> {
+    TestBed.configureTestingModule({
+      providers: [
+        provideRouter([{ path: 'jobs/:jobId', component: JobPage }]),
+        provideHttpClient(withInterceptors([errorInterceptor])),
+        provideHttpClientTesting(),
+      ],
+    });
+    http = TestBed.inject(HttpTestingController);
+    await signInAs(role);
+    const harness = await RouterTestingHarness.create();
+    await harness.navigateByUrl('/jobs/11');
+    http.expectOne('/api/jobs/11').flush(aJobDetail());
+    await settle();
+    await harness.fixture.whenStable();
+    page = harness.routeNativeElement!;
+  }
+
+  const buttonNames = () => [...page.querySelectorAll('button, a')].map(accessibleName);
+  const statusSelects = () => page.querySelectorAll('mat-select').length;
+  const overlay = () => document.querySelector('.cdk-overlay-container') as HTMLElement;
+
+  afterEach(() => http.verify());
+
+  it('shows a viewer the job and its export, and no control to change anything', async () => {
+    await openAs('viewer');
+
+    expect(page.textContent).toContain('Larch Lane kitchen');
+    expect(page.textContent).toContain('600 × 720 × 560 mm');
+    expect(buttonNames()).toContain('Job document');
+    expect(buttonNames().filter((n) => /add panel|details|edit|delete/i.test(n))).toEqual([]);
+    expect(statusSelects()).toBe(0);
+    expect(page.textContent).toContain('Planned');
+  });
+
+  it('lets the bench mark panels and nothing more', async () => {
+    await openAs('bench');
+
+    expect(statusSelects()).toBe(2);
+    expect(buttonNames().filter((n) => /add panel|details|edit|delete/i.test(n))).toEqual([]);
+  });
+
+  it('gives a designer every panel control', async () => {
+    await openAs('designer');
+
+    expect(buttonNames()).toEqual(expect.arrayContaining(['Details', 'Add panel', 'Edit Left side', 'Delete Left side']));
+    expect(statusSelects()).toBe(2);
+  });
+
+  it('asks before deleting, naming the panel, and offers a reload when the panel changed meanwhile', async () => {
+    await openAs('designer');
+    buttonNamed('Delete Left side')!.click();
+    await settle();
+
+    expect(overlay().textContent).toContain('Delete panel “Left side”?');
+    buttonNamed('Delete panel')!.click();
+    await settle();
+    http
+      .expectOne({ method: 'DELETE', url: '/api/panels/101?version=4' })
+      .flush({ error: { code: 'stale-version', message: 'Changed.' } }, { status: 409, statusText: 'Conflict' });
+    await settle();
+
+    expect(overlay().textContent).toContain('Someone else changed this panel since you opened it.');
+    buttonNamed('Reload')!.click();
+    await settle();
+    http.expectOne({ method: 'GET', url: '/api/jobs/11' }).flush(aJobDetail());
+  });
+
+  it('sends nothing when the delete is cancelled', async () => {
+    await openAs('designer');
+    buttonNamed('Delete Door')!.click();
+    await settle();
+
+    buttonNamed('Cancel')!.click();
+    await settle();
+    http.expectNone({ method: 'DELETE' });
+  });
+});

@@ -1,0 +1,113 @@
+import { DatePipe } from '@angular/common';
+import { Component, effect, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { Title } from '@angular/platform-browser';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import { PanelRecord } from '../../../shared/api/contract';
+import { Can } from '../auth/can';
+import { describeError, isStaleVersion } from '../core/api-problem';
+import { ConfirmDialog } from '../ui/confirm-dialog';
+import { JobFormDialog, JobFormRequest } from './job-form-dialog';
+import { JobStore } from './job-store';
+import { jobDocumentUrl, PanelFields } from './jobs-api';
+import { PanelFormDialog, PanelFormRequest, PanelFormResult } from './panel-form-dialog';
+import { PanelStatusChange, PanelTable } from './panel-table';
+
+const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
+
+/** One job: its header, carcasses and panels, and the document export. */
+@Component({
+  selector: 'bw-job-page',
+  imports: [Can, DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
+  providers: [JobStore],
+  templateUrl: './job-page.html',
+  styleUrl: './job-page.scss',
+})
+export class JobPage {
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly title = inject(Title);
+  protected readonly store = inject(JobStore);
+
+  protected readonly documentUrl = jobDocumentUrl;
+
+  constructor() {
+    effect(() => {
+      const job = this.store.job();
+      if (job) this.title.setTitle(`${job.name} · Borewright`);
+    });
+  }
+
+  protected async editDetails(): Promise<void> {
+    const job = this.store.job();
+    if (!job) return;
+    const ref = this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
+      data: { title: 'Job details', saveLabel: 'Save', job, withNotes: true, save: (values) => this.store.updateJob(values) },
+      width: '520px',
+      maxWidth: 'calc(100vw - 32px)',
+    });
+    await firstValueFrom(ref.afterClosed());
+  }
+
+  protected async addPanel(): Promise<void> {
+    const added = await this.openPanelForm(undefined, (fields) => this.store.addPanel(fields));
+    if (added && added !== 'reload') this.snackBar.open(`Added “${added.name}”.`, undefined, { duration: 4000 });
+  }
+
+  protected async editPanel(panel: PanelRecord): Promise<void> {
+    const result = await this.openPanelForm(panel, (fields) => this.store.updatePanel(panel, fields));
+    if (result === 'reload') this.store.reload();
+  }
+
+  protected async deletePanel(panel: PanelRecord): Promise<void> {
+    const confirmed = await ConfirmDialog.ask(this.dialog, {
+      title: `Delete panel “${panel.name}”?`,
+      message: `“${panel.name}” and every placement and bore on it leave this job. This cannot be undone.`,
+      confirmLabel: 'Delete panel',
+    });
+    if (!confirmed) return;
+    try {
+      await this.store.deletePanel(panel);
+      this.snackBar.open(`Deleted “${panel.name}”.`, undefined, { duration: 4000 });
+    } catch (error) {
+      this.reportPanelFailure(error);
+    }
+  }
+
+  protected async changeStatus({ panel, status }: PanelStatusChange): Promise<void> {
+    try {
+      await this.store.setPanelStatus(panel, status);
+    } catch (error) {
+      this.reportPanelFailure(error);
+    }
+  }
+
+  private openPanelForm(
+    panel: PanelRecord | undefined,
+    save: (fields: PanelFields) => Promise<PanelRecord>,
+  ): Promise<PanelFormResult | undefined> {
+    const ref = this.dialog.open<PanelFormDialog, PanelFormRequest, PanelFormResult>(PanelFormDialog, {
+      data: { panel, carcasses: this.store.carcasses(), materials: this.store.materials(), save },
+      width: '600px',
+      maxWidth: 'calc(100vw - 32px)',
+    });
+    return firstValueFrom(ref.afterClosed());
+  }
+
+  /** A stale panel offers to reload the job; anything else is said and dismissed. */
+  private reportPanelFailure(error: unknown): void {
+    if (!isStaleVersion(error)) {
+      this.snackBar.open(describeError(error), 'Dismiss');
+      return;
+    }
+    this.snackBar
+      .open(STALE_MESSAGE, 'Reload')
+      .onAction()
+      .subscribe(() => this.store.reload());
+  }
+}
