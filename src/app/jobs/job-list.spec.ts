@@ -70,7 +70,7 @@ describe('JobList', () => {
     expect(page.querySelectorAll('[aria-label^="Actions for"]').length).toBe(3);
   });
 
-  it('creates a job after field-level checks, then opens it', async () => {
+  it('creates a job after field-level checks and offers to open it', async () => {
     await openAs('designer');
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
     buttonNamed('New job')!.click();
@@ -91,7 +91,12 @@ describe('JobList', () => {
     await settle();
 
     TestBed.tick();
-    http.expectOne('/api/jobs?archived=false').flush({ jobs });
+    http.expectOne('/api/jobs?archived=false').flush({ jobs: [...jobs, aJobSummary({ id: 14, name: 'Boot room bench' })] });
+    await fixture.whenStable();
+    expect(rowNames()).toContain('Boot room bench');
+    expect(navigate).not.toHaveBeenCalled();
+
+    buttonNamed('Open')!.click();
     expect(navigate).toHaveBeenCalledWith(['/jobs', 14]);
   });
 });

@@ -83,7 +83,7 @@ export class JobList {
       withNotes: true,
       save: ({ name, client, notes }) => this.store.createJob({ name, client: client ?? undefined, notes }),
     });
-    if (job) await this.router.navigate(['/jobs', job.id]);
+    if (job) this.offerToOpen(job, `Created “${job.name}”.`);
   }
 
   protected async renameJob(job: JobSummary): Promise<void> {
@@ -116,8 +116,13 @@ export class JobList {
     const job = await firstValueFrom(ref.afterClosed());
     if (!job) return;
     this.store.reload();
+    this.offerToOpen(job, `Imported “${job.name}”.`);
+  }
+
+  /** The new job appears in the list; the note beside it opens it directly. */
+  private offerToOpen(job: JobSummary, message: string): void {
     this.snackBar
-      .open(`Imported “${job.name}”.`, 'Open', { duration: 6000 })
+      .open(message, 'Open', { duration: 6000 })
       .onAction()
       .subscribe(() => void this.router.navigate(['/jobs', job.id]));
   }
