@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { carcass, displayName, material, panel, panelRole, panelStatus } from '../model/job-document';
+import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement } from '../model/job-document';
 
 /**
  * The HTTP API's bodies and answers, shared by the server (which validates what comes in) and the
@@ -125,3 +125,62 @@ export const apiError = z.object({
   }),
 });
 export type ApiError = z.output<typeof apiError>;
+
+/** A database id as it appears in a URL path or query: a positive whole number that fits an integer column. */
+export const dbId = z
+  .string()
+  .regex(/^[1-9][0-9]{0,9}$/, 'must be a positive whole number')
+  .transform(Number)
+  .refine((n) => n <= 2_147_483_647, 'is too large');
+
+export const jobParams = z.object({ jobId: dbId });
+export const panelParams = z.object({ panelId: dbId });
+
+export const jobListQuery = z.object({
+  archived: z
+    .enum(['true', 'false'], 'must be "true" or "false"')
+    .default('false')
+    .transform((v) => v === 'true'),
+});
+
+/** DELETE carries the version it saw in the query, as a DELETE has no body. */
+export const panelDeleteQuery = z.object({
+  version: z
+    .string('is required')
+    .regex(/^[1-9][0-9]{0,9}$/, 'must be a positive whole number')
+    .transform(Number),
+});
+
+export const activityQuery = z.object({ jobId: dbId.optional() });
+
+export const userAnswer = z.object({ user });
+export const jobList = z.object({ jobs: z.array(jobSummary) });
+
+/** Saving a panel's drilling from the editor: the whole lists replace the stored ones. */
+export const panelDrillingBody = z
+  .object({
+    version: z.number().int().min(1),
+    placements: z.array(placement).max(5000),
+    bores: z.array(bore).max(20000),
+  })
+  .superRefine((body, ctx) => {
+    for (const list of ['placements', 'bores'] as const) {
+      const seen = new Set<string>();
+      body[list].forEach((item, i) => {
+        if (seen.has(item.id)) ctx.addIssue({ code: 'custom', path: [list, i, 'id'], message: `duplicate id "${item.id}"` });
+        seen.add(item.id);
+      });
+    }
+  });
+
+export const activityEntry = z.object({
+  id: z.number().int(),
+  at: z.string(),
+  action: z.string(),
+  jobId: z.number().int().nullable(),
+  panelId: z.number().int().nullable(),
+  user: z.object({ id: z.number().int(), name: z.string() }).nullable(),
+  details: z.record(z.string(), z.unknown()),
+});
+export type ActivityEntry = z.output<typeof activityEntry>;
+export const activityList = z.object({ entries: z.array(activityEntry) });
