@@ -1,0 +1,83 @@
+import { z } from 'zod';
+import { formatIssues } from '../shared/model/validation-messages';
+
+const flag = z.enum(['true', 'false'], 'must be "true" or "false"').transform((v) => v === 'true');
+const whole = (min: number, max: number) =>
+  z
+    .string()
+    .regex(/^\d+$/, 'must be a whole number')
+    .transform(Number)
+    .refine((n) => n >= min && n <= max, `must be between ${min} and ${max}`);
+const url = (protocols: string[]) =>
+  z
+    .string()
+    .refine((v) => URL.canParse(v) && protocols.includes(new URL(v).protocol), `must be a URL starting with ${protocols.join(' or ')}//`);
+
+/** The environment the server reads; every variable is optional but SESSION_SECRET in production. */
+const environment = z
+  .object({
+    NODE_ENV: z.enum(['development', 'production', 'test'], 'must be development, production or test').default('development'),
+    PORT: whole(1, 65_535).default(3000),
+    /** Loopback by default: a shop server is opened to the network on purpose, not by accident. */
+    HOST: z.string().min(1).default('127.0.0.1'),
+    DATABASE_URL: url(['postgres:', 'postgresql:']).optional(),
+    DATA_DIR: z.string().min(1).default('./data'),
+    SESSION_SECRET: z.string().min(32, 'must be at least 32 characters long').optional(),
+    /** Mail arrives in a later issue; the address is validated now so a typo shows at start. */
+    SMTP_URL: url(['smtp:', 'smtps:']).optional(),
+    ALLOW_DEMO_IN_PRODUCTION: flag.default(false),
+    /** Express's "trust proxy": set it when a TLS proxy sits in front, so Secure cookies and client addresses work. */
+    TRUST_PROXY: z.string().min(1).optional(),
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
+    SESSION_IDLE_MINUTES: whole(1, 7 * 24 * 60).default(8 * 60),
+    SESSION_MAX_DAYS: whole(1, 365).default(7),
+  })
+  .superRefine((env, ctx) => {
+    if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['SESSION_SECRET'], message: 'is required when NODE_ENV=production' });
+    }
+  });
+
+export type Config = {
+  env: 'development' | 'production' | 'test';
+  port: number;
+  host: string;
+  databaseUrl?: string;
+  dataDir: string;
+  /** Absent in development: server/auth/session-secret.ts makes one and keeps it in the data folder. */
+  sessionSecret?: string;
+  smtpUrl?: string;
+  /** Demo accounts are created and may sign in: always outside production, in production only when allowed. */
+  demoAccounts: boolean;
+  trustProxy?: string;
+  logLevel: string;
+  session: { idleMs: number; absoluteMs: number };
+  signInLimits: { windowMs: number; perAccount: number; perAddress: number };
+};
+
+export class ConfigError extends Error {}
+
+/** Reads and checks the environment; throws a ConfigError naming every bad variable. */
+export function loadConfig(source: Record<string, string | undefined>): Config {
+  // An empty variable (`PORT=`) means "not set", as in most shells' .env habits.
+  const present = Object.fromEntries(Object.entries(source).filter(([, v]) => v !== undefined && v !== ''));
+  const parsed = environment.safeParse(present);
+  if (!parsed.success) {
+    throw new ConfigError(`The environment is not valid:\n  ${formatIssues(parsed.error).join('\n  ')}`);
+  }
+  const env = parsed.data;
+  return {
+    env: env.NODE_ENV,
+    port: env.PORT,
+    host: env.HOST,
+    databaseUrl: env.DATABASE_URL,
+    dataDir: env.DATA_DIR,
+    sessionSecret: env.SESSION_SECRET,
+    smtpUrl: env.SMTP_URL,
+    demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,
+    trustProxy: env.TRUST_PROXY,
+    logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
+    session: { idleMs: env.SESSION_IDLE_MINUTES * 60_000, absoluteMs: env.SESSION_MAX_DAYS * 86_400_000 },
+    signInLimits: { windowMs: 15 * 60_000, perAccount: 5, perAddress: 30 },
+  };
+}

@@ -1,0 +1,72 @@
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { PGlite } from '@electric-sql/pglite';
+import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
+import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
+import { drizzle as drizzlePostgres } from 'drizzle-orm/node-postgres';
+import { migrate as migratePostgres } from 'drizzle-orm/node-postgres/migrator';
+import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import pg from 'pg';
+import * as schema from './schema';
+
+/**
+ * The one place that knows which engine runs: PGlite in a data folder (or in memory, for tests),
+ * or a PostgreSQL server when DATABASE_URL is set. Everything else sees `Database`.
+ */
+export type Database = PgDatabase<PgQueryResultHKT, typeof schema>;
+
+export type DatabaseTarget =
+  /** Without a dataDir the database lives in memory; `template` is a data folder tarball to start from. */
+  | { engine: 'pglite'; dataDir?: string; template?: Uint8Array }
+  | { engine: 'postgres'; url: string };
+
+export interface DatabaseHandle {
+  readonly db: Database;
+  readonly engine: DatabaseTarget['engine'];
+  /** Applies the committed migrations of server/db/migrations that this database has not seen. */
+  migrate(): Promise<void>;
+  /** PGlite only: the data folder as a tarball, to start other in-memory databases from (test templates). */
+  dumpDataDir?(): Promise<Uint8Array>;
+  close(): Promise<void>;
+}
+
+const migrationsFolder = fileURLToPath(new URL('./migrations', import.meta.url));
+
+/**
+ * The target the configuration names: DATABASE_URL wins over the data folder. PGlite keeps its
+ * files in a folder of their own inside the data folder, beside the lock and the session secret.
+ */
+export function databaseTarget(config: { databaseUrl?: string; dataDir: string }): DatabaseTarget {
+  return config.databaseUrl
+    ? { engine: 'postgres', url: config.databaseUrl }
+    : { engine: 'pglite', dataDir: path.join(config.dataDir, 'pglite') };
+}
+
+/** Opens the database the target names. A PGlite data folder must be locked by the caller first (data-lock.ts). */
+export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHandle> {
+  if (target.engine === 'postgres') {
+    const pool = new pg.Pool({ connectionString: target.url, max: 10 });
+    const db = drizzlePostgres({ client: pool, schema });
+    return {
+      db,
+      engine: 'postgres',
+      migrate: () => migratePostgres(db, { migrationsFolder }),
+      close: () => pool.end(),
+    };
+  }
+  // PGlite creates its own folder but not the ones above it.
+  if (target.dataDir) mkdirSync(path.dirname(target.dataDir), { recursive: true });
+  const client = await PGlite.create({
+    dataDir: target.dataDir,
+    loadDataDir: target.template ? new Blob([target.template]) : undefined,
+  });
+  const db = drizzlePglite({ client, schema });
+  return {
+    db,
+    engine: 'pglite',
+    migrate: () => migratePglite(db, { migrationsFolder }),
+    dumpDataDir: async () => new Uint8Array(await (await client.dumpDataDir('none')).arrayBuffer()),
+    close: () => client.close(),
+  };
+}

@@ -1,0 +1,9 @@
+/** Every table of the database; drizzle-kit reads this file, the client gets it as its schema. */
+export { users } from './users';
+export { sessions } from './sessions';
+export { jobs } from './jobs';
+export { carcasses } from './carcasses';
+export { panels } from './panels';
+export { placements } from './placements';
+export { bores } from './bores';
+export { activity } from './activity';

@@ -1,0 +1,23 @@
+import { sql } from 'drizzle-orm';
+import { boolean, check, integer, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { role, type Role } from '../../../shared/api/contract';
+import { oneOf } from './check';
+
+export const users = pgTable(
+  'users',
+  {
+    id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    email: text('email').notNull(),
+    name: text('name').notNull(),
+    role: text('role').$type<Role>().notNull(),
+    passwordHash: text('password_hash').notNull(),
+    /** Demo accounts are refused in production unless the operator allows them. */
+    demo: boolean('demo').notNull().default(false),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    // Sign-in lowercases the address; the index makes "A@x" and "a@x" one account.
+    uniqueIndex('users_email_unique').on(sql`lower(${t.email})`),
+    check('users_role_check', oneOf(t.role, role.options)),
+  ],
+);
