@@ -1,13 +1,26 @@
 import { defineConfig } from 'vitest/config';
 
 // The root run covers shared/ and server/ and the node-side tests; the Angular specs under src/
-// run through `ng test`, which brings the Angular compiler.
+// run through `ng test`, which brings the Angular compiler. The include list is split in two
+// projects: the server's specs share database templates made once per run
+// (server/testing/global-setup.ts), and a run of shared/ specs alone need not wait for them.
+// tests/pg/ runs only against a real PostgreSQL server, through `npm run test:pg`.
 export default defineConfig({
   test: {
-    include: ['shared/**/*.spec.ts', 'server/**/*.spec.ts', 'tests/**/*.spec.ts'],
-    exclude: ['tests/e2e/**', 'node_modules/**'],
+    exclude: ['tests/e2e/**', 'tests/pg/**', 'node_modules/**'],
     environment: 'node',
     testTimeout: 30_000,
     hookTimeout: 60_000,
+    projects: [
+      { extends: true, test: { name: 'shared', include: ['shared/**/*.spec.ts'] } },
+      {
+        extends: true,
+        test: {
+          name: 'server',
+          include: ['server/**/*.spec.ts', 'tests/**/*.spec.ts'],
+          globalSetup: ['server/testing/global-setup.ts'],
+        },
+      },
+    ],
   },
 });

@@ -1,0 +1,43 @@
+import { Router } from 'express';
+import { activityRoutes } from './activity/activity.routes';
+import { authRoutes } from './auth/auth.routes';
+import { csrfProtection } from './auth/csrf';
+import { createAuthenticator } from './auth/passport';
+import { sessionMiddleware } from './auth/sessions';
+import { sessionTimeouts } from './auth/session-timeouts';
+import { AppError } from './http/app-error';
+import { healthRoutes } from './http/health.routes';
+import type { RouteContext } from './http/route-context';
+import { jobsRoutes } from './jobs/jobs.routes';
+import { panelsRoutes } from './panels/panels.routes';
+import type { AppDeps } from './app';
+
+/**
+ * Everything under /api: sessions, CSRF, sign-in, then each feature's routes, registered directly
+ * on this router (so the role matrix test can list them), and a JSON 404 for any other path.
+ */
+export function createApiRouter(deps: AppDeps): Router {
+  const { db, config } = deps;
+  const context: RouteContext = {
+    db,
+    config,
+    clock: deps.clock ?? (() => new Date()),
+    authenticator: createAuthenticator(db, config.demoAccounts),
+  };
+  const router = Router();
+  router.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  router.use(
+    sessionMiddleware(db, { secret: deps.sessionSecret, secure: config.env === 'production', idleMs: config.session.idleMs }),
+    // Before the timeouts: a request from a session that has just expired should answer 401, not 403.
+    csrfProtection,
+    sessionTimeouts(config.session, context.clock),
+    context.authenticator.initialize(),
+    context.authenticator.session(),
+  );
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes]) routes(router, context);
+  router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
+  return router;
+}

@@ -1,0 +1,35 @@
+import type { Router } from 'express';
+import { signInBody } from '../../shared/api/contract';
+import { AppError } from '../http/app-error';
+import { jsonBody } from '../http/body';
+import type { RouteContext } from '../http/route-context';
+import { issueCsrfToken, XSRF_COOKIE } from './csrf';
+import { authenticateLocal, logIn } from './passport';
+import { SESSION_COOKIE } from './sessions';
+import { signInLimits } from './sign-in-limits';
+
+/** Sign-in, sign-out and "who am I"; /auth/me also hands the client its XSRF token. */
+export function authRoutes(router: Router, { config, clock, authenticator }: RouteContext): void {
+  const cookie = { secure: config.env === 'production', maxAge: config.session.idleMs };
+
+  router.get('/auth/me', (req, res) => {
+    issueCsrfToken(req, res, cookie);
+    if (!req.user) throw new AppError(401, 'unauthenticated', 'Not signed in.');
+    res.json({ user: req.user });
+  });
+
+  router.post('/auth/sign-in', jsonBody, signInLimits(config.signInLimits), async (req, res) => {
+    req.body = signInBody.parse(req.body);
+    const user = await authenticateLocal(authenticator, req, res);
+    await logIn(req, user);
+    const now = clock().getTime();
+    Object.assign(req.session, { signedInAt: now, lastSeenAt: now });
+    issueCsrfToken(req, res, cookie);
+    res.json({ user });
+  });
+
+  router.post('/auth/sign-out', async (req, res) => {
+    await new Promise<void>((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
+    res.clearCookie(SESSION_COOKIE, { path: '/' }).clearCookie(XSRF_COOKIE, { path: '/' }).status(204).end();
+  });
+}

@@ -1,0 +1,154 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sessions } from '../db/schema';
+import { ApiClient, signedIn } from '../testing/api-client';
+import { createTestApp, type TestApp } from '../testing/test-app';
+import { SESSION_COOKIE } from './sessions';
+
+describe('sign-in and sessions', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ config: { signInLimits: { windowMs: 60_000, perAccount: 3, perAddress: 1000 } } });
+  });
+  afterAll(() => t.close());
+
+  it('answers 401 when signed out and hands out an XSRF token on the way', async () => {
+    const client = new ApiClient(t.app);
+    const res = await client.me();
+    expect(res.status).toBe(401);
+    expect(res.body).toEqual({ error: { code: 'unauthenticated', message: 'Not signed in.' } });
+    expect(client.xsrfToken).toMatch(/^[\w-]{40,}$/);
+  });
+
+  it('signs in whatever the case of the address, with a fresh session and a fresh token', async () => {
+    const client = new ApiClient(t.app);
+    await client.me();
+    const before = client.xsrfToken;
+    const res = await client.signIn('Designer@Greyfield.example');
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ user: { id: expect.any(Number), email: 'designer@greyfield.example', name: 'Tomas Ward', role: 'designer' } });
+    expect(client.xsrfToken).toBeDefined();
+    expect(client.xsrfToken).not.toBe(before);
+    const cookie = ([] as string[]).concat(res.headers['set-cookie']).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+    expect(cookie).toMatch(/HttpOnly/);
+    expect(cookie).toMatch(/SameSite=Lax/);
+    expect(cookie).not.toMatch(/Secure/);
+    expect((await client.me()).body.user.role).toBe('designer');
+  });
+
+  it('refuses a wrong password and an unknown address alike', async () => {
+    const client = new ApiClient(t.app);
+    const wrong = await client.signIn('viewer@greyfield.example', 'not-the-password');
+    const unknown = await client.signIn('nobody@greyfield.example', 'not-the-password');
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body).toEqual(unknown.body);
+    expect(wrong.body.error.code).toBe('bad-credentials');
+  });
+
+  it('names the field of a malformed sign-in', async () => {
+    const client = new ApiClient(t.app);
+    const res = await client.signIn('not an address', '');
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ email: 'must be an e-mail address', password: 'must not be empty' });
+  });
+
+  it('ends the session at sign-out', async () => {
+    const client = await signedIn(t.app, 'bench@greyfield.example');
+    const stored = await t.database.db.$count(sessions);
+    const res = await client.post('/api/auth/sign-out');
+    expect(res.status).toBe(204);
+    expect(await t.database.db.$count(sessions)).toBe(stored - 1);
+    expect((await client.me()).status).toBe(401);
+  });
+
+  it('refuses a mutating request without the XSRF header, or with another session\'s', async () => {
+    const client = await signedIn(t.app, 'designer@greyfield.example');
+    const other = await signedIn(t.app, 'designer@greyfield.example');
+    const bare = await client.agent.post('/api/jobs').send({ name: 'Sneaky' });
+    expect(bare.status).toBe(403);
+    expect(bare.body.error.code).toBe('csrf');
+    const crossed = await client.agent.post('/api/jobs').set('X-XSRF-TOKEN', other.xsrfToken!).send({ name: 'Sneaky' });
+    expect(crossed.status).toBe(403);
+    expect((await client.get('/api/jobs').expect(200)).body.jobs.map((j: { name: string }) => j.name)).not.toContain('Sneaky');
+  });
+
+  it('limits failed sign-ins per account with 429', async () => {
+    const client = new ApiClient(t.app);
+    for (let i = 0; i < 3; i++) expect((await client.signIn('owner@greyfield.example', 'wrong-password')).status).toBe(401);
+    const limited = await client.signIn('owner@greyfield.example', 'wrong-password');
+    expect(limited.status).toBe(429);
+    expect(limited.body.error.code).toBe('too-many-attempts');
+    // The right password does not get through either while the account is limited.
+    expect((await client.signIn('owner@greyfield.example')).status).toBe(429);
+    // Other accounts from the same address still may.
+    expect((await client.signIn('viewer@greyfield.example')).status).toBe(200);
+  });
+});
+
+describe('sign-in limit per address', () => {
+  it('answers 429 once one address has failed too often, whichever accounts it tried', async () => {
+    const t = await createTestApp({ config: { signInLimits: { windowMs: 60_000, perAccount: 100, perAddress: 2 } } });
+    const client = new ApiClient(t.app);
+    expect((await client.signIn('a@greyfield.example', 'wrong-password')).status).toBe(401);
+    expect((await client.signIn('b@greyfield.example', 'wrong-password')).status).toBe(401);
+    expect((await client.signIn('c@greyfield.example', 'wrong-password')).status).toBe(429);
+    await t.close();
+  });
+});
+
+describe('session timeouts', () => {
+  const idleMs = 60 * 60_000;
+  const absoluteMs = 5 * idleMs;
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp({ config: { session: { idleMs, absoluteMs } } });
+  });
+  afterAll(() => t.close());
+
+  it('ends a session idle for longer than the idle timeout', async () => {
+    const client = await signedIn(t.app, 'viewer@greyfield.example');
+    t.advance(idleMs - 1000);
+    expect((await client.get('/api/jobs')).status).toBe(200);
+    t.advance(idleMs - 1000);
+    expect((await client.get('/api/jobs')).status).toBe(200);
+    t.advance(idleMs + 1000);
+    expect((await client.get('/api/jobs')).status).toBe(401);
+  });
+
+  it('ends a busy session once the absolute timeout has passed since sign-in', async () => {
+    const client = await signedIn(t.app, 'viewer@greyfield.example');
+    for (let elapsed = 0; elapsed < absoluteMs - idleMs; elapsed += idleMs / 2) {
+      t.advance(idleMs / 2);
+      expect((await client.get('/api/jobs')).status).toBe(200);
+    }
+    t.advance(idleMs);
+    expect((await client.get('/api/jobs')).status).toBe(401);
+  });
+
+  it('answers a mutating request from an expired session with 401, not a CSRF refusal', async () => {
+    const client = await signedIn(t.app, 'designer@greyfield.example');
+    t.advance(idleMs + 1000);
+    const res = await client.post('/api/jobs').send({ name: 'Late' });
+    expect(res.status).toBe(401);
+  });
+});
+
+describe('production settings', () => {
+  it('refuse demo accounts unless ALLOW_DEMO_IN_PRODUCTION is set (config.demoAccounts, see config.spec.ts)', async () => {
+    const t = await createTestApp({ config: { demoAccounts: false } });
+    const client = new ApiClient(t.app);
+    const res = await client.signIn('owner@greyfield.example');
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('demo-accounts-off');
+    await t.close();
+  });
+
+  it('mark both cookies Secure, behind a TLS proxy', async () => {
+    const t = await createTestApp({ config: { env: 'production', demoAccounts: true, trustProxy: 'true' } });
+    const res = await new ApiClient(t.app).agent.get('/api/auth/me').set('X-Forwarded-Proto', 'https');
+    const cookies = ([] as string[]).concat(res.headers['set-cookie']);
+    expect(cookies.map((c) => c.split('=')[0]).sort()).toEqual(['XSRF-TOKEN', SESSION_COOKIE]);
+    for (const cookie of cookies) expect(cookie).toMatch(/; Secure/);
+    await t.close();
+  });
+});

@@ -1,0 +1,28 @@
+import { count, eq, sql } from 'drizzle-orm';
+import type { Database } from '../db/client';
+import { users } from '../db/schema';
+
+const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, demo: users.demo };
+
+/** The account with this address (any case), with its password hash. */
+export async function findAccountByEmail(db: Database, email: string) {
+  const [row] = await db
+    .select({ ...accountColumns, passwordHash: users.passwordHash })
+    .from(users)
+    .where(eq(sql`lower(${users.email})`, email.toLowerCase()));
+  return row;
+}
+
+export async function findAccount(db: Database, id: number) {
+  const [row] = await db.select(accountColumns).from(users).where(eq(users.id, id));
+  return row;
+}
+
+export async function countUsers(db: Database): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(users);
+  return row.n;
+}
+
+export async function insertUsers(db: Database, rows: (typeof users.$inferInsert)[]) {
+  return db.insert(users).values(rows).returning(accountColumns);
+}

@@ -1,0 +1,43 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sql } from 'drizzle-orm';
+import { createJob, jobAsDocument, listJobs } from '../jobs/jobs.service';
+import { openTestDatabase } from '../testing/test-database';
+import type { DatabaseHandle } from './client';
+import { jobs, users } from './schema';
+import { dumpTables, restoreTables, type Backup } from './table-dump';
+
+describe('backup and restore', () => {
+  let source: DatabaseHandle;
+  let target: DatabaseHandle;
+  let backup: Backup;
+  beforeAll(async () => {
+    [source, target] = await Promise.all([openTestDatabase('demo'), openTestDatabase('empty')]);
+    const [owner] = await source.db.select().from(users).limit(1);
+    await createJob(source.db, { ...owner }, { name: 'Job with "quotes" and ünïcode <b>', client: 'O\'Brien' });
+    // Through JSON and back, as the file on disk would be.
+    backup = JSON.parse(JSON.stringify(await dumpTables(source.db, new Date('2030-01-02T03:04:05Z'))));
+  });
+  afterAll(() => Promise.all([source.close(), target.close()]));
+
+  it('restores into a fresh database the same rows, jobs and documents', async () => {
+    await restoreTables(target.db, backup);
+    expect(await dumpTables(target.db, new Date('2030-01-02T03:04:05Z'))).toEqual(backup);
+    const jobList = await listJobs(source.db, false);
+    expect(await listJobs(target.db, false)).toEqual(jobList);
+    for (const { id } of jobList) expect(await jobAsDocument(target.db, id)).toEqual(await jobAsDocument(source.db, id));
+    expect(backup.tables.bores.length).toBeGreaterThan(500);
+  });
+
+  it('continues every id after the restored ones', async () => {
+    const [{ max }] = await target.db.select({ max: sql<number>`max(${jobs.id})` }).from(jobs);
+    const [owner] = await target.db.select().from(users).limit(1);
+    const created = await createJob(target.db, owner, { name: 'After the restore' });
+    expect(created.id).toBe(max + 1);
+  });
+
+  it('refuses a database that already has rows, and a file of another kind', async () => {
+    await expect(restoreTables(target.db, backup)).rejects.toThrow('the database is not empty');
+    await expect(restoreTables(target.db, { ...backup, format: 'other' } as unknown as Backup)).rejects.toThrow('not a Borewright backup');
+    await expect(restoreTables(target.db, { ...backup, schema: '9999_future' })).rejects.toThrow('schema 9999_future');
+  });
+});

@@ -1,0 +1,32 @@
+import { parseJobDocument } from '../../shared/model/parse-job';
+import type { JobDocumentInput } from '../../shared/model/job-document';
+import { countUsers, insertUsers } from '../auth/users.repository';
+import { hashPassword } from '../auth/passwords';
+import type { Database } from '../db/client';
+import { countJobs } from '../jobs/jobs.repository';
+import { importJob } from '../jobs/jobs.service';
+import { clinicStorageWall } from './clinic-storage-wall';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from './greyfield-people';
+import { larchLaneKitchen } from './larch-lane-kitchen';
+import { loftStudyBookcase } from './loft-study-bookcase';
+
+export const DEMO_JOBS: readonly JobDocumentInput[] = [larchLaneKitchen, loftStudyBookcase, clinicStorageWall];
+
+/**
+ * Fills an empty database with the Greyfield Joinery demo shop: its four people and three jobs,
+ * stored through the same import as an uploaded file. A database with any user or job is left alone.
+ * Returns whether it seeded.
+ */
+export async function seedDemoShop(db: Database): Promise<boolean> {
+  if ((await countUsers(db)) > 0 || (await countJobs(db)) > 0) return false;
+  // One hash for all four: the password is published in the README, so a shared salt gives nothing away.
+  const hash = await hashPassword(DEMO_PASSWORD);
+  const people = await insertUsers(db, DEMO_PEOPLE.map((p) => ({ ...p, passwordHash: hash, demo: true })));
+  const owner = people.find((p) => p.role === 'admin') ?? people[0];
+  for (const input of DEMO_JOBS) {
+    const parsed = parseJobDocument(input);
+    if (!parsed.ok) throw new Error(`demo job "${input.name}" is not a valid document:\n${parsed.errors.join('\n')}`);
+    await importJob(db, { id: owner.id, email: owner.email, name: owner.name, role: owner.role }, parsed.value);
+  }
+  return true;
+}

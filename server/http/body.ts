@@ -1,0 +1,44 @@
+import express, { type RequestHandler } from 'express';
+import multer from 'multer';
+import { AppError } from './app-error';
+import { findNulText, NUL_MESSAGE } from './nul-text';
+
+/** JSON bodies: large enough for one panel's 20,000 bores, small enough to refuse abuse early. */
+export const JSON_LIMIT = '2mb';
+/** Job documents uploaded for import. */
+export const UPLOAD_LIMIT_BYTES = 5 * 1024 * 1024;
+
+/** 415 when the request carries a body of another type; a request without a body passes (req.is gives null). */
+function wrongType(req: express.Request, type: string): AppError | undefined {
+  return req.is(type) === false ? new AppError(415, 'unsupported-media-type', `Send the request body as ${type}.`) : undefined;
+}
+
+const parseJson = express.json({ limit: JSON_LIMIT });
+
+/** For routes that take a JSON body. */
+export const jsonBody: RequestHandler = (req, res, next) => {
+  const refused = wrongType(req, 'application/json');
+  if (refused) return next(refused);
+  parseJson(req, res, (err?: unknown) => {
+    if (err) return next(err);
+    const nul = findNulText(req.body);
+    next(nul === undefined ? undefined : new AppError(400, 'invalid-input', `${nul}: ${NUL_MESSAGE}`, { fields: { [nul]: NUL_MESSAGE } }));
+  });
+};
+
+/**
+ * For routes that take one uploaded file in the field `name`, kept in memory. Busboy's own errors
+ * (a torn multipart body) are the client's, so they answer 400 rather than 500.
+ */
+export function fileUpload(name: string): RequestHandler {
+  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_LIMIT_BYTES, files: 1 } }).single(name);
+  return (req, res, next) => {
+    const refused = wrongType(req, 'multipart/form-data');
+    if (refused) return next(refused);
+    single(req, res, (err: unknown) => {
+      if (!err || err instanceof multer.MulterError) return next(err);
+      const message = (err as Error).message;
+      next(new AppError(400, 'invalid-upload', `${name}: ${message}`, { fields: { [name]: message } }));
+    });
+  };
+}

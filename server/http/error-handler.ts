@@ -1,0 +1,56 @@
+import type { ErrorRequestHandler } from 'express';
+import multer from 'multer';
+import { ZodError } from 'zod';
+import type { ApiError } from '../../shared/api/contract';
+import { formatPath } from '../../shared/model/validation-messages';
+import { AppError } from './app-error';
+
+/** Body parser errors carry a `type`; these are the ones a client can cause. */
+const bodyErrors: Record<string, { status: number; code: string; message: string }> = {
+  'entity.parse.failed': { status: 400, code: 'malformed-json', message: 'The request body is not valid JSON.' },
+  'entity.too.large': { status: 413, code: 'too-large', message: 'The request body is too large.' },
+  'encoding.unsupported': { status: 415, code: 'unsupported-media-type', message: 'The request body encoding is not supported.' },
+  'charset.unsupported': { status: 415, code: 'unsupported-media-type', message: 'The request body charset is not supported; send UTF-8.' },
+  'request.aborted': { status: 400, code: 'aborted', message: 'The request was aborted before its body arrived.' },
+};
+
+function toAppError(err: unknown): AppError | undefined {
+  if (err instanceof AppError) return err;
+  if (err instanceof ZodError) {
+    const fields: Record<string, string> = {};
+    for (const issue of err.issues) fields[formatPath(issue.path) || '(body)'] ??= issue.message;
+    const summary = Object.entries(fields).map(([path, message]) => `${path}: ${message}`);
+    return new AppError(400, 'invalid-input', summary.join('; '), { fields });
+  }
+  if (err instanceof multer.MulterError) {
+    const field = err.field ?? 'file';
+    return err.code === 'LIMIT_FILE_SIZE'
+      ? new AppError(413, 'too-large', `${field}: the file is too large.`, { fields: { [field]: 'is too large' } })
+      : new AppError(400, 'invalid-upload', `${field}: ${err.message}`, { fields: { [field]: err.message } });
+  }
+  // Drizzle wraps the driver's error; its SQLSTATE is in `cause.code`. A unique key taken between our
+  // check and our insert is a race with another user, not a server fault.
+  if ((err as { cause?: { code?: unknown } } | null)?.cause?.code === '23505') {
+    return new AppError(409, 'conflict', 'Someone made a conflicting change at the same moment. Reload and try again.');
+  }
+  const type = (err as { type?: unknown } | null)?.type;
+  if (typeof type === 'string' && type in bodyErrors) {
+    const { status, code, message } = bodyErrors[type];
+    return new AppError(status, code, message);
+  }
+  return undefined;
+}
+
+/**
+ * The one error handler, registered last: a client's mistake answers with its status and the
+ * fields it concerns; anything else is logged and answers 500 without a stack.
+ */
+export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
+  if (res.headersSent) return next(err);
+  const known = toAppError(err);
+  const body: ApiError = known
+    ? { error: { code: known.code, message: known.message, ...known.extra } }
+    : { error: { code: 'internal', message: 'Something went wrong on the server. The error is logged; please try again.' } };
+  if (!known) req.log.error({ err }, 'request failed');
+  res.status(known?.status ?? 500).json(body);
+};

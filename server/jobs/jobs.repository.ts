@@ -1,0 +1,93 @@
+import { asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
+import type { Database } from '../db/client';
+import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
+import { bores, carcasses, jobs, panels, placements } from '../db/schema';
+import { insertDrilling, insertPanel } from '../panels/panels.repository';
+
+const summaryColumns = (db: Database) => ({
+  id: jobs.id,
+  name: jobs.name,
+  client: jobs.client,
+  notes: jobs.notes,
+  archived: jobs.archived,
+  carcassCount: db.$count(carcasses, eq(carcasses.jobId, jobs.id)),
+  panelCount: db.$count(panels, eq(panels.jobId, jobs.id)),
+  updatedAt: jobs.updatedAt,
+});
+
+/** Jobs, the most recently changed first. */
+export function listJobSummaries(db: Database, archived: boolean) {
+  return db.select(summaryColumns(db)).from(jobs).where(eq(jobs.archived, archived)).orderBy(desc(jobs.updatedAt), desc(jobs.id));
+}
+
+export async function findJobSummary(db: Database, id: number) {
+  const [row] = await db.select(summaryColumns(db)).from(jobs).where(eq(jobs.id, id));
+  return row;
+}
+
+export async function countJobs(db: Database): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(jobs);
+  return row.n;
+}
+
+export async function findJob(db: Database, id: number) {
+  const [row] = await db.select().from(jobs).where(eq(jobs.id, id));
+  return row;
+}
+
+/** Everything stored for one job, children in stored order; undefined when there is no such job. */
+export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
+  const job = await findJob(db, id);
+  if (!job) return undefined;
+  const panelIds = db.select({ id: panels.id }).from(panels).where(eq(panels.jobId, id));
+  const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
+    db.select().from(carcasses).where(eq(carcasses.jobId, id)).orderBy(asc(carcasses.id)),
+    db.select().from(panels).where(eq(panels.jobId, id)).orderBy(asc(panels.id)),
+    db.select().from(placements).where(inArray(placements.panelId, panelIds)).orderBy(asc(placements.id)),
+    db.select().from(bores).where(inArray(bores.panelId, panelIds)).orderBy(asc(bores.id)),
+  ]);
+  return { job, carcasses: carcassRows, panels: panelRows, placements: placementRows, bores: boreRows };
+}
+
+/** Stores a whole job; call inside a transaction so a failure leaves nothing behind. Returns the job's id. */
+export async function insertJobDraft(tx: Database, draft: JobDocumentDraft): Promise<number> {
+  const [{ id: jobId }] = await tx.insert(jobs).values(draft.job).returning({ id: jobs.id });
+  const carcassIds = new Map<string, number>();
+  if (draft.carcasses.length > 0) {
+    const rows = await tx
+      .insert(carcasses)
+      .values(draft.carcasses.map((c) => ({ ...c, jobId })))
+      .returning({ id: carcasses.id, key: carcasses.key });
+    for (const row of rows) carcassIds.set(row.key, row.id);
+  }
+  for (const p of draft.panels) {
+    const carcassId = p.carcassKey === null ? null : (carcassIds.get(p.carcassKey) ?? null);
+    const panelId = await insertPanel(tx, { ...p.panel, jobId, carcassId });
+    await insertDrilling(tx, panelId, p.placements, p.bores);
+  }
+  return jobId;
+}
+
+export async function updateJob(db: Database, id: number, changes: Partial<Pick<typeof jobs.$inferInsert, 'name' | 'client' | 'notes' | 'archived'>>) {
+  const [row] = await db
+    .update(jobs)
+    .set({ ...changes, updatedAt: sql`now()` })
+    .where(eq(jobs.id, id))
+    .returning({ id: jobs.id });
+  return row;
+}
+
+/** Marks the job changed, for the jobs list's order. */
+export async function touchJob(db: Database, id: number): Promise<void> {
+  await db.update(jobs).set({ updatedAt: sql`now()` }).where(eq(jobs.id, id));
+}
+
+export async function carcassKeys(db: Database, jobId: number): Promise<Map<string, number>> {
+  const rows = await db.select({ id: carcasses.id, key: carcasses.key }).from(carcasses).where(eq(carcasses.jobId, jobId));
+  return new Map(rows.map((r) => [r.key, r.id]));
+}
+
+export async function insertCarcass(db: Database, jobId: number, draft: CarcassDraft) {
+  const [row] = await db.insert(carcasses).values({ ...draft, jobId }).returning();
+  return row;
+}

@@ -1,0 +1,48 @@
+import type { Router } from 'express';
+import { carcassCreateBody, jobCreateBody, jobListQuery, jobParams, jobUpdateBody } from '../../shared/api/contract';
+import { requirePermission } from '../auth/require-permission';
+import { invalidField } from '../http/app-error';
+import { fileUpload, jsonBody } from '../http/body';
+import type { RouteContext } from '../http/route-context';
+import { documentFileName } from './document-file-name';
+import * as jobs from './jobs.service';
+
+export function jobsRoutes(router: Router, { db }: RouteContext): void {
+  router.get('/jobs', requirePermission('readJobs'), async (req, res) => {
+    const { archived } = jobListQuery.parse(req.query);
+    res.json({ jobs: await jobs.listJobs(db, archived) });
+  });
+
+  router.post('/jobs', requirePermission('editJobs'), jsonBody, async (req, res) => {
+    res.status(201).json(await jobs.createJob(db, req.user!, jobCreateBody.parse(req.body)));
+  });
+
+  router.post('/jobs/import', requirePermission('editJobs'), fileUpload('file'), async (req, res) => {
+    if (!req.file) throw invalidField('file', 'is required: send the job document as the multipart field "file"');
+    const doc = jobs.readJobFile(req.file.buffer);
+    // The name is the client's to choose: keep it printable before it goes into the activity log.
+    const fileName = req.file.originalname.replace(/[\u0000-\u001f\u007f]/g, '').slice(0, 200);
+    res.status(201).json(await jobs.importJob(db, req.user!, doc, fileName));
+  });
+
+  router.get('/jobs/:jobId', requirePermission('readJobs'), async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    res.json(await jobs.jobDetail(db, jobId));
+  });
+
+  router.patch('/jobs/:jobId', requirePermission('editJobs'), jsonBody, async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    res.json(await jobs.updateJob(db, req.user!, jobId, jobUpdateBody.parse(req.body)));
+  });
+
+  router.get('/jobs/:jobId/document', requirePermission('readJobs'), async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    const doc = await jobs.jobAsDocument(db, jobId);
+    res.attachment(documentFileName(doc.name)).type('application/json').send(`${JSON.stringify(doc, null, 2)}\n`);
+  });
+
+  router.post('/jobs/:jobId/carcasses', requirePermission('editJobs'), jsonBody, async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    res.status(201).json(await jobs.addCarcass(db, req.user!, jobId, carcassCreateBody.parse(req.body)));
+  });
+}

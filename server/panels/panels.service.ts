@@ -1,0 +1,145 @@
+import type { z } from 'zod';
+import type { PanelRecord, User, panelDrillingBody, panelFieldsBody, panelStatusBody, panelUpdateBody } from '../../shared/api/contract';
+import { recordActivity } from '../activity/activity.repository';
+import type { Database } from '../db/client';
+import { boreDraft, placementDraft, type PanelDraft, type PanelRow } from '../db/job-mapping';
+import { AppError, invalidField, notFound } from '../http/app-error';
+import { nextDocumentId } from '../jobs/document-ids';
+import { carcassKeys, findJob, touchJob } from '../jobs/jobs.repository';
+import * as repo from './panels.repository';
+
+type BoardFields = Partial<z.output<typeof panelFieldsBody>>;
+type PanelChanges = Partial<PanelDraft & { carcassId: number | null }>;
+
+function stale(current?: number): AppError {
+  const now = current === undefined ? '' : ` (it is now at version ${current})`;
+  return new AppError(
+    409,
+    'stale-version',
+    `Someone else changed this panel since you loaded it${now}. Reload it to see their change, then make yours again.`,
+    { fields: { version: 'is not the current version' } },
+  );
+}
+
+/** Checks board fields against the job (its materials and carcasses) and turns them into column changes. */
+async function boardChanges(tx: Database, jobId: number, fields: BoardFields): Promise<PanelChanges> {
+  const job = await findJob(tx, jobId);
+  if (!job) throw notFound(`Job ${jobId}`);
+  const { carcass, ...columns } = fields;
+  if (columns.material !== undefined && !job.materials.some((m) => m.id === columns.material)) {
+    throw invalidField('material', `this job has no material with id "${columns.material}"`);
+  }
+  if (carcass === undefined) return columns;
+  if (carcass === null) return { ...columns, carcassId: null };
+  const carcassId = (await carcassKeys(tx, jobId)).get(carcass);
+  if (carcassId === undefined) throw invalidField('carcass', `this job has no carcass with id "${carcass}"`);
+  return { ...columns, carcassId };
+}
+
+async function recordOf(tx: Database, panelId: number): Promise<PanelRecord> {
+  const record = await repo.loadPanelRecord(tx, panelId);
+  if (!record) throw notFound(`Panel ${panelId}`);
+  return record;
+}
+
+/** Adds a panel with a fresh id made from its role (`door-3`). */
+export async function addPanel(db: Database, actor: User, jobId: number, body: z.output<typeof panelFieldsBody>): Promise<PanelRecord> {
+  return db.transaction(async (tx) => {
+    const changes = await boardChanges(tx, jobId, body);
+    const taken = new Set((await repo.jobPanelRefs(tx, jobId)).map((p) => p.key));
+    const key = nextDocumentId(body.role, taken);
+    const panelId = await repo.insertPanel(tx, {
+      key,
+      name: body.name,
+      role: body.role,
+      width: body.width,
+      height: body.height,
+      thickness: body.thickness,
+      material: body.material,
+      status: 'planned',
+      hang: null,
+      handleMass: null,
+      jobId,
+      carcassId: changes.carcassId ?? null,
+    });
+    await touchJob(tx, jobId);
+    await recordActivity(tx, { userId: actor.id, jobId, panelId, action: 'panel.created', details: { panel: key, name: body.name } });
+    return recordOf(tx, panelId);
+  });
+}
+
+/**
+ * Every change to one panel tells the same story: the panel exists, the client saw its current
+ * version, the change applies and bumps the version, the job is touched and the change logged,
+ * all in one transaction.
+ */
+async function changePanel(
+  db: Database,
+  actor: User,
+  panelId: number,
+  version: number,
+  action: string,
+  apply: (tx: Database, current: PanelRow) => Promise<{ changes?: PanelChanges; details: Record<string, unknown> }>,
+): Promise<PanelRecord> {
+  return db.transaction(async (tx) => {
+    const current = await repo.findPanel(tx, panelId);
+    if (!current) throw notFound(`Panel ${panelId}`);
+    if (current.version !== version) throw stale(current.version);
+    const { changes = {}, details } = await apply(tx, current);
+    if (!(await repo.updatePanelAtVersion(tx, panelId, version, changes))) throw stale();
+    await touchJob(tx, current.jobId);
+    await recordActivity(tx, { userId: actor.id, jobId: current.jobId, panelId, action, details: { panel: current.key, ...details } });
+    return recordOf(tx, panelId);
+  });
+}
+
+export function updatePanel(db: Database, actor: User, panelId: number, body: z.output<typeof panelUpdateBody>): Promise<PanelRecord> {
+  const { version, ...fields } = body;
+  const named = Object.keys(fields).filter((k) => fields[k as keyof typeof fields] !== undefined);
+  if (named.length === 0) {
+    throw new AppError(400, 'invalid-input', 'Nothing to change: send at least one field besides version.', {
+      fields: { '(body)': 'names no field to change' },
+    });
+  }
+  return changePanel(db, actor, panelId, version, 'panel.updated', async (tx, current) => ({
+    changes: await boardChanges(tx, current.jobId, fields),
+    details: { fields: named },
+  }));
+}
+
+/** Replaces the panel's placements and bores (the editor saves the whole panel at once). */
+export function saveDrilling(db: Database, actor: User, panelId: number, body: z.output<typeof panelDrillingBody>): Promise<PanelRecord> {
+  return changePanel(db, actor, panelId, body.version, 'panel.drilling-saved', async (tx) => {
+    await repo.replaceDrilling(tx, panelId, body.placements.map(placementDraft), body.bores.map(boreDraft));
+    return { details: { placements: body.placements.length, bores: body.bores.length } };
+  });
+}
+
+export function setPanelStatus(db: Database, actor: User, panelId: number, body: z.output<typeof panelStatusBody>): Promise<PanelRecord> {
+  return changePanel(db, actor, panelId, body.version, 'panel.status-changed', async (_tx, current) => ({
+    changes: { status: body.status },
+    details: { from: current.status, to: body.status },
+  }));
+}
+
+/** Deletes a panel at the version the client saw; refused while a door or flap hangs on it. */
+export async function deletePanel(db: Database, actor: User, panelId: number, version: number): Promise<void> {
+  await db.transaction(async (tx) => {
+    const current = await repo.findPanel(tx, panelId);
+    if (!current) throw notFound(`Panel ${panelId}`);
+    if (current.version !== version) throw stale(current.version);
+    const hangers = (await repo.jobPanelRefs(tx, current.jobId)).filter((p) => p.hang?.on.includes(current.key));
+    if (hangers.length > 0) {
+      const names = hangers.map((p) => `"${p.name}"`).join(', ');
+      throw new AppError(409, 'in-use', `${names} ${hangers.length === 1 ? 'hangs' : 'hang'} on this panel: re-hang or delete ${hangers.length === 1 ? 'it' : 'them'} first.`);
+    }
+    if (!(await repo.deletePanelAtVersion(tx, panelId, version))) throw stale();
+    await touchJob(tx, current.jobId);
+    await recordActivity(tx, {
+      userId: actor.id,
+      jobId: current.jobId,
+      action: 'panel.deleted',
+      details: { panel: current.key, name: current.name, dbId: panelId },
+    });
+  });
+}
