@@ -138,8 +138,9 @@ export async function deletePanel(db: Database, actor: User, panelId: number, ve
     await recordActivity(tx, {
       userId: actor.id,
       jobId: current.jobId,
+      panelId,
       action: 'panel.deleted',
-      details: { panel: current.key, name: current.name, dbId: panelId },
+      details: { panel: current.key, name: current.name },
     });
   });
 }

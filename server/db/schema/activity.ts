@@ -1,9 +1,11 @@
 import { index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 import { jobs } from './jobs';
-import { panels } from './panels';
 import { users } from './users';
 
-/** Who did what, when, to which job and panel. Entries outlive the panels and people they name. */
+/**
+ * Who did what, when, to which job and panel. An entry outlives the panel it names: panel_id has
+ * no foreign key, so the history of a deleted panel keeps its id (ids are never reused).
+ */
 export const activity = pgTable(
   'activity',
   {
@@ -11,7 +13,7 @@ export const activity = pgTable(
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     userId: integer('user_id').references(() => users.id, { onDelete: 'set null' }),
     jobId: integer('job_id').references(() => jobs.id, { onDelete: 'cascade' }),
-    panelId: integer('panel_id').references(() => panels.id, { onDelete: 'set null' }),
+    panelId: integer('panel_id'),
     action: text('action').notNull(),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
   },

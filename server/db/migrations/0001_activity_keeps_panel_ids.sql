@@ -1,0 +1,1 @@
+ALTER TABLE "activity" DROP CONSTRAINT "activity_panel_id_panels_id_fk";
