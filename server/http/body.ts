@@ -8,9 +8,10 @@ export const JSON_LIMIT = '2mb';
 /** Job documents uploaded for import. */
 export const UPLOAD_LIMIT_BYTES = 5 * 1024 * 1024;
 
-/** 415 when the request carries a body of another type; a request without a body passes (req.is gives null). */
+/** 415 when the request carries a body of another type. An empty body passes: validation then says what is missing. */
 function wrongType(req: express.Request, type: string): AppError | undefined {
-  return req.is(type) === false ? new AppError(415, 'unsupported-media-type', `Send the request body as ${type}.`) : undefined;
+  const empty = req.headers['content-length'] === '0';
+  return !empty && req.is(type) === false ? new AppError(415, 'unsupported-media-type', `Send the request body as ${type}.`) : undefined;
 }
 
 const parseJson = express.json({ limit: JSON_LIMIT });
