@@ -1,6 +1,6 @@
 import type { PanelFaceBore } from '../layout/bore';
 import type { Finding } from './finding';
-import { report, type PanelSite } from './panel-site';
+import { collect, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, mm } from './wording';
 
 function finding(site: PanelSite, bore: PanelFaceBore): Finding | null {
@@ -23,5 +23,5 @@ function finding(site: PanelSite, bore: PanelFaceBore): Finding | null {
  * least 3 mm, so a 13 mm cup needs a 16 mm door). Bores meant to go through are left alone.
  */
 export function checkBoreThrough(site: PanelSite): Finding[] {
-  return site.faceBores.map((b) => finding(site, b)).filter((f): f is Finding => f !== null);
+  return collect(site.faceBores, (b) => finding(site, b));
 }

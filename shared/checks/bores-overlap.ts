@@ -2,7 +2,7 @@ import { isSameHole, type PanelEdgeBore, type PanelFaceBore } from '../layout/bo
 import { pairKey } from '../layout/panel-layout';
 import { nearestClearHole } from './clear-hole';
 import type { Finding } from './finding';
-import { forEachNearPair, report, type PanelSite } from './panel-site';
+import { report, type PanelSite } from './panel-site';
 import { boreName, capitalize, formatNumber, mm } from './wording';
 
 type AnyBore = PanelFaceBore | PanelEdgeBore;
@@ -54,11 +54,11 @@ function edgePairs(site: PanelSite, visit: (a: PanelEdgeBore, b: PanelEdgeBore, 
 export function checkBoresOverlap(site: PanelSite): Finding[] {
   const { minWeb } = site.limits;
   const findings: Finding[] = [];
-  forEachNearPair(site, minWeb, (p, q, web) => {
-    if (p.face !== q.face || exempt(site, p, q) || isSameHole(p, q)) return;
+  for (const { a: p, b: q, web } of site.nearPairs) {
+    if (p.face !== q.face || exempt(site, p, q) || isSameHole(p, q)) continue;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
     findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `on face ${a.face}`), [a, b], fixFor(site, a, b, web)));
-  });
+  }
   edgePairs(site, (p, q, web) => {
     if (exempt(site, p, q)) return;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];

@@ -14,7 +14,7 @@ const SEARCH_PITCHES = 3;
 export function nearestClearHole(site: PanelSite, bore: PanelFaceBore, ignore: ReadonlySet<string>): Point | null {
   const { grid, limits, panel, faceBores, index } = site;
   const start = nearestGridPoint(grid, bore);
-  if (!start || !index) return null;
+  if (!start) return null;
   const r = bore.diameter / 2;
   const candidates: Point[] = [];
   for (let i = -SEARCH_PITCHES; i <= SEARCH_PITCHES; i++) {
@@ -29,14 +29,14 @@ export function nearestClearHole(site: PanelSite, bore: PanelFaceBore, ignore: R
   const distance = (p: Point) => (p.x - bore.x) ** 2 + (p.y - bore.y) ** 2;
   candidates.sort((a, b) => distance(a) - distance(b) || a.x - b.x || a.y - b.y);
   const reach = r + limits.minWeb;
-  return (
-    candidates.find(
-      (p) =>
-        !index.collides(p.x - reach, p.y - reach, p.x + reach, p.y + reach, (k) => {
-          const other = faceBores[k];
-          if (other.face !== bore.face || ignore.has(other.id) || isSameHole({ ...bore, ...p }, other)) return false;
-          return Math.hypot(other.x - p.x, other.y - p.y) - r - other.diameter / 2 < limits.minWeb;
-        }),
-    ) ?? null
-  );
+  const isClear = (p: Point) => {
+    let clear = true;
+    index.search(p.x - reach, p.y - reach, p.x + reach, p.y + reach, (k) => {
+      const other = faceBores[k];
+      if (other.face !== bore.face || ignore.has(other.id) || isSameHole({ ...bore, ...p }, other)) return;
+      if (Math.hypot(other.x - p.x, other.y - p.y) - r - other.diameter / 2 < limits.minWeb) clear = false;
+    });
+    return clear;
+  };
+  return candidates.find(isClear) ?? null;
 }

@@ -30,19 +30,18 @@ function shortDepth(site: PanelSite, edge: PanelEdgeBore, face: PanelFaceBore): 
  */
 export function checkEdgeBoreClash(site: PanelSite): Finding[] {
   const { index, faceBores } = site;
-  if (!index) return [];
   const findings: Finding[] = [];
   for (const edge of site.edgeBores) {
     const [minX, minY, maxX, maxY] = planBox(edge, site.panel);
-    for (const k of index.search(minX, minY, maxX, maxY)) {
+    index.search(minX, minY, maxX, maxY, (k) => {
       const face = faceBores[k];
-      if (site.layout.joined.has(pairKey(edge.id, face.id)) || !meets(site, edge, face)) continue;
+      if (site.layout.joined.has(pairKey(edge.id, face.id)) || !meets(site, edge, face)) return;
       const message = `${capitalize(boreName(edge))} runs into ${boreName(face)} on face ${face.face}.`;
       const depth = shortDepth(site, edge, face);
       const path = edge.edge === 'x0' || edge.edge === 'x1' ? `y ${formatNumber(minY)} to ${formatNumber(maxY)}` : `x ${formatNumber(minX)} to ${formatNumber(maxX)}`;
       const shorten = depth > 0 ? `, or drill the edge bore at most ${mm(depth)} deep` : '';
       findings.push(report(site, 'edge-bore-clash', 'error', message, [edge, face], { message: `Move the face bore clear of the edge bore's path (${path})${shorten}.` }));
-    }
+    });
   }
   return findings;
 }

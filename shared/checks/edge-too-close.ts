@@ -1,7 +1,7 @@
 import { edgeLength, type PanelBore, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore';
-import { EDGE_NAME, INWARD, edgeDistances } from './edges';
+import { EDGE_NAME, INWARD, edgeClearance, nearestEdge } from './edges';
 import type { Finding } from './finding';
-import { report, type PanelSite } from './panel-site';
+import { collect, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, formatNumber, mm } from './wording';
 
 /**
@@ -23,9 +23,10 @@ function movedTo(site: PanelSite, bore: PanelFaceBore, direction: [number, numbe
 
 function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): Finding | null {
   const need = required(site, bore);
-  const [nearest] = edgeDistances(bore, site.panel);
+  const clearance = edgeClearance(bore, site.panel);
   // A bore that crosses the edge is outside the panel, which another check reports.
-  if (nearest.distance < 0 || nearest.distance >= need) return null;
+  if (clearance < 0 || clearance >= need) return null;
+  const nearest = nearestEdge(bore, site.panel);
   const message = `${capitalize(boreName(bore))} is ${mm(nearest.distance)} from ${EDGE_NAME[nearest.edge]}; keep at least ${mm(need)}.`;
   return report(site, 'edge-too-close', 'error', message, [bore], movedTo(site, bore, INWARD[nearest.edge], need - nearest.distance));
 }
@@ -48,7 +49,5 @@ function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): Finding | null {
 
 /** edge-too-close: a bore nearer an edge (or, in an edge, nearer a face) than the shop's minimum. */
 export function checkEdgeTooClose(site: PanelSite): Finding[] {
-  const faces = site.faceBores.map((b) => faceBoreFinding(site, b));
-  const edges = site.edgeBores.map((b) => edgeBoreFinding(site, b));
-  return [...faces, ...edges].filter((f): f is Finding => f !== null);
+  return [...collect(site.faceBores, (b) => faceBoreFinding(site, b)), ...collect(site.edgeBores, (b) => edgeBoreFinding(site, b))];
 }

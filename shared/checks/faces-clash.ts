@@ -1,6 +1,6 @@
 import { pairKey } from '../layout/panel-layout';
 import type { Finding } from './finding';
-import { forEachNearPair, report, type PanelSite } from './panel-site';
+import { report, type PanelSite } from './panel-site';
 import { boreName, capitalize, mm } from './wording';
 
 /**
@@ -11,15 +11,16 @@ export function checkFacesClash(site: PanelSite): Finding[] {
   const { thickness } = site.panel;
   const { minFloor } = site.limits;
   const findings: Finding[] = [];
-  forEachNearPair(site, 0, (p, q) => {
-    if (p.face === q.face || site.layout.joined.has(pairKey(p.id, q.id))) return;
+  for (const { a: p, b: q, web } of site.nearPairs) {
+    // Bores on opposite faces meet only where they overlap in plan.
+    if (web >= 0 || p.face === q.face || site.layout.joined.has(pairKey(p.id, q.id))) continue;
     const left = thickness - p.depth - q.depth;
-    if (left >= minFloor) return;
+    if (left >= minFloor) continue;
     const [a, b] = p.face === 'A' ? [p, q] : [q, p];
     const between = left <= 0 ? 'no board between them: they meet inside it' : `only ${mm(left)} of board between them`;
     const message = `${capitalize(boreName(a))} on face A and ${boreName(b)} on face B overlap in plan and leave ${between} (${mm(thickness)} board; keep at least ${mm(minFloor)}).`;
     const fix = { message: `Move one clear of the other in plan, or drill them at most ${mm(Math.max(thickness - minFloor, 0))} deep together.` };
     findings.push(report(site, 'faces-clash', 'error', message, [a, b], fix));
-  });
+  }
   return findings;
 }

@@ -41,7 +41,9 @@ const UNSIZED_CHECKS: readonly PanelCheck[] = [checkUnknownFitting, checkOutside
 
 function checkPanelIn(job: JobSite, panel: Panel): Finding[] {
   const site = panelSite(job, panel);
-  return (site.sized ? PANEL_CHECKS : UNSIZED_CHECKS).flatMap((check) => check(site)).sort(compareFindings);
+  const findings: Finding[] = [];
+  for (const check of site.sized ? PANEL_CHECKS : UNSIZED_CHECKS) findings.push(...check(site));
+  return findings.sort(compareFindings);
 }
 
 /**
@@ -55,5 +57,7 @@ export function checkPanel(job: JobDocument, panel: Panel, catalog: Catalog): Fi
 /** Checks every panel of a job: the findings of each panel in turn, in the document's panel order. */
 export function checkJob(job: JobDocument, catalog: Catalog): Finding[] {
   const site = jobSite(job, catalog);
-  return job.panels.flatMap((panel) => checkPanelIn(site, panel));
+  const findings: Finding[] = [];
+  for (const panel of job.panels) findings.push(...checkPanelIn(site, panel));
+  return findings;
 }

@@ -3,7 +3,7 @@ import { panelMass } from '../compute/panel-mass';
 import { powerFactor } from '../compute/power-factor';
 import type { PlacedFitting } from '../layout/panel-layout';
 import type { Finding } from './finding';
-import { report, type PanelSite } from './panel-site';
+import { collect, report, type PanelSite } from './panel-site';
 import { formatNumber } from './wording';
 
 type Lift = Extract<Fitting, { purpose: 'lift-mechanism' }>;
@@ -49,8 +49,6 @@ function finding(site: PanelSite, placed: PlacedFitting & { fitting: Lift }): Fi
  * equally by the mechanisms on the panels it hangs on, must fall within the mechanism's range.
  */
 export function checkLiftOutOfRange(site: PanelSite): Finding[] {
-  return site.layout.placed
-    .filter((p): p is PlacedFitting & { fitting: Lift } => p.fitting.purpose === 'lift-mechanism')
-    .map((p) => finding(site, p))
-    .filter((f): f is Finding => f !== null);
+  const lifts = site.layout.placed.filter((p): p is PlacedFitting & { fitting: Lift } => p.fitting.purpose === 'lift-mechanism');
+  return collect(lifts, (p) => finding(site, p));
 }

@@ -2,7 +2,7 @@ import { isOnGrid, nearestGridPoint } from '../grid/snap';
 import type { PanelFaceBore } from '../layout/bore';
 import type { PlacedFitting } from '../layout/panel-layout';
 import type { Finding } from './finding';
-import { isMeasurable, report, type PanelSite } from './panel-site';
+import { collect, isMeasurable, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, formatNumber, mm, placementName } from './wording';
 
 function finding(site: PanelSite, placed: PlacedFitting): Finding | null {
@@ -36,8 +36,8 @@ function finding(site: PanelSite, placed: PlacedFitting): Finding | null {
  * y a whole number of pitches above half the adjoining board.
  */
 export function checkOffGrid(site: PanelSite): Finding[] {
-  return site.layout.placed
-    .filter((p) => p.fitting.onSystemRow)
-    .map((p) => finding(site, p))
-    .filter((f): f is Finding => f !== null);
+  return collect(
+    site.layout.placed.filter((p) => p.fitting.onSystemRow),
+    (p) => finding(site, p),
+  );
 }

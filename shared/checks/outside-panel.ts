@@ -1,5 +1,5 @@
 import { edgeLength, edgeSpan, type PanelBore } from '../layout/bore';
-import { EDGE_NAME, edgeDistances } from './edges';
+import { EDGE_NAME, edgeClearance, nearestEdge } from './edges';
 import type { Finding } from './finding';
 import { isMeasurable, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, mm } from './wording';
@@ -9,8 +9,8 @@ function outsideBy(site: PanelSite, bore: PanelBore): string | null {
   if (!isMeasurable(bore)) return 'has no valid position or size';
   const { panel } = site;
   if (bore.kind === 'face') {
-    const [nearest] = edgeDistances(bore, panel);
-    if (nearest.distance >= 0) return null;
+    if (edgeClearance(bore, panel) >= 0) return null;
+    const nearest = nearestEdge(bore, panel);
     return -nearest.distance >= bore.diameter
       ? `lies off the panel, beyond ${EDGE_NAME[nearest.edge]}`
       : `reaches ${mm(-nearest.distance)} past ${EDGE_NAME[nearest.edge]}`;

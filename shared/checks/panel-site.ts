@@ -1,11 +1,18 @@
-import Flatbush from 'flatbush';
 import { systemGrid, type SystemGrid } from '../grid/system-grid';
 import type { PanelBore, PanelEdgeBore, PanelFaceBore } from '../layout/bore';
 import { layoutPanel, type PanelLayout } from '../layout/panel-layout';
 import type { Panel, ShopLimits, SystemSettings } from '../model/job-document';
 import type { Finding, FindingCode, Severity } from './finding';
+import { indexBoxes, type BoxIndex } from './box-index';
 import type { JobSite } from './job-site';
 import { sortedIds } from './wording';
+
+/** Two face bores, on either face, with the web between them in plan (negative when they overlap). */
+export interface NearPair {
+  a: PanelFaceBore;
+  b: PanelFaceBore;
+  web: number;
+}
 
 /** One panel made ready for the checks: its layout, its grid and a spatial index of its face bores. */
 export interface PanelSite {
@@ -19,17 +26,18 @@ export interface PanelSite {
   /** Face and edge bores whose numbers are all finite; the others are reported as outside the panel. */
   faceBores: PanelFaceBore[];
   edgeBores: PanelEdgeBore[];
-  /** The face bores' plan boxes, by their index in `faceBores`; null when there are none. */
-  index: Flatbush | null;
+  /** The face bores' plan boxes, by their position in `faceBores`. */
+  index: BoxIndex;
+  /** Every pair of face bores closer in plan than the minimum web, found once for all the checks that need it. */
+  nearPairs: NearPair[];
   grid: SystemGrid;
 }
 
-const finite = (...values: number[]) => values.every(Number.isFinite);
-
 /** Whether every number of a bore is finite and its size positive: only such a bore has a place to check. */
 export function isMeasurable(bore: PanelBore): boolean {
-  const place = bore.kind === 'face' ? finite(bore.x, bore.y) : finite(bore.at, bore.z);
-  return place && bore.diameter > 0 && bore.depth > 0 && finite(bore.diameter, bore.depth);
+  const place =
+    bore.kind === 'face' ? Number.isFinite(bore.x) && Number.isFinite(bore.y) : Number.isFinite(bore.at) && Number.isFinite(bore.z);
+  return place && bore.diameter > 0 && bore.depth > 0 && Number.isFinite(bore.diameter) && Number.isFinite(bore.depth);
 }
 
 /** Lays out a panel and indexes its face bores, so that no check has to compare every pair. */
@@ -43,43 +51,51 @@ export function panelSite(job: JobSite, panel: Panel): PanelSite {
     if (bore.kind === 'face') faceBores.push(bore);
     else edgeBores.push(bore);
   }
-  let index: Flatbush | null = null;
-  if (faceBores.length > 0) {
-    index = new Flatbush(faceBores.length);
-    for (const b of faceBores) index.add(b.x - b.diameter / 2, b.y - b.diameter / 2, b.x + b.diameter / 2, b.y + b.diameter / 2);
-    index.finish();
+  const boxes = new Float64Array(4 * faceBores.length);
+  for (let i = 0; i < faceBores.length; i++) {
+    const { x, y, diameter } = faceBores[i];
+    boxes[4 * i] = x - diameter / 2;
+    boxes[4 * i + 1] = y - diameter / 2;
+    boxes[4 * i + 2] = x + diameter / 2;
+    boxes[4 * i + 3] = y + diameter / 2;
   }
+  const index = indexBoxes(boxes);
   const sized = [panel.width, panel.height, panel.thickness].every((v) => Number.isFinite(v) && v > 0);
   // The rows start at half the board that adjoins the panel: the carcass's material where known.
   const board = (panel.carcass !== undefined && job.carcassBoard.get(panel.carcass)) || panel.thickness;
-  return { job, panel, limits, system, layout, sized, faceBores, edgeBores, index, grid: systemGrid(panel, board, system) };
+  const nearPairs = findNearPairs(faceBores, index, limits.minWeb);
+  return { job, panel, limits, system, layout, sized, faceBores, edgeBores, index, nearPairs, grid: systemGrid(panel, board, system) };
 }
 
-/**
- * Visits once each pair of face bores whose circles come closer than `gap` in plan (web < gap), on either
- * face, with the web between them (negative when they overlap). The index keeps this near-linear.
- */
-export function forEachNearPair(
-  site: PanelSite,
-  gap: number,
-  visit: (a: PanelFaceBore, b: PanelFaceBore, web: number) => void,
-): void {
-  const { faceBores: bores, index } = site;
-  if (!index) return;
-  for (let i = 0; i < bores.length; i++) {
-    const a = bores[i];
+/** Each pair of face bores whose circles come closer than `gap` in plan, once: one box search per bore. */
+function findNearPairs(bores: PanelFaceBore[], index: BoxIndex, gap: number): NearPair[] {
+  const pairs: NearPair[] = [];
+  let i = 0;
+  let a = bores[0];
+  const visit = (j: number) => {
+    if (j <= i) return;
+    const b = bores[j];
+    const dx = b.x - a.x;
+    const dy = b.y - a.y;
+    const web = Math.sqrt(dx * dx + dy * dy) - a.diameter / 2 - b.diameter / 2;
+    if (web < gap) pairs.push({ a, b, web });
+  };
+  for (i = 0; i < bores.length; i++) {
+    a = bores[i];
     const reach = a.diameter / 2 + gap;
-    // The filter does the work and keeps nothing, so the search allocates no result list.
-    index.search(a.x - reach, a.y - reach, a.x + reach, a.y + reach, (j) => {
-      if (j <= i) return false;
-      const b = bores[j];
-      const dx = b.x - a.x;
-      const dy = b.y - a.y;
-      const web = Math.sqrt(dx * dx + dy * dy) - a.diameter / 2 - b.diameter / 2;
-      if (web < gap) visit(a, b, web);
-      return false;
-    });
+    index.search(a.x - reach, a.y - reach, a.x + reach, a.y + reach, visit);
   }
+  return pairs;
+}
+
+/** The findings a check makes of each item, the items that are fine giving none. */
+export function collect<T>(items: readonly T[], check: (item: T) => Finding | null): Finding[] {
+  const findings: Finding[] = [];
+  for (const item of items) {
+    const finding = check(item);
+    if (finding) findings.push(finding);
+  }
+  return findings;
 }
 
 /** A finding about these bores (and any further placements), with ids in a fixed order. */

@@ -32,9 +32,10 @@ export type Box = [number, number, number, number];
  * deep as the board is taken as a through bore; a shallower one is blind.
  */
 export function looseBore(bore: Bore, thickness: number): PanelBore {
-  return isEdgeBore(bore)
-    ? { ...bore, kind: 'edge', purpose: 'loose' }
-    : { ...bore, kind: 'face', purpose: 'loose', through: bore.depth >= thickness };
+  // Literals of one fixed shape, not spreads: a panel may hold thousands of bores and spreads are slow.
+  const { id, diameter, depth } = bore;
+  if (isEdgeBore(bore)) return { kind: 'edge', id, edge: bore.edge, at: bore.at, z: bore.z, diameter, depth, purpose: 'loose' };
+  return { kind: 'face', id, x: bore.x, y: bore.y, face: bore.face, diameter, depth, purpose: 'loose', through: depth >= thickness };
 }
 
 /**

@@ -18,18 +18,20 @@ function expandBore(bore: FittingBore, placement: Placement, fitting: Fitting, p
   const [dx, dy] = orientOffset(bore.x, bore.y, placement);
   const x = placement.x + dx;
   const y = placement.y + dy;
-  const origin = { id: expandedBoreId(placement.id, bore.id), purpose: fitting.purpose, placement: placement.id };
+  const id = expandedBoreId(placement.id, bore.id);
+  const { purpose } = fitting;
   if (bore.kind === 'face') {
     const depth = bore.depth === 'through' ? panel.thickness : bore.depth === 'system' ? system.holeDepth : bore.depth;
-    return { ...origin, kind: 'face', x, y, face: placement.face, diameter: bore.diameter, depth, through: bore.depth === 'through' };
+    const through = bore.depth === 'through';
+    return { kind: 'face', id, x, y, face: placement.face, diameter: bore.diameter, depth, purpose, through, placement: placement.id };
   }
   const fromFace = bore.z === 'mid' ? panel.thickness / 2 : bore.z;
   const z = placement.face === 'A' ? fromFace : panel.thickness - fromFace;
   const edge = orientEdge(bore.toward, placement);
   // The bore runs from its edge to its inner end at (x, y).
   const at = edge === 'x0' || edge === 'x1' ? y : x;
-  const depth = { x0: x, x1: panel.width - x, y0: y, y1: panel.height - y }[edge];
-  return { ...origin, kind: 'edge', edge, at, z, diameter: bore.diameter, depth };
+  const depth = edge === 'x0' ? x : edge === 'x1' ? panel.width - x : edge === 'y0' ? y : panel.height - y;
+  return { kind: 'edge', id, edge, at, z, diameter: bore.diameter, depth, purpose, placement: placement.id };
 }
 
 /**
