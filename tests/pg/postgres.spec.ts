@@ -1,0 +1,102 @@
+import { sql } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { PanelRecord } from '../../shared/api/contract';
+import { createApp } from '../../server/app';
+import { openDatabase, type DatabaseHandle } from '../../server/db/client';
+import { sessions } from '../../server/db/schema';
+import { dumpTables, restoreTables } from '../../server/db/table-dump';
+import { seedDemoShop } from '../../server/demo/seed-demo';
+import { jobAsDocument, listJobs } from '../../server/jobs/jobs.service';
+import { createLogger } from '../../server/logger';
+import { ApiClient, signedIn } from '../../server/testing/api-client';
+import { testConfig } from '../../server/testing/test-app';
+
+const url = process.env.PG_TEST_URL;
+const restoreUrl = process.env.PG_TEST_RESTORE_URL;
+if (!url) console.warn('tests/pg: PG_TEST_URL is not set, so the PostgreSQL tests are skipped. Run them with `npm run test:pg`.');
+
+describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
+  let database: DatabaseHandle;
+  let app: ReturnType<typeof createApp>;
+  let designer: ApiClient;
+
+  beforeAll(async () => {
+    database = await openDatabase({ engine: 'postgres', url: url! });
+    await database.migrate();
+    await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
+    await seedDemoShop(database.db);
+    app = createApp({ db: database.db, config: testConfig(), sessionSecret: 'a test secret that is long enough to sign cookies', logger: createLogger('silent') });
+    designer = await signedIn(app, 'designer@greyfield.example');
+  });
+  afterAll(() => database?.close());
+
+  it('migrates idempotently', async () => {
+    await database.migrate();
+    const result = (await database.db.execute(sql`select count(*)::int as n from drizzle.__drizzle_migrations`)) as unknown as { rows: { n: number }[] };
+    expect(result.rows[0].n).toBeGreaterThanOrEqual(2);
+  });
+
+  it('signs in with sessions kept in the database, and refuses a wrong password', async () => {
+    expect((await designer.get('/api/auth/me').expect(200)).body.user.role).toBe('designer');
+    expect(await database.db.$count(sessions)).toBeGreaterThan(0);
+    expect((await new ApiClient(app).signIn('designer@greyfield.example', 'wrong-password')).status).toBe(401);
+  });
+
+  it('round-trips a job and a panel through the API', async () => {
+    const { body: job } = await designer.post('/api/jobs').send({ name: 'Postgres job' }).expect(201);
+    expect(job).toMatchObject({ carcassCount: 0, panelCount: 0 });
+    await designer.post(`/api/jobs/${job.id}/carcasses`).send({ id: 'c1', name: 'Box', width: 600, height: 2131, depth: 560, material: 'mdf-19' }).expect(201);
+    const { body: panel } = await designer
+      .post(`/api/jobs/${job.id}/panels`)
+      .send({ name: 'Side', role: 'side', carcass: 'c1', width: 560, height: 2131, thickness: 19, material: 'mdf-19' })
+      .expect(201);
+    const bores = [
+      { id: 'f1', x: 37, y: 9.5, face: 'A', diameter: 5, depth: 13 },
+      { id: 'f2', x: 0.1 + 0.2, y: 2121.5, face: 'B', diameter: 5, depth: 13 },
+      { id: 'e1', edge: 'y0', at: 280, z: 9.5, diameter: 8, depth: 30 },
+    ];
+    const placements = [{ id: 'p1', fitting: 'plate-a', x: 37, y: 105, face: 'A', rotation: 270, mirrored: false, params: { boringDistance: 4.5 } }];
+    const saved = await designer.put(`/api/panels/${panel.dbId}/drilling`).send({ version: 1, placements, bores }).expect(200);
+    expect(saved.body).toMatchObject({ version: 2, bores, placements });
+    await designer.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'drilled' }).expect(409);
+    await designer.patch(`/api/panels/${panel.dbId}/status`).send({ version: 2, status: 'drilled' }).expect(200);
+
+    const detail = await designer.get(`/api/jobs/${job.id}`).expect(200);
+    expect(detail.body.job).toMatchObject({ carcassCount: 1, panelCount: 1 });
+    const { body: doc } = await designer.get(`/api/jobs/${job.id}/document`).expect(200);
+    expect(doc.panels[0]).toMatchObject({ carcass: 'c1', status: 'drilled', bores, placements });
+    const imported = await designer.post('/api/jobs/import').attach('file', Buffer.from(JSON.stringify(doc)), 'doc.json').expect(201);
+    expect((await designer.get(`/api/jobs/${imported.body.id}/document`).expect(200)).body).toEqual(doc);
+  });
+
+  it('lets one of several simultaneous writers win, the others get 409', async () => {
+    const { body: detail } = await designer.get('/api/jobs/1').expect(200);
+    const panel: PanelRecord = detail.panels[0];
+    const answers = await Promise.all(
+      ['A', 'B', 'C', 'D'].map((name) => designer.patch(`/api/panels/${panel.dbId}`).send({ version: panel.version, name })),
+    );
+    expect(answers.map((r) => r.status).sort()).toEqual([200, 409, 409, 409]);
+  });
+
+  it.skipIf(!restoreUrl)('restores a backup into another database with the same jobs', async () => {
+    const target = await openDatabase({ engine: 'postgres', url: restoreUrl! });
+    await target.migrate();
+    const backup = JSON.parse(JSON.stringify(await dumpTables(database.db, new Date())));
+    await restoreTables(target.db, backup);
+    const jobs = await listJobs(database.db, false);
+    expect(await listJobs(target.db, false)).toEqual(jobs);
+    for (const { id } of jobs) expect(await jobAsDocument(target.db, id)).toEqual(await jobAsDocument(database.db, id));
+    await target.close();
+  });
+
+  it('restores a backup made with PGlite, so a shop can move to a PostgreSQL server', async () => {
+    const local = await openDatabase({ engine: 'pglite' });
+    await local.migrate();
+    await seedDemoShop(local.db);
+    const backup = JSON.parse(JSON.stringify(await dumpTables(local.db, new Date())));
+    await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
+    await restoreTables(database.db, backup);
+    for (const { id } of await listJobs(local.db, false)) expect(await jobAsDocument(database.db, id)).toEqual(await jobAsDocument(local.db, id));
+    await local.close();
+  });
+});

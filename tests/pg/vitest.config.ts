@@ -1,0 +1,11 @@
+import { defineConfig } from 'vitest/config';
+
+// Only `npm run test:pg` (tests/pg/run.sh) runs this, with PG_TEST_URL pointing at its throwaway cluster.
+export default defineConfig({
+  test: {
+    include: ['tests/pg/**/*.spec.ts'],
+    environment: 'node',
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+  },
+});
