@@ -1,0 +1,44 @@
+import type { SessionData } from 'express-session';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { DatabaseHandle } from '../db/client';
+import { sessions } from '../db/schema';
+import { openTestDatabase } from '../testing/test-database';
+import { DrizzleSessionStore } from './session-store';
+
+const call = <T>(fn: (cb: (err: unknown, value?: T) => void) => void) =>
+  new Promise<T | undefined>((resolve, reject) => fn((err, value) => (err ? reject(err) : resolve(value))));
+
+const session = (expires: Date, user = 7) => ({ cookie: { expires: expires.toISOString(), originalMaxAge: 1000 }, passport: { user } }) as unknown as SessionData;
+
+describe('DrizzleSessionStore', () => {
+  let database: DatabaseHandle;
+  let store: DrizzleSessionStore;
+  beforeAll(async () => {
+    database = await openTestDatabase('empty');
+    store = new DrizzleSessionStore(database.db);
+  });
+  afterAll(() => database.close());
+
+  const later = () => new Date(Date.now() + 3_600_000);
+
+  it('keeps, replaces, touches and destroys a session', async () => {
+    await call((cb) => store.set('a', session(later()), cb));
+    expect(await call<SessionData | null>((cb) => store.get('a', cb))).toMatchObject({ passport: { user: 7 } });
+    await call((cb) => store.set('a', session(later(), 8), cb));
+    expect(await call<SessionData | null>((cb) => store.get('a', cb))).toMatchObject({ passport: { user: 8 } });
+    const extended = new Date(Date.now() + 7_200_000);
+    await call((cb) => store.touch('a', session(extended, 8), cb));
+    const [row] = await database.db.select().from(sessions);
+    expect(row.expire.getTime()).toBe(extended.getTime());
+    await call((cb) => store.destroy('a', cb));
+    expect(await call((cb) => store.get('a', cb))).toBeNull();
+  });
+
+  it('never returns an expired session, and prunes expired rows', async () => {
+    await call((cb) => store.set('old', session(new Date(Date.now() - 1000)), cb));
+    await call((cb) => store.set('new', session(later()), cb));
+    expect(await call((cb) => store.get('old', cb))).toBeNull();
+    await store.prune();
+    expect((await database.db.select({ sid: sessions.sid }).from(sessions)).map((r) => r.sid)).toEqual(['new']);
+  });
+});
