@@ -1,0 +1,69 @@
+import { describe, expect, it } from 'vitest';
+import { makeJob, makePanel } from '../../shared/testing/make-job';
+import { runCli, tempFiles } from './spawn-cli';
+
+const clean = makeJob([makePanel('left', { placements: [{ id: 'pin', fitting: 'shelf-pin-5', x: 37, y: 105, face: 'A' }] })]);
+const broken = makeJob([
+  makePanel('left', { bores: [{ id: 'a', x: 100, y: 100, face: 'A', diameter: 5, depth: 12 }, { id: 'b', x: 104, y: 100, face: 'A', diameter: 5, depth: 12 }] }),
+  makePanel('door', { role: 'door', width: 496, height: 716, placements: [{ id: 'h1', fitting: 'hinge-full-overlay-45', x: 21.5, y: 87, face: 'A' }] }),
+  makePanel('shelf', { role: 'shelf', width: 300, height: 564 }),
+]);
+const files = tempFiles({
+  'clean.json': JSON.stringify(clean),
+  'broken.json': JSON.stringify(broken),
+  'garbled.json': '{ "format": "borewright.job/1", ',
+  'invalid.json': JSON.stringify({ ...clean, panels: [{ ...clean.panels[0], width: -3, bores: [{ id: 'x', x: 5, y: 5, face: 'C', diameter: 5, depth: 5 }] }] }),
+  'shop.json': JSON.stringify({ fittings: [{ id: 'plate-0', name: 'Our plate', purpose: 'shelf-pin', onSystemRow: false, bores: [{ id: 'p', kind: 'face', x: 0, y: 0, diameter: 5, depth: 10, source: 'ours' }] }] }),
+});
+
+describe('borewright check', () => {
+  it('says a clean job is clear and exits 0', () => {
+    const { code, stdout } = runCli('check', files['clean.json']);
+    expect(code).toBe(0);
+    expect(stdout).toContain('Test job: 1 panel checked, 0 errors, 0 warnings, 0 notes.');
+    expect(stdout).toContain('No findings');
+  });
+
+  it('prints findings grouped by panel and exits 1 on an error', () => {
+    const { code, stdout } = runCli('check', files['broken.json']);
+    expect(code).toBe(1);
+    const left = stdout.indexOf('Panel left (left, side)');
+    const door = stdout.indexOf('Panel door (door, door)');
+    expect(left).toBeGreaterThan(0);
+    expect(door).toBeGreaterThan(left);
+    expect(stdout.slice(left, door)).toMatch(/error\s+bores-overlap\s+Bore a/);
+    expect(stdout.slice(door)).toMatch(/error\s+hinge-count\s+Door door .* has 1 hinge; it needs 2\./);
+    expect(stdout).not.toContain('Panel shelf');
+  });
+
+  it('prints the same findings as JSON with --json', () => {
+    const { code, stdout } = runCli('check', files['broken.json'], '--json');
+    expect(code).toBe(1);
+    const report = JSON.parse(stdout);
+    expect(report).toMatchObject({ job: 'Test job', panels: 3, errors: 2, warnings: 0 });
+    expect(report.findings.map((f: { code: string; panel: string }) => [f.panel, f.code])).toEqual([
+      ['left', 'bores-overlap'],
+      ['door', 'hinge-count'],
+    ]);
+  });
+
+  it('exits 2 with a clear message on a missing, garbled or invalid file', () => {
+    const missing = runCli('check', `${files['clean.json']}.gone`);
+    expect(missing.code).toBe(2);
+    expect(missing.stderr).toContain('cannot be read: no such file');
+    const garbled = runCli('check', files['garbled.json']);
+    expect(garbled.code).toBe(2);
+    expect(garbled.stderr).toContain('is not valid JSON');
+    const invalid = runCli('check', files['invalid.json']);
+    expect(invalid.code).toBe(2);
+    expect(invalid.stderr).toContain('  panels[0].width: must be greater than 0');
+    expect(invalid.stderr).toContain('  panels[0].bores[0]: ');
+    expect(runCli('check').code).toBe(2);
+  });
+
+  it('refuses shop fittings that would replace a built-in one', () => {
+    const { code, stderr } = runCli('check', files['clean.json'], '--catalog', files['shop.json']);
+    expect(code).toBe(2);
+    expect(stderr).toContain('shop.json: fittings[0].id: "plate-0" is a built-in fitting');
+  });
+});

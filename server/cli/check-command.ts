@@ -1,0 +1,48 @@
+import { parseArgs } from 'node:util';
+import { checkJob } from '../../shared/checks/index';
+import { parseJobDocument } from '../../shared/model/parse-job';
+import { EXIT, type CliIo } from './cli-io';
+import { countFindings, findingsText } from './findings-text';
+import { loadCatalog } from './load-catalog';
+import { readJsonFile } from './read-json';
+
+export const CHECK_USAGE = `Usage: borewright check <job.json> [--json] [--catalog <fittings.json>]
+
+Checks every panel of a job document and prints the findings, grouped by panel.
+  --json                 print the findings as JSON, for other programs
+  --catalog <file>       add a shop's own fittings to the built-in catalog
+Exit code: 0 when no error is found (warnings allowed), 1 when one is, 2 when the file cannot be used.`;
+
+/** `borewright check`: reads, validates and checks a job document. */
+export async function checkCommand(args: string[], io: CliIo): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args,
+    allowPositionals: true,
+    options: { json: { type: 'boolean' }, catalog: { type: 'string' }, help: { type: 'boolean', short: 'h' } },
+  });
+  if (values.help) {
+    io.out(CHECK_USAGE);
+    return EXIT.ok;
+  }
+  if (positionals.length !== 1) {
+    io.err(`borewright check: name one job file.\n\n${CHECK_USAGE}`);
+    return EXIT.unusable;
+  }
+  const [file] = positionals;
+  const read = await readJsonFile(file);
+  const parsed = read.ok ? parseJobDocument(read.value) : read;
+  if (!parsed.ok) {
+    io.err([`${file} is not a job document Borewright can check:`, ...parsed.errors.map((e) => `  ${e}`)].join('\n'));
+    return EXIT.unusable;
+  }
+  const catalog = await loadCatalog(values.catalog);
+  if (!catalog.ok) {
+    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
+    return EXIT.unusable;
+  }
+  const job = parsed.value;
+  const findings = checkJob(job, catalog.value);
+  const counts = countFindings(findings);
+  io.out(values.json ? JSON.stringify({ job: job.name, panels: job.panels.length, ...counts, findings }, null, 2) : findingsText(job, findings));
+  return counts.errors > 0 ? EXIT.findings : EXIT.ok;
+}

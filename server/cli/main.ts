@@ -1,0 +1,44 @@
+import { catalogCommand } from './catalog-command';
+import { checkCommand } from './check-command';
+import { EXIT, processIo, type CliIo } from './cli-io';
+import { schemaCommand } from './schema-command';
+
+export const USAGE = `Usage: borewright <command> [options]
+
+Works on Borewright job documents (format borewright.job/1) without a server.
+
+Commands:
+  check <job.json>   check every panel and print the findings grouped by panel (--json for programs)
+  catalog            list the fittings of the built-in catalog (--json for programs)
+  schema             print the JSON Schema of the job document
+
+Run borewright <command> --help for its options.
+Exit code: 0 all clear, 1 a check found an error, 2 the command could not run.`;
+
+type Command = (args: string[], io: CliIo) => number | Promise<number>;
+
+const COMMANDS: Record<string, Command> = { check: checkCommand, catalog: catalogCommand, schema: schemaCommand };
+
+/** Runs the command line and returns the exit code. Never throws on bad arguments or files. */
+export async function main(argv: string[], io: CliIo = processIo): Promise<number> {
+  const [name, ...args] = argv;
+  if (name === undefined || name === '--help' || name === '-h' || name === 'help') {
+    io.out(USAGE);
+    return EXIT.ok;
+  }
+  const command = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
+  if (!command) {
+    io.err(`borewright: no command "${name}".\n\n${USAGE}`);
+    return EXIT.unusable;
+  }
+  try {
+    return await command(args, io);
+  } catch (error) {
+    // parseArgs throws on an unknown or incomplete option; its message says which.
+    if ((error as { code?: string }).code?.startsWith('ERR_PARSE_ARGS')) {
+      io.err(`borewright ${name}: ${(error as Error).message}\n\nRun borewright ${name} --help for its options.`);
+      return EXIT.unusable;
+    }
+    throw error;
+  }
+}
