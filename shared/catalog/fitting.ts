@@ -24,6 +24,7 @@ const offset = z.number().finite('must be a finite number').min(-2000).max(2000)
 const size = (max: number) =>
   z.number().finite('must be a finite number').positive('must be greater than 0').max(max, `must be at most ${max} mm`);
 
+/** What a fitting is for: sets the colour of its bores and which family data it carries. */
 export const fittingPurpose = z.enum([
   'construction',
   'hinge-cup',
@@ -63,6 +64,7 @@ export const fittingEdgeBore = z.object({
   source,
 });
 
+/** A fitting's bore: into a face or into an edge. */
 export const fittingBore = z.discriminatedUnion('kind', [fittingFaceBore, fittingEdgeBore]);
 
 /** The area on the face the fitting's body needs, as a rectangle from its lower-left corner. */
@@ -82,6 +84,7 @@ const common = {
   joins: z.array(z.tuple([boreId, boreId])).max(50).default([]),
 };
 
+/** A cup hinge's family data (design.md §4). */
 export const hingeData = z.object({
   /** The bore that is the cup; its diameter and depth are the cup's. */
   cupBore: boreId,
@@ -94,6 +97,7 @@ export const hingeData = z.object({
   source,
 });
 
+/** A fitting: its purpose with the family data that goes with it, its bores, keep-outs and joins, checked for consistency. */
 export const fitting = z
   .discriminatedUnion('purpose', [
     z.object({ ...common, purpose: z.literal('construction') }),

@@ -24,7 +24,8 @@ function fixFor(site: PanelSite, a: PanelFaceBore, b: PanelFaceBore, web: number
   );
   const hole = movable && nearestClearHole(site, movable, new Set([movable.id]));
   if (movable && hole) {
-    return { message: `Move ${movable.id} to the nearest clear system hole, x ${formatNumber(hole.x)}, y ${formatNumber(hole.y)}.`, at: hole };
+    const what = movable.placement ? `placement ${movable.placement}` : movable.id;
+    return { message: `Move ${what} to the nearest clear system hole, x ${formatNumber(hole.x)}, y ${formatNumber(hole.y)}.`, at: hole };
   }
   return { message: `Move one of them ${mm(site.limits.minWeb - web)} further from the other.` };
 }

@@ -20,6 +20,7 @@ export const findingCode = z.enum([
   'unknown-fitting',
 ]);
 
+/** How bad a finding is: an error stops the panel being drilled as planned. */
 export const severity = z.enum(['error', 'warning', 'note']);
 
 /** What a check reports: plain words for the bench, the bores and placements concerned, a fix where known. */
