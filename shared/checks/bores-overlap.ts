@@ -56,7 +56,7 @@ export function checkBoresOverlap(site: PanelSite): Finding[] {
   const { minWeb } = site.limits;
   const findings: Finding[] = [];
   for (const { a: p, b: q, web } of site.nearPairs) {
-    if (p.face !== q.face || exempt(site, p, q) || isSameHole(p, q)) continue;
+    if (p.face !== q.face || isSameHole(p, q) || exempt(site, p, q)) continue;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
     findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `on face ${a.face}`), [a, b], fixFor(site, a, b, web)));
   }
