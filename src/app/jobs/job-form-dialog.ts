@@ -25,6 +25,14 @@ export interface JobFormRequest {
   save: (values: JobFormValues) => Promise<unknown>;
 }
 
+type JobField = 'name' | 'client' | 'notes';
+
+const wording: Record<JobField, FieldWording> = {
+  name: { label: 'job name' },
+  client: { label: 'client' },
+  notes: { label: 'notes' },
+};
+
 /** Creates a job, or changes its name, client and notes. */
 @Component({
   selector: 'bw-job-form-dialog',
@@ -50,16 +58,11 @@ export class JobFormDialog {
     client: [this.request.job?.client ?? '', Validators.maxLength(200)],
     notes: [this.request.job?.notes ?? '', Validators.maxLength(10_000)],
   });
-  protected readonly wording: Record<'name' | 'client' | 'notes', FieldWording> = {
-    name: { label: 'job name' },
-    client: { label: 'client' },
-    notes: { label: 'notes' },
-  };
   protected readonly saving = signal(false);
   protected readonly failure = signal<string | null>(null);
 
-  protected message(field: keyof JobFormDialog['wording']): string {
-    return fieldMessage(this.form.controls[field], this.wording[field]);
+  protected message(field: JobField): string {
+    return fieldMessage(this.form.controls[field], wording[field]);
   }
 
   protected async save(): Promise<void> {

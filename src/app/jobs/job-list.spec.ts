@@ -54,6 +54,17 @@ describe('JobList', () => {
     expect(page.textContent).toContain('No job matches “porch”.');
   });
 
+  it('lists the archived jobs instead when asked', async () => {
+    await openAs('viewer');
+    buttonNamed('Archived')!.click();
+    TestBed.tick();
+    http.expectOne('/api/jobs?archived=true').flush({ jobs: [] });
+    await settle();
+    await fixture.whenStable();
+
+    expect(page.textContent).toContain('No archived jobs.');
+  });
+
   it('shows a viewer no control to create, import, rename or archive', async () => {
     await openAs('viewer');
 

@@ -43,15 +43,14 @@ export class JobPage {
     });
   }
 
-  protected async editDetails(): Promise<void> {
+  protected editDetails(): void {
     const job = this.store.job();
     if (!job) return;
-    const ref = this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
+    this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
       data: { title: 'Job details', saveLabel: 'Save', job, withNotes: true, save: (values) => this.store.updateJob(values) },
       width: '520px',
       maxWidth: 'calc(100vw - 32px)',
     });
-    await firstValueFrom(ref.afterClosed());
   }
 
   protected async addPanel(): Promise<void> {

@@ -37,6 +37,15 @@ const MIN_SIZE = 1;
 
 type Field = 'name' | 'role' | 'material' | 'width' | 'height' | 'thickness';
 
+const wording: Record<Field, FieldWording> = {
+  name: { label: 'panel name' },
+  role: { label: 'role' },
+  material: { label: 'material' },
+  width: { label: 'width', unit: ' mm' },
+  height: { label: 'height', unit: ' mm' },
+  thickness: { label: 'thickness', unit: ' mm' },
+};
+
 /** Adds a panel to a job or edits its board data: name, role, carcass, size and material. */
 @Component({
   selector: 'bw-panel-form-dialog',
@@ -64,17 +73,8 @@ export class PanelFormDialog {
   protected readonly stale = signal(false);
   protected readonly failure = signal<string | null>(null);
 
-  private readonly wording: Record<Field, FieldWording> = {
-    name: { label: 'panel name' },
-    role: { label: 'role' },
-    material: { label: 'material' },
-    width: { label: 'width', unit: ' mm' },
-    height: { label: 'height', unit: ' mm' },
-    thickness: { label: 'thickness', unit: ' mm' },
-  };
-
   protected message(field: Field): string {
-    return fieldMessage(this.form.controls[field], this.wording[field]);
+    return fieldMessage(this.form.controls[field], wording[field]);
   }
 
   /** Boards come in their material's thickness; take it unless the user has typed one. */
