@@ -61,3 +61,12 @@ describe('jobDocumentJsonSchema', () => {
     expect(JSON.stringify(schema)).toContain('borewright.job/1');
   });
 });
+
+describe('messages for a bore that is neither a face nor an edge bore', () => {
+  it('names the field of the branch the author meant', () => {
+    const bad = structuredClone(example);
+    bad.panels[0].bores[0].face = 'C';
+    const result = parseJobDocument(bad);
+    expect(result).toEqual({ ok: false, errors: ['panels[0].bores[0].face: Invalid option: expected one of "A"|"B"'] });
+  });
+});

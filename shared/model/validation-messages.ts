@@ -1,5 +1,7 @@
 import type { z } from 'zod';
 
+type Issue = z.core.$ZodIssue;
+
 /** Formats a zod path the way a user reads it in a file: `panels[3].bores[1].diameter`. */
 export function formatPath(path: readonly PropertyKey[]): string {
   return path.reduce<string>((out, key) => {
@@ -9,10 +11,26 @@ export function formatPath(path: readonly PropertyKey[]): string {
   }, '');
 }
 
+/**
+ * A union (a face bore or an edge bore) that matches no branch reports "Invalid input" with the
+ * problems of every branch. The branch with the fewest problems is the one the author meant, so
+ * its problems are the ones worth showing, each at its full path.
+ */
+function flatten(issue: Issue, prefix: readonly PropertyKey[]): { path: PropertyKey[]; message: string }[] {
+  const path = [...prefix, ...issue.path];
+  if (issue.code === 'invalid_union' && issue.errors.length > 0) {
+    const closest = issue.errors.reduce((best, branch) => (branch.length < best.length ? branch : best));
+    if (closest.length > 0) return closest.flatMap((inner) => flatten(inner, path));
+  }
+  return [{ path, message: issue.message }];
+}
+
 /** One line per problem, each led by the path of the value it concerns: `fittings[3].bores[1].diameter: must be greater than 0`. */
 export function formatIssues(error: z.ZodError): string[] {
-  return error.issues.map((issue) => {
-    const where = formatPath(issue.path);
-    return where === '' ? issue.message : `${where}: ${issue.message}`;
-  });
+  return error.issues
+    .flatMap((issue) => flatten(issue, []))
+    .map(({ path, message }) => {
+      const where = formatPath(path);
+      return where === '' ? message : `${where}: ${message}`;
+    });
 }
