@@ -1,0 +1,101 @@
+import { line, text, type Shape } from './drawing';
+import type { Reach } from './map-panel';
+import type { MapView } from './map-view';
+import { viewPoint } from './map-view';
+import { distinctValues, spreadLabels } from './ordinates';
+import { MUTED } from './palette';
+import { estimateTextWidth } from './text-width';
+import { lengthText } from './units';
+
+const SIZE = 2.5;
+const SPACING = 3.1;
+const STRAIGHT = 3;
+const JOG = 4;
+const LEAD = { color: MUTED, width: 0.15 };
+
+/** A column of ordinate labels: values at positions along one axis of the sheet, written outwards from `start`. */
+interface Column {
+  /** Values and where they lie along the column, in any order. */
+  marks: { value: number; at: number }[];
+  /** The coordinate across the column where the leaders begin, just clear of the figure. */
+  start: number;
+  /** +1 when the labels go towards larger sheet coordinates (down or right), −1 otherwise. */
+  outward: 1 | -1;
+  /** 'x' when the marks lie along the sheet's x (labels written upright below or above the figure). */
+  along: 'x' | 'y';
+}
+
+/**
+ * Ordinate labels with leaders: a straight stub from each position, a jog to where the label has room,
+ * and the value. Returns the shapes and how far the column reaches from `start`.
+ */
+function ordinateColumn(column: Column): { shapes: Shape[]; depth: number } {
+  const marks = [...column.marks].sort((p, q) => p.at - q.at);
+  const placed = spreadLabels(
+    marks.map((m) => m.at),
+    SPACING,
+  );
+  const { start, outward } = column;
+  const v1 = start + outward * STRAIGHT;
+  const v2 = v1 + outward * JOG;
+  const shapes: Shape[] = [];
+  let longest = 0;
+  marks.forEach((mark, i) => {
+    const label = lengthText(mark.value);
+    longest = Math.max(longest, estimateTextWidth(label, SIZE));
+    const u = placed[i];
+    const at = (along: number, across: number): [number, number] => (column.along === 'x' ? [along, across] : [across, along]);
+    shapes.push(line(...at(mark.at, start), ...at(mark.at, v1), LEAD));
+    shapes.push(line(...at(mark.at, v1), ...at(u, v2), LEAD));
+    // The glyphs are centred on the leader: a baseline sits about a third of the size off the centre line.
+    const v3 = v2 + outward * 1;
+    if (column.along === 'x') shapes.push(text(u + SIZE * 0.35, v3, label, SIZE, MUTED, outward > 0 ? 'end' : 'start', true));
+    else shapes.push(text(v3, u + SIZE * 0.35, label, SIZE, MUTED, outward > 0 ? 'start' : 'end'));
+  });
+  return { shapes, depth: STRAIGHT + JOG + 1 + longest };
+}
+
+/**
+ * Ordinate dimensions of a map: x from the reference edge written below the figure, y from the lower edge
+ * written on the reference edge's side, each value once however many bores share it, the panel's own size
+ * included. Shapes are relative to the outline's top left; the result's reach includes `figure`'s.
+ */
+export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shape[]; reach: Reach } {
+  const { width: W, height: H } = view.panel;
+  const xs = distinctValues([
+    0,
+    W,
+    ...view.faceBores.map((b) => b.x),
+    ...view.edgeBores.filter((b) => b.edge === 'y0' || b.edge === 'y1').map((b) => b.at),
+  ]);
+  const ys = distinctValues([
+    0,
+    H,
+    ...view.faceBores.map((b) => b.y),
+    ...view.edgeBores.filter((b) => b.edge === 'x0' || b.edge === 'x1').map((b) => b.at),
+  ]);
+  const below = ordinateColumn({
+    marks: xs.map((value) => ({ value, at: viewPoint(view, value, 0).x })),
+    start: H + figure.bottom + 1,
+    outward: 1,
+    along: 'x',
+  });
+  const onLeft = view.face === 'A';
+  const beside = ordinateColumn({
+    marks: ys.map((value) => ({ value, at: viewPoint(view, 0, value).y })),
+    start: onLeft ? -figure.left - 1 : W + figure.right + 1,
+    outward: onLeft ? -1 : 1,
+    along: 'y',
+  });
+  const reach = { ...figure };
+  reach.bottom += 1 + below.depth;
+  if (onLeft) reach.left += 1 + beside.depth;
+  else reach.right += 1 + beside.depth;
+  const captions = [
+    text(onLeft ? -reach.left : W + reach.right, H + reach.bottom + 4, 'x: mm from the reference edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
+    text(onLeft ? -reach.left : W + reach.right, -figure.top - 3, 'y: mm from the lower edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
+  ];
+  reach.bottom += 5;
+  reach.top += 5;
+  return { shapes: [...below.shapes, ...beside.shapes, ...captions], reach };
+}
