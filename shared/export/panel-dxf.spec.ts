@@ -1,0 +1,97 @@
+import DxfParser from 'dxf-parser';
+import { describe, expect, it } from 'vitest';
+import { panelBores } from '../layout/panel-layout';
+import { exportContext, exportJob } from '../testing/export-job';
+import { checkedLayerName, edgeBoreLayer, faceBoreLayer } from './dxf-layers';
+import { panelDxf } from './panel-dxf';
+
+const ctx = exportContext(exportJob({}, [{ id: 'odd', name: 'Odd', role: 'loose', width: 300.1, height: 200.2, thickness: 18, material: 'pb18', bores: [{ id: 'h', x: 0.1 + 0.2, y: 10.000000001, face: 'A', diameter: 5, depth: 10 }] }]));
+
+interface Entity {
+  type: string;
+  layer: string;
+  center?: { x: number; y: number };
+  radius?: number;
+  vertices?: { x: number; y: number }[];
+  text?: string;
+}
+
+/** Reads a DXF file with dxf-parser (npm registry), the outside reader. */
+function read(panelIndex: number) {
+  const panel = ctx.job.panels[panelIndex];
+  const bores = panelBores(panel, ctx.catalog, ctx.job.system);
+  const text = panelDxf(ctx, panel, bores);
+  const parsed = new DxfParser().parseSync(text) as unknown as { header: Record<string, unknown>; entities: Entity[]; tables: { layer: { layers: Record<string, unknown> } } };
+  return { panel, bores, text, parsed };
+}
+
+describe('panel DXF', () => {
+  it('is ASCII DXF of AutoCAD 2007 in millimetres', () => {
+    const { text, parsed } = read(0);
+    // DXF reference, HEADER section (from memory): $ACADVER AC1021 is AutoCAD 2007, $INSUNITS 4 is millimetres.
+    expect(parsed.header['$INSUNITS']).toBe(4);
+    expect(parsed.header['$ACADVER']).toBe('AC1021');
+    expect(/^[\x09\x0a\x0d\x20-\x7e\u00a0-\uffff]*$/.test(text)).toBe(true);
+  });
+
+  it('has a CIRCLE for every face bore, its centre and radius those of the bore, on its face, diameter and depth layer', () => {
+    for (const index of [0, 2]) {
+      const { bores, parsed } = read(index);
+      const circles = parsed.entities.filter((e) => e.type === 'CIRCLE');
+      const faceBores = bores.filter((b) => b.kind === 'face');
+      expect(circles).toHaveLength(faceBores.length);
+      for (const bore of faceBores) {
+        const layer = faceBoreLayer(bore.face, bore.diameter, bore.through ? 'through' : bore.depth);
+        const match = circles.find((c) => c.layer === layer && Math.abs(c.center!.x - bore.x) < 0.001 && Math.abs(c.center!.y - bore.y) < 0.001);
+        expect(match, `circle of ${bore.id}`).toBeDefined();
+        expect(Math.abs(match!.radius! - bore.diameter / 2)).toBeLessThan(0.001);
+      }
+    }
+  });
+
+  it('keeps face B bores on layers of their own and names layers our way', () => {
+    const { parsed } = read(0);
+    const layers = Object.keys(parsed.tables.layer.layers);
+    expect(layers).toEqual(expect.arrayContaining(['PANEL_OUTLINE', 'BORE_A_D5_Z13', 'BORE_B_D8_Z11', 'BORE_A_D7_THRU', 'EDGE_Y0_D8_Z21', 'EDGE_X1_D5_Z50']));
+    for (const entity of parsed.entities) expect(layers).toContain(entity.layer);
+  });
+
+  it('draws the outline as a closed polyline of the panel size', () => {
+    const { panel, parsed } = read(0);
+    const outline = parsed.entities.find((e) => e.type === 'LWPOLYLINE' && e.layer === 'PANEL_OUTLINE')!;
+    expect(outline.vertices).toEqual([
+      { x: 0, y: 0 },
+      { x: panel.width, y: 0 },
+      { x: panel.width, y: panel.height },
+      { x: 0, y: panel.height },
+    ]);
+  });
+
+  it('shows an edge bore outside its edge, as long as it is deep, with its position, height and depth written', () => {
+    const { panel, parsed } = read(0);
+    const onLayer = parsed.entities.filter((e) => e.layer === 'EDGE_X1_D5_Z50');
+    const rectangle = onLayer.find((e) => e.type === 'LWPOLYLINE')!;
+    const xs = rectangle.vertices!.map((v) => v.x);
+    const ys = rectangle.vertices!.map((v) => v.y);
+    expect([Math.min(...xs), Math.max(...xs)]).toEqual([panel.width, panel.width + 50]);
+    expect([Math.min(...ys), Math.max(...ys)]).toEqual([357.5, 362.5]);
+    expect(onLayer.find((e) => e.type === 'TEXT')!.text).toBe('X1 AT 360 H 9 FROM FACE A D5 DEPTH 50');
+  });
+
+  it('rounds coordinates to 0.0001 mm: no 0.30000000000000004 or 1e-7 in the file', () => {
+    const { text, parsed } = read(4);
+    expect(text).not.toMatch(/\d\.\d{5,}|e-\d/);
+    const circle = parsed.entities.find((e) => e.type === 'CIRCLE')!;
+    expect(circle.center).toEqual({ x: 0.3, y: 10, z: 0 });
+  });
+});
+
+describe('layer names', () => {
+  it('are ours and refuse what a DXF reader would change', () => {
+    expect(faceBoreLayer('A', 5, 13)).toBe('BORE_A_D5_Z13');
+    expect(faceBoreLayer('B', 7.5, 'through')).toBe('BORE_B_D7.5_THRU');
+    expect(edgeBoreLayer('x0', 8, 30)).toBe('EDGE_X0_D8_Z30');
+    expect(() => checkedLayerName('BORE A')).toThrow(/not one of ours/);
+    expect(() => checkedLayerName('BORE/A')).toThrow(/not one of ours/);
+  });
+});
