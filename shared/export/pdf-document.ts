@@ -1,0 +1,47 @@
+import { PDFDocument, PrintScaling } from 'pdf-lib';
+import type { Drawing } from './drawing';
+import { embedDrawingFont } from './pdf-font';
+import { PdfDrawer } from './pdf-render';
+import { mmToPt } from './units';
+
+/** What every PDF we write records about itself. */
+export interface PdfOptions {
+  /** The TrueType font to draw text with (names, Ø): the product ships one. */
+  fontBytes: Uint8Array;
+  title: string;
+  /** The date the document records as made: the export's, so the same job gives the same file. */
+  date: Date;
+  /** What made the file. */
+  producer: string;
+}
+
+/** A new PDF with the drawing font embedded and a drawer for it. */
+export async function startPdf(options: PdfOptions): Promise<{ doc: PDFDocument; drawer: PdfDrawer }> {
+  const doc = await PDFDocument.create();
+  return { doc, drawer: new PdfDrawer(doc, await embedDrawingFont(doc, options.fontBytes)) };
+}
+
+/**
+ * Finishes a PDF: print scaling set to none, so that a reader's print dialog does not shrink the drawing to
+ * fit, and the title, producer and dates recorded. Returns the file.
+ */
+export async function finishPdf(doc: PDFDocument, options: PdfOptions): Promise<Uint8Array> {
+  doc.catalog.getOrCreateViewerPreferences().setPrintScaling(PrintScaling.None);
+  doc.setTitle(options.title);
+  doc.setProducer(options.producer);
+  doc.setCreator(options.producer);
+  doc.setCreationDate(options.date);
+  doc.setModificationDate(options.date);
+  return doc.save();
+}
+
+/** Drawings as a PDF, each on a page of its own size at 1:1. */
+export async function drawingsPdf(drawings: readonly Drawing[], options: PdfOptions): Promise<Uint8Array> {
+  const { doc, drawer } = await startPdf(options);
+  for (const drawing of drawings) {
+    const page = doc.addPage([mmToPt(drawing.width), mmToPt(drawing.height)]);
+    await drawer.prepare(drawing.shapes);
+    drawer.draw(page, drawing.shapes, { x: 0, y: mmToPt(drawing.height) });
+  }
+  return finishPdf(doc, options);
+}

@@ -1,0 +1,39 @@
+import { clip, endPath, popGraphicsState, pushGraphicsState, rectangle } from 'pdf-lib';
+import type { Drawing } from './drawing';
+import type { PaperName } from './paper';
+import { finishPdf, startPdf, type PdfOptions } from './pdf-document';
+import { templatePage } from './template-page';
+import { planTiles } from './tiles';
+import { mmToPt } from './units';
+
+/**
+ * Template sheets of a panel as a PDF: each drilling map at exactly 1:1 (1 mm = 72/25.4 pt), tiled onto A4
+ * or US Letter pages with overlap strips, registration crosses, page labels, a small map of the tiles and
+ * a 100 mm check bar across and down on every page; the file asks readers not to scale it when printing.
+ * Each map is stored once, as a form XObject every one of its pages shows through a clipped window.
+ */
+export async function templateSheetsPdf(maps: readonly Drawing[], paper: PaperName, options: PdfOptions): Promise<Uint8Array> {
+  const { doc, drawer } = await startPdf(options);
+  const sheets = [];
+  for (const map of maps) sheets.push({ map, plan: planTiles(map.width, map.height, paper), kept: await drawer.keep(map) });
+  const pages = sheets.reduce((n, s) => n + s.plan.tiles.length, 0);
+  let page = 0;
+  for (const { map, plan, kept } of sheets) {
+    const { window: w, pageWidth, pageHeight } = plan;
+    for (const tile of plan.tiles) {
+      page++;
+      const pdfPage = doc.addPage([mmToPt(pageWidth), mmToPt(pageHeight)]);
+      const top = { x: 0, y: mmToPt(pageHeight) };
+      const furniture = templatePage(plan, tile, map.title, page, pages);
+      await drawer.prepare(furniture.over);
+      drawer.draw(pdfPage, furniture.under, top);
+      const bottom = pageHeight - w.y - w.height;
+      pdfPage.pushOperators(pushGraphicsState(), rectangle(mmToPt(w.x), mmToPt(bottom), mmToPt(w.width), mmToPt(w.height)), clip(), endPath());
+      // The map's top left corner lies `tile.area` before the window's top left.
+      pdfPage.drawPage(kept, { x: mmToPt(w.x - tile.area.x), y: mmToPt(pageHeight - (w.y - tile.area.y + map.height)) });
+      pdfPage.pushOperators(popGraphicsState());
+      drawer.draw(pdfPage, furniture.over, top);
+    }
+  }
+  return finishPdf(doc, options);
+}
