@@ -30,7 +30,7 @@ export function createApiRouter(deps: AppDeps): Router {
     next();
   });
   router.use(
-    sessionMiddleware(db, { secret: deps.sessionSecret, secure: config.env === 'production', idleMs: config.session.idleMs }),
+    sessionMiddleware(db, { secret: deps.sessionSecret, secure: config.secureCookies, idleMs: config.session.idleMs }),
     // Before the timeouts: a request from a session that has just expired should answer 401, not 403.
     csrfProtection,
     sessionTimeouts(config.session, context.clock),

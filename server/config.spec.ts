@@ -35,7 +35,8 @@ describe('loadConfig', () => {
     expect(() => loadConfig({ NODE_ENV: 'production' })).toThrow('SESSION_SECRET: is required when NODE_ENV=production');
     expect(() => loadConfig({ NODE_ENV: 'production', SESSION_SECRET: 'short' })).toThrow('SESSION_SECRET: must be at least 32 characters long');
     const secret = 's'.repeat(32);
-    expect(loadConfig({ NODE_ENV: 'production', SESSION_SECRET: secret }).demoAccounts).toBe(false);
+    expect(loadConfig({ NODE_ENV: 'production', SESSION_SECRET: secret })).toMatchObject({ demoAccounts: false, secureCookies: true });
+    expect(loadConfig({}).secureCookies).toBe(false);
     expect(loadConfig({ NODE_ENV: 'production', SESSION_SECRET: secret, ALLOW_DEMO_IN_PRODUCTION: 'true' }).demoAccounts).toBe(true);
   });
 

@@ -49,6 +49,8 @@ export type Config = {
   smtpUrl?: string;
   /** Demo accounts are created and may sign in: always outside production, in production only when allowed. */
   demoAccounts: boolean;
+  /** Cookies only over HTTPS: in production (behind TLS, with TRUST_PROXY set when a proxy ends it). */
+  secureCookies: boolean;
   trustProxy?: string;
   logLevel: string;
   session: { idleMs: number; absoluteMs: number };
@@ -75,6 +77,7 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     sessionSecret: env.SESSION_SECRET,
     smtpUrl: env.SMTP_URL,
     demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,
+    secureCookies: env.NODE_ENV === 'production',
     trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     session: { idleMs: env.SESSION_IDLE_MINUTES * 60_000, absoluteMs: env.SESSION_MAX_DAYS * 86_400_000 },

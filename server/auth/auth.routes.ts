@@ -10,7 +10,7 @@ import { signInLimits } from './sign-in-limits';
 
 /** Sign-in, sign-out and "who am I"; /auth/me also hands the client its XSRF token. */
 export function authRoutes(router: Router, { config, clock, authenticator }: RouteContext): void {
-  const cookie = { secure: config.env === 'production', maxAge: config.session.idleMs };
+  const cookie = { secure: config.secureCookies, maxAge: config.session.idleMs };
 
   router.get('/auth/me', (req, res) => {
     issueCsrfToken(req, res, cookie);
