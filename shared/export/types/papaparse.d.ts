@@ -1,0 +1,21 @@
+// The part of papaparse that shared/ uses, for tsconfig.shared.json only. The package's own types begin
+// with `/// <reference types="node" />`, which would bring Node's globals into shared/ and let a Node-only
+// API pass the platform-free check unnoticed. tsconfig.server.json compiles the same calls against the
+// package's own types, so a mismatch here still fails a type check.
+export interface UnparseConfig {
+  quotes?: boolean | boolean[];
+  delimiter?: string;
+  newline?: string;
+  header?: boolean;
+  escapeFormulae?: boolean | RegExp;
+}
+
+export interface UnparseObject {
+  fields: string[];
+  data: unknown[][];
+}
+
+export function unparse(data: unknown[][] | UnparseObject, config?: UnparseConfig): string;
+
+declare const Papa: { unparse: typeof unparse };
+export default Papa;
