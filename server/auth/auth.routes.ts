@@ -3,9 +3,8 @@ import { signInBody } from '../../shared/api/contract';
 import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
 import type { RouteContext } from '../http/route-context';
-import { issueCsrfToken, XSRF_COOKIE } from './csrf';
+import { issueCsrfToken } from './csrf';
 import { authenticateLocal, logIn } from './passport';
-import { SESSION_COOKIE } from './sessions';
 import { signInLimits } from './sign-in-limits';
 
 /** Sign-in, sign-out and "who am I"; /auth/me also hands the client its XSRF token. */
@@ -28,8 +27,11 @@ export function authRoutes(router: Router, { config, clock, authenticator }: Rou
     res.json({ user });
   });
 
+  // The signed-in session is destroyed; a fresh, empty one with its own token takes its place, so the
+  // sign-in page can send a new sign-in without reloading.
   router.post('/auth/sign-out', async (req, res) => {
-    await new Promise<void>((resolve, reject) => req.session.destroy((err) => (err ? reject(err) : resolve())));
-    res.clearCookie(SESSION_COOKIE, { path: '/' }).clearCookie(XSRF_COOKIE, { path: '/' }).status(204).end();
+    await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+    issueCsrfToken(req, res, cookie);
+    res.status(204).end();
   });
 }

@@ -52,13 +52,19 @@ describe('sign-in and sessions', () => {
     expect(res.body.error.fields).toEqual({ email: 'must be an e-mail address', password: 'must not be empty' });
   });
 
-  it('ends the session at sign-out', async () => {
+  it('destroys the session at sign-out and hands out a fresh token for the next sign-in', async () => {
     const client = await signedIn(t.app, 'bench@greyfield.example');
-    const stored = await t.database.db.$count(sessions);
+    const sids = async () => (await t.database.db.select({ sid: sessions.sid }).from(sessions)).map((r) => r.sid);
+    const before = await sids();
+    const oldToken = client.xsrfToken;
     const res = await client.post('/api/auth/sign-out');
     expect(res.status).toBe(204);
-    expect(await t.database.db.$count(sessions)).toBe(stored - 1);
-    expect((await client.me()).status).toBe(401);
+    const after = await sids();
+    expect(before.filter((sid) => !after.includes(sid))).toHaveLength(1);
+    expect(client.xsrfToken).toBeDefined();
+    expect(client.xsrfToken).not.toBe(oldToken);
+    expect((await client.get('/api/auth/me')).status).toBe(401);
+    expect((await client.post('/api/auth/sign-in').send({ email: 'bench@greyfield.example', password: 'greyfield-demo' })).status).toBe(200);
   });
 
   it('refuses a mutating request without the XSRF header, or with another session\'s', async () => {

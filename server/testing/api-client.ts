@@ -20,30 +20,34 @@ export class ApiClient {
     return this.token;
   }
 
-  private remember(res: Response): Response {
-    const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
-    const xsrf = cookies.find((c) => c.startsWith(`${XSRF_COOKIE}=`));
-    if (xsrf) this.token = decodeURIComponent(xsrf.slice(XSRF_COOKIE.length + 1).split(';')[0]);
-    return res;
+  /** Keeps the token of any answer that hands one out, as the browser keeps the cookie. */
+  private track(test: Test): Test {
+    test.on('response', (res: Response) => {
+      const cookies = ([] as string[]).concat(res.headers['set-cookie'] ?? []);
+      const xsrf = cookies.find((c) => c.startsWith(`${XSRF_COOKIE}=`));
+      if (xsrf) this.token = decodeURIComponent(xsrf.slice(XSRF_COOKIE.length + 1).split(';')[0]);
+    });
+    return test;
   }
 
   /** GET /api/auth/me, as the app does on load: starts a session and collects its XSRF token. */
-  async me(): Promise<Response> {
-    return this.remember(await this.agent.get('/api/auth/me'));
+  me(): Test {
+    return this.get('/api/auth/me');
   }
 
-  /** Signs in (a demo account by default password), keeping the fresh XSRF token. */
+  /** Signs in (with the demo password unless told otherwise), collecting a token first when it has none. */
   async signIn(email: string, password = DEMO_PASSWORD): Promise<Response> {
     if (!this.token) await this.me();
-    return this.remember(await this.post('/api/auth/sign-in').send({ email, password }));
+    return this.post('/api/auth/sign-in').send({ email, password });
   }
 
   get(url: string): Test {
-    return this.agent.get(url);
+    return this.track(this.agent.get(url));
   }
 
+  /** Mutating requests echo the token in the header, as Angular's HttpClient does. */
   private mutate(test: Test): Test {
-    return this.token ? test.set(XSRF_HEADER, this.token) : test;
+    return this.track(this.token ? test.set(XSRF_HEADER, this.token) : test);
   }
 
   post(url: string): Test {
