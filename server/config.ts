@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { formatIssues } from '../shared/model/validation-messages';
 
 const flag = z.enum(['true', 'false'], 'must be "true" or "false"').transform((v) => v === 'true');

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement } from '../model/job-document';
 
 /**

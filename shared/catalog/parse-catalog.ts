@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import type { ParseResult } from '../model/parse-job';
 import { formatIssues } from '../model/validation-messages';
 import { fitting, type Catalog, type Fitting } from './fitting';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /**
  * Finding codes (design.md §2), stable in the API, the CLI and tests. `unknown-fitting` marks a placement

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 
 /**
  * The job document, format `borewright.job/1` (design.md §3): the single definition of a job that the

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { JOB_FORMAT, jobDocument, type JobDocument } from './job-document';
 import { formatIssues } from './validation-messages';
 

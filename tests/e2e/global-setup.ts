@@ -38,14 +38,15 @@ async function waitForHealth(url: string, server: ChildProcess, seconds: number)
 }
 
 /** Builds the app, starts the real server as a user would (same entry point) and hands its URL to the tests. */
-export default async function setup(project: TestProject): Promise<() => void> {
+export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   const root = process.cwd();
   if (!process.env['E2E_SKIP_BUILD'] || !existsSync(join(root, 'dist/borewright/browser/index.html'))) {
     execFileSync('npx', ['ng', 'build'], { cwd: root, stdio: 'inherit', env: { ...process.env, NG_CLI_ANALYTICS: 'false' } });
   }
   const dataDir = mkdtempSync(join(tmpdir(), 'borewright-e2e-'));
   const port = await freePort();
-  const server = spawn('npx', ['tsx', 'server/main.ts'], {
+  // Node itself with tsx as a loader, not through npx, so that SIGTERM reaches the server and not a wrapper.
+  const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: root,
     env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, NODE_ENV: 'test', LOG_LEVEL: 'warn' },
     stdio: ['ignore', 'inherit', 'inherit'],
@@ -53,8 +54,10 @@ export default async function setup(project: TestProject): Promise<() => void> {
   const baseUrl = `http://127.0.0.1:${port}`;
   await waitForHealth(baseUrl, server, 90);
   project.provide('baseUrl', baseUrl);
-  return () => {
+  return async () => {
+    const exited = new Promise((resolve) => server.once('exit', resolve));
     server.kill('SIGTERM');
+    await exited;
     rmSync(dataDir, { recursive: true, force: true });
   };
 }
