@@ -36,7 +36,7 @@ describe('hole schedule', () => {
     expect(cup.slice(4)).toEqual(['A', '21.5', '87', '', '35', '13', 'no', 'Cup hinge, full overlay, 45/9.5', 'hinge cup']);
     const pilot = rows.find((r) => r[3] === 'pilot-x1')!;
     // An edge bore enters its edge (x1 at x = width) at its position along it, z from face A.
-    expect(pilot.slice(4, 11)).toEqual(['edge x1', '560', '360', '9', '5', '50', 'no']);
+    expect(pilot.slice(4, 11)).toEqual(['edge x1', '560', '345', '9', '5', '50', 'no']);
   });
 
   it('writes a name a spreadsheet would run as a formula as text, with a leading quote', () => {

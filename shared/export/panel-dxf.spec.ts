@@ -74,8 +74,8 @@ describe('panel DXF', () => {
     const xs = rectangle.vertices!.map((v) => v.x);
     const ys = rectangle.vertices!.map((v) => v.y);
     expect([Math.min(...xs), Math.max(...xs)]).toEqual([panel.width, panel.width + 50]);
-    expect([Math.min(...ys), Math.max(...ys)]).toEqual([357.5, 362.5]);
-    expect(onLayer.find((e) => e.type === 'TEXT')!.text).toBe('X1 AT 360 H 9 FROM FACE A D5 DEPTH 50');
+    expect([Math.min(...ys), Math.max(...ys)]).toEqual([342.5, 347.5]);
+    expect(onLayer.find((e) => e.type === 'TEXT')!.text).toBe('X1 AT 345 H 9 FROM FACE A D5 DEPTH 50');
   });
 
   it('rounds coordinates to 0.0001 mm: no 0.30000000000000004 or 1e-7 in the file', () => {

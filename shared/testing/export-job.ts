@@ -19,7 +19,7 @@ export function exportJob(fields: Partial<JobDocumentInput> = {}, extraPanels: P
           { id: 'through', x: 280, y: 400, face: 'A', diameter: 7, depth: 18 },
           { id: 'dowel-y0', edge: 'y0', at: 60, z: 9, diameter: 8, depth: 21 },
           { id: 'dowel-y1', edge: 'y1', at: 60, z: 9, diameter: 8, depth: 21 },
-          { id: 'pilot-x1', edge: 'x1', at: 360, z: 9, diameter: 5, depth: 50 },
+          { id: 'pilot-x1', edge: 'x1', at: 345, z: 9, diameter: 5, depth: 50 },
         ],
         placements: [
           { id: 'plate-low', fitting: 'plate-0', x: 37, y: 89, face: 'A' },
@@ -50,4 +50,18 @@ export function exportJob(fields: Partial<JobDocumentInput> = {}, extraPanels: P
 /** An export context for tests: the built-in catalog, a fixed date and version, so files come out the same every run. */
 export function exportContext(job: JobDocument = exportJob()): ExportContext {
   return { job, catalog: builtinCatalog(), date: new Date('2026-03-14T09:30:00Z'), generator: { name: 'Borewright', version: '0.0.0-test' } };
+}
+
+/** A panel whose two bores overlap: a `bores-overlap` error, for a job the checks find errors in. */
+export function clashPanel(): PanelInput {
+  return makePanel('clash', {
+    name: 'Clash',
+    role: 'loose',
+    width: 200,
+    height: 200,
+    bores: [
+      { id: 'a', x: 50, y: 50, face: 'A', diameter: 10, depth: 10 },
+      { id: 'b', x: 52, y: 50, face: 'A', diameter: 10, depth: 10 },
+    ],
+  });
 }

@@ -1,0 +1,76 @@
+import { readFileSync } from 'node:fs';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { describe, expect, it } from 'vitest';
+import { checkJob } from '../checks/index';
+import { panelBores } from '../layout/panel-layout';
+import type { JobDocument } from '../model/job-document';
+import { clashPanel, exportContext, exportJob } from '../testing/export-job';
+import { CAUTION_DEFERRAL, cautionsFor } from './cautions';
+import { coverSheet } from './cover-sheet';
+import { hardwareList } from './hardware-list';
+import { drawingsPdf } from './pdf-document';
+
+const fontBytes = new Uint8Array(readFileSync(new URL('./fonts/DejaVuSans.ttf', import.meta.url)));
+
+/** The cover sheet's text as pdfjs-dist reads it from the PDF, page after page. */
+async function coverText(job: JobDocument): Promise<{ text: string; pages: number }> {
+  const ctx = exportContext(job);
+  const pages = coverSheet({
+    ctx,
+    paper: 'a4',
+    findings: checkJob(job, ctx.catalog),
+    panels: job.panels.map((panel) => ({ panel, bores: panelBores(panel, ctx.catalog, job.system).length })),
+    hardware: hardwareList(ctx),
+    cautions: cautionsFor(job, ctx.catalog),
+  });
+  const bytes = await drawingsPdf(pages, { fontBytes, title: 'cover', date: ctx.date, producer: 'test' });
+  const doc = await getDocument({ data: bytes, disableFontFace: true, useSystemFonts: false }).promise;
+  const texts: string[] = [];
+  for (let n = 1; n <= doc.numPages; n++) {
+    const content = await (await doc.getPage(n)).getTextContent();
+    texts.push(content.items.map((item) => ('str' in item ? item.str : '')).join('\n'));
+  }
+  return { text: texts.join('\n'), pages: doc.numPages };
+}
+
+
+describe('cover sheet', () => {
+  it('says "contains errors" in large type when the checks found errors', async () => {
+    const { text } = await coverText(exportJob({}, [clashPanel()]));
+    expect(text).toContain('CONTAINS ERRORS');
+    expect(text).toContain('The checks found 1 error: see the findings. Fix them before drilling.');
+    expect(text).toContain('bores-overlap');
+  });
+
+  it('does not when there are none', async () => {
+    const { text } = await coverText(exportJob());
+    expect(text).not.toContain('CONTAINS ERRORS');
+    expect(text).toContain('The checks found nothing to report.');
+  });
+
+  it('shows the cautions that apply word for word, and what they defer to', async () => {
+    const job = exportJob({ carcasses: [{ id: 'base', name: 'Wall unit', width: 600, height: 720, depth: 300, material: 'pb18', mounting: 'wall' }] });
+    const { text } = await coverText(job);
+    const flat = text.replace(/\s+/g, ' ');
+    for (const caution of cautionsFor(job, exportContext(job).catalog)) expect(flat).toContain(`• ${caution.text}`);
+    expect(flat).toContain(CAUTION_DEFERRAL);
+    expect(flat).toContain('Wall-hung and floating units');
+  });
+
+  it('lists every panel with its status, and the hardware', async () => {
+    const job = exportJob();
+    job.panels[2].status = 'drilled';
+    const { text } = await coverText(job);
+    for (const panel of job.panels) expect(text).toContain(panel.id);
+    expect(text).toContain('drilled');
+    expect(text).toContain('Cup hinge, full overlay, 45/9.5');
+  });
+
+  it('runs onto as many pages as a long job needs, each numbered', async () => {
+    const many = Array.from({ length: 80 }, (_, i) => ({ id: `p${i}`, name: `Panel ${i}`, role: 'shelf' as const, width: 300, height: 500, thickness: 18, material: 'pb18' }));
+    const { text, pages } = await coverText(exportJob({}, many));
+    expect(pages).toBeGreaterThan(1);
+    expect(text).toContain(`Page ${pages} of ${pages}.`);
+    expect(text).toContain('p79');
+  });
+});

@@ -1,0 +1,73 @@
+import type { Drawing } from './drawing';
+import { panelDrillingMaps } from './drilling-map';
+import type { ExportContext } from './export-context';
+import { mapViews } from './map-view';
+import { panelDxf } from './panel-dxf';
+import type { PanelDrilling } from './panel-drilling';
+import { PAPER, type PaperName } from './paper';
+import { drawingToSvg, type SvgWindow } from './svg-render';
+import { templateSheetsPdf } from './template-pdf';
+
+// TextEncoder belongs to every runtime we run in (browsers, Node, workers) but not to the ECMAScript
+// library that keeps shared/ platform-free, so it is declared here as far as it is used.
+declare const TextEncoder: { new (): { encode(text: string): Uint8Array } };
+const utf8 = new TextEncoder();
+
+/** UTF-8 bytes of a text file. */
+export function utf8Bytes(value: string): Uint8Array {
+  return utf8.encode(value);
+}
+
+/** One file of an export, made when asked for, so that a pack never holds all of its files at once. */
+export interface ExportFile {
+  /** The file's name in its folder. */
+  name: string;
+  /** What it is, for progress lines. */
+  label: string;
+  /** Whether zipping can make it smaller: a PDF is compressed already. */
+  compress: boolean;
+  produce: () => Promise<Uint8Array>;
+}
+
+/** What the files of a panel need besides the job. */
+export interface PanelFileOptions {
+  paper: PaperName;
+  /** The TrueType font the PDFs draw text with. */
+  fontBytes: Uint8Array;
+  /** A fresh SVG window for each drawing (svgdom's on the server). */
+  svgWindow: () => SvgWindow;
+}
+
+/**
+ * A panel's files: its drilling map as SVG (face A, and face B when it has bores of its own), its DXF, and
+ * its template sheets as PDF. Names start with `base`. The maps are laid out once for all three kinds
+ * and let go after the PDF, the last file to need them.
+ */
+export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: string, options: PanelFileOptions): ExportFile[] {
+  const { panel, bores } = drilling;
+  let maps: Drawing[] | undefined;
+  const drawMaps = () => (maps ??= panelDrillingMaps(ctx, panel, bores));
+  const faces = mapViews(panel, bores).map((view) => view.face);
+  const svgs: ExportFile[] = faces.map((face, i) => ({
+    name: `${base} face ${face}.svg`,
+    label: `${panel.name}: drilling map, face ${face}`,
+    compress: true,
+    produce: async () => utf8Bytes(drawingToSvg(drawMaps()[i], options.svgWindow())),
+  }));
+  const paper = PAPER[options.paper].name;
+  return [
+    ...svgs,
+    { name: `${base}.dxf`, label: `${panel.name}: DXF`, compress: true, produce: async () => utf8Bytes(panelDxf(ctx, panel, bores)) },
+    {
+      name: `${base} templates ${paper}.pdf`,
+      label: `${panel.name}: template sheets`,
+      compress: false,
+      produce: async () => {
+        const drawn = drawMaps();
+        maps = undefined;
+        const title = `${ctx.job.name}: ${panel.name}, template sheets`;
+        return templateSheetsPdf(drawn, options.paper, { fontBytes: options.fontBytes, title, date: ctx.date, producer: `${ctx.generator.name} ${ctx.generator.version}` });
+      },
+    },
+  ];
+}
