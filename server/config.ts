@@ -57,6 +57,7 @@ export type Config = {
   signInLimits: { windowMs: number; perAccount: number; perAddress: number };
 };
 
+/** The environment is not valid; the message names every bad variable. */
 export class ConfigError extends Error {}
 
 /** Reads and checks the environment; throws a ConfigError naming every bad variable. */

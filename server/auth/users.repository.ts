@@ -13,16 +13,19 @@ export async function findAccountByEmail(db: Database, email: string) {
   return row;
 }
 
+/** The account with this id, without its password hash. */
 export async function findAccount(db: Database, id: number) {
   const [row] = await db.select(accountColumns).from(users).where(eq(users.id, id));
   return row;
 }
 
+/** How many accounts exist; the demo seed runs only when none do. */
 export async function countUsers(db: Database): Promise<number> {
   const [row] = await db.select({ n: count() }).from(users);
   return row.n;
 }
 
+/** Adds accounts; returns them without their password hashes. */
 export async function insertUsers(db: Database, rows: (typeof users.$inferInsert)[]) {
   return db.insert(users).values(rows).returning(accountColumns);
 }

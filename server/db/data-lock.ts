@@ -4,6 +4,7 @@ import path from 'node:path';
 /** The lock file's name inside the data folder. */
 export const LOCK_FILE = 'borewright.lock';
 
+/** Another live process holds the data folder; the message says which and what to do. */
 export class DataFolderLockedError extends Error {}
 
 export interface DataLock {

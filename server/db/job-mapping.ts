@@ -73,11 +73,13 @@ function groupByPanel<T extends { id: number; panelId: number }>(rows: readonly 
   return groups;
 }
 
+/** A carcass row as the document's carcass. */
 export function toCarcass(row: CarcassRow): Carcass {
   const { key, name, width, height, depth, material, mounting } = row;
   return { id: key, name, width, height, depth, material, mounting };
 }
 
+/** A placement row as the document's placement; absent options stay absent. */
 export function toPlacement(row: PlacementRow): Placement {
   return {
     id: row.key,
@@ -91,6 +93,7 @@ export function toPlacement(row: PlacementRow): Placement {
   };
 }
 
+/** A bore row as the document's face or edge bore. */
 export function toBore(row: BoreRow): Bore {
   const common = { id: row.key, diameter: row.diameter, depth: row.depth };
   return row.edge !== null
@@ -153,6 +156,7 @@ export function toJobDocument(rows: JobRows): JobDocument {
   };
 }
 
+/** A placement of the document as the fields of its row. */
 export function placementDraft(p: Placement): PlacementDraft {
   return {
     key: p.id,
@@ -166,6 +170,7 @@ export function placementDraft(p: Placement): PlacementDraft {
   };
 }
 
+/** A face or edge bore of the document as the fields of its row; the other kind's columns stay null. */
 export function boreDraft(b: Bore): BoreDraft {
   const none = { x: null, y: null, face: null, edge: null, at: null, z: null };
   return isEdgeBore(b)

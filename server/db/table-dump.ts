@@ -42,6 +42,7 @@ export async function dumpTables(db: Database, createdAt: Date): Promise<Backup>
   return { format: BACKUP_FORMAT, createdAt: createdAt.toISOString(), schema: currentSchema(), tables };
 }
 
+/** A backup that cannot be restored here; the message says why. */
 export class RestoreError extends Error {}
 
 /**

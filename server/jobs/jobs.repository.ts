@@ -20,16 +20,19 @@ export function listJobSummaries(db: Database, archived: boolean) {
   return db.select(summaryColumns(db)).from(jobs).where(eq(jobs.archived, archived)).orderBy(desc(jobs.updatedAt), desc(jobs.id));
 }
 
+/** One job with its counts, as listed. */
 export async function findJobSummary(db: Database, id: number) {
   const [row] = await db.select(summaryColumns(db)).from(jobs).where(eq(jobs.id, id));
   return row;
 }
 
+/** How many jobs exist, archived ones included. */
 export async function countJobs(db: Database): Promise<number> {
   const [row] = await db.select({ n: count() }).from(jobs);
   return row.n;
 }
 
+/** The job's own row: settings, limits and materials included. */
 export async function findJob(db: Database, id: number) {
   const [row] = await db.select().from(jobs).where(eq(jobs.id, id));
   return row;
@@ -68,6 +71,7 @@ export async function insertJobDraft(tx: Database, draft: JobDocumentDraft): Pro
   return jobId;
 }
 
+/** Changes the job's own fields; undefined when there is no such job. */
 export async function updateJob(db: Database, id: number, changes: Partial<Pick<typeof jobs.$inferInsert, 'name' | 'client' | 'notes' | 'archived'>>) {
   const [row] = await db
     .update(jobs)
@@ -82,11 +86,13 @@ export async function touchJob(db: Database, id: number): Promise<void> {
   await db.update(jobs).set({ updatedAt: sql`now()` }).where(eq(jobs.id, id));
 }
 
+/** The job's carcasses: document id to database id. */
 export async function carcassKeys(db: Database, jobId: number): Promise<Map<string, number>> {
   const rows = await db.select({ id: carcasses.id, key: carcasses.key }).from(carcasses).where(eq(carcasses.jobId, jobId));
   return new Map(rows.map((r) => [r.key, r.id]));
 }
 
+/** Adds a carcass to the job and returns its row. */
 export async function insertCarcass(db: Database, jobId: number, draft: CarcassDraft) {
   const [row] = await db.insert(carcasses).values({ ...draft, jobId }).returning();
   return row;

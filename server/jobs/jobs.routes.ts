@@ -7,6 +7,7 @@ import type { RouteContext } from '../http/route-context';
 import { documentFileName } from './document-file-name';
 import * as jobs from './jobs.service';
 
+/** The jobs: list, create, import, read, change, download as a document, add carcasses. */
 export function jobsRoutes(router: Router, { db }: RouteContext): void {
   router.get('/jobs', requirePermission('readJobs'), async (req, res) => {
     const { archived } = jobListQuery.parse(req.query);

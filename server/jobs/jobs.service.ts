@@ -1,10 +1,8 @@
-import type { Carcass, JobDocument } from '../../shared/model/job-document';
-import { JOB_FORMAT, jobDocument } from '../../shared/model/job-document';
-import { DEFAULT_MATERIALS } from '../../shared/model/default-materials';
-import { parseJobDocument } from '../../shared/model/parse-job';
-import type { JobDetail, JobSummary, User } from '../../shared/api/contract';
-import type { carcassCreateBody, jobCreateBody, jobUpdateBody } from '../../shared/api/contract';
 import type { z } from 'zod';
+import type { carcassCreateBody, JobDetail, jobCreateBody, JobSummary, jobUpdateBody, User } from '../../shared/api/contract';
+import { DEFAULT_MATERIALS } from '../../shared/model/default-materials';
+import { JOB_FORMAT, jobDocument, type Carcass, type JobDocument } from '../../shared/model/job-document';
+import { parseJobDocument } from '../../shared/model/parse-job';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
 import { fromJobDocument, toCarcass, toJobDocument, toPanelRecords } from '../db/job-mapping';
@@ -26,6 +24,7 @@ export async function jobSummary(db: Database, jobId: number): Promise<JobSummar
   return toSummary(row);
 }
 
+/** The active or the archived jobs, most recently changed first. */
 export async function listJobs(db: Database, archived: boolean): Promise<JobSummary[]> {
   return (await repo.listJobSummaries(db, archived)).map(toSummary);
 }
@@ -36,6 +35,7 @@ async function jobRows(db: Database, jobId: number) {
   return rows;
 }
 
+/** A job with its materials, carcasses and panels, for the job page. */
 export async function jobDetail(db: Database, jobId: number): Promise<JobDetail> {
   const rows = await jobRows(db, jobId);
   const { materials, carcasses } = toJobDocument(rows);
@@ -47,6 +47,7 @@ export async function jobDetail(db: Database, jobId: number): Promise<JobDetail>
   };
 }
 
+/** The job as a `borewright.job/1` document. */
 export async function jobAsDocument(db: Database, jobId: number): Promise<JobDocument> {
   return toJobDocument(await jobRows(db, jobId));
 }
@@ -95,6 +96,7 @@ export function importJob(db: Database, actor: User, doc: JobDocument, fileName?
   return storeJob(db, actor, doc, 'job.imported', fileName ? { file: fileName } : {});
 }
 
+/** Renames, re-notes, archives or unarchives a job, with its activity entry. */
 export async function updateJob(db: Database, actor: User, jobId: number, body: z.output<typeof jobUpdateBody>): Promise<JobSummary> {
   await db.transaction(async (tx) => {
     if (!(await repo.updateJob(tx, jobId, body))) throw notFound(`Job ${jobId}`);

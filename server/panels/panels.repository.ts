@@ -4,6 +4,7 @@ import type { Database } from '../db/client';
 import { toPanelRecord, type BoreDraft, type PanelDraft, type PanelRow, type PlacementDraft } from '../db/job-mapping';
 import { bores, carcasses, panels, placements } from '../db/schema';
 
+/** The panel's row, without its drilling. */
 export async function findPanel(db: Database, id: number): Promise<PanelRow | undefined> {
   const [row] = await db.select().from(panels).where(eq(panels.id, id));
   return row;
@@ -29,6 +30,7 @@ export async function loadPanelRecord(db: Database, id: number): Promise<PanelRe
   return toPanelRecord(found.panel, found.carcassKey ?? undefined, placementRows, boreRows);
 }
 
+/** Adds a panel row; returns its database id. */
 export async function insertPanel(db: Database, row: PanelDraft & { jobId: number; carcassId: number | null }): Promise<number> {
   const [{ id }] = await db.insert(panels).values(row).returning({ id: panels.id });
   return id;

@@ -5,6 +5,7 @@ import { jsonBody } from '../http/body';
 import type { RouteContext } from '../http/route-context';
 import * as panels from './panels.service';
 
+/** The panels: add to a job, change, delete, save drilling, mark status. */
 export function panelsRoutes(router: Router, { db }: RouteContext): void {
   router.post('/jobs/:jobId/panels', requirePermission('editJobs'), jsonBody, async (req, res) => {
     const { jobId } = jobParams.parse(req.params);

@@ -93,6 +93,7 @@ async function changePanel(
   });
 }
 
+/** Changes a panel's board fields (name, role, sizes, material, carcass) at the version the client saw. */
 export function updatePanel(db: Database, actor: User, panelId: number, body: z.output<typeof panelUpdateBody>): Promise<PanelRecord> {
   const { version, ...fields } = body;
   const named = Object.keys(fields).filter((k) => fields[k as keyof typeof fields] !== undefined);
@@ -115,6 +116,7 @@ export function saveDrilling(db: Database, actor: User, panelId: number, body: z
   });
 }
 
+/** Marks a panel planned, drilled or checked, at the version the client saw. */
 export function setPanelStatus(db: Database, actor: User, panelId: number, body: z.output<typeof panelStatusBody>): Promise<PanelRecord> {
   return changePanel(db, actor, panelId, body.version, 'panel.status-changed', async (_tx, current) => ({
     changes: { status: body.status },
