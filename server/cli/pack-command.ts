@@ -1,0 +1,96 @@
+import { open, rename, rm, stat, type FileHandle } from 'node:fs/promises';
+import { pipeline } from 'node:stream/promises';
+import { parseArgs } from 'node:util';
+import { planPack } from '../../shared/export/pack';
+import type { PaperName } from '../../shared/export/paper';
+import { parseJobDocument } from '../../shared/model/parse-job';
+import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
+import { packZipStream } from '../export/pack-zip';
+import { EXIT, type CliIo } from './cli-io';
+import { loadCatalog } from './load-catalog';
+import { progressLine, type ProgressStream } from './progress-line';
+import { readJsonFile } from './read-json';
+
+export const PACK_USAGE = `Usage: borewright pack <job.json> -o <pack.zip> [--paper a4|letter] [--catalog <fittings.json>]
+
+Writes the bench pack of a job document: per panel its drilling maps (SVG), a DXF file and template
+sheets to print at 100 % (PDF), in a folder per carcass; a cover sheet, the hole schedule, the hardware
+list and a manifest with the SHA-256 of every file.
+  -o, --output <file>    the zip to write
+  --paper a4|letter      the paper the template sheets are tiled onto (default a4)
+  --catalog <file>       add a shop's own fittings to the built-in catalog
+Exit code: 0 written, 1 written but the checks found errors (the cover sheet says so),
+2 nothing written: the job file, the options or the output cannot be used.`;
+
+const PAPERS: readonly PaperName[] = ['a4', 'letter'];
+
+const megabytes = (bytes: number) => `${(bytes / 1e6).toFixed(1)} MB`;
+
+/** Why a file cannot be opened for writing, in plain words. */
+function whyNot(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  return code === 'ENOENT' ? 'its folder does not exist' : code === 'EACCES' || code === 'EPERM' ? 'permission denied' : code === 'EISDIR' ? 'it is a folder' : (error as Error).message;
+}
+
+/** `borewright pack`: writes a job's bench pack as a zip, streamed, with a progress line on standard error. */
+export async function packCommand(args: string[], io: CliIo, progressStream?: ProgressStream): Promise<number> {
+  const { values, positionals } = parseArgs({
+    args,
+    allowPositionals: true,
+    options: { output: { type: 'string', short: 'o' }, paper: { type: 'string', default: 'a4' }, catalog: { type: 'string' }, help: { type: 'boolean', short: 'h' } },
+  });
+  if (values.help) {
+    io.out(PACK_USAGE);
+    return EXIT.ok;
+  }
+  const paper = values.paper as PaperName;
+  const problem =
+    positionals.length !== 1 ? 'name one job file' : values.output === undefined ? 'say where to write the pack with -o <pack.zip>' : !PAPERS.includes(paper) ? `--paper must be a4 or letter, not "${values.paper}"` : undefined;
+  if (problem) {
+    io.err(`borewright pack: ${problem}.\n\n${PACK_USAGE}`);
+    return EXIT.unusable;
+  }
+  const [file] = positionals;
+  const output = values.output as string;
+  const read = await readJsonFile(file);
+  const parsed = read.ok ? parseJobDocument(read.value) : read;
+  if (!parsed.ok) {
+    io.err([`${file} is not a job document Borewright can pack:`, ...parsed.errors.map((e) => `  ${e}`)].join('\n'));
+    return EXIT.unusable;
+  }
+  const catalog = await loadCatalog(values.catalog);
+  if (!catalog.ok) {
+    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
+    return EXIT.unusable;
+  }
+
+  // Written beside the target and renamed when whole, so a failed run never leaves half a pack under its
+  // name; opened first, so that an output that cannot be written is told before any work is done.
+  const partial = `${output}.part`;
+  let target: FileHandle;
+  try {
+    target = await open(partial, 'w');
+  } catch (error) {
+    io.err(`borewright pack: cannot write ${output}: ${whyNot(error)}.`);
+    return EXIT.unusable;
+  }
+  const job = parsed.value;
+  const ctx = { job, catalog: catalog.value, date: new Date(), generator: GENERATOR };
+  const progress = progressLine(progressStream);
+  const pack = planPack({ ctx, paper, fontBytes: await drawingFont(), svgWindow: await svgWindows(), sha256: sha256Hex, onProgress: progress.update });
+  try {
+    await pipeline(packZipStream(pack, ctx.date), target.createWriteStream());
+    await rename(partial, output);
+  } catch (error) {
+    progress.end();
+    await rm(partial, { force: true });
+    io.err(`borewright pack: could not write ${output}: ${(error as Error).message}`);
+    return EXIT.unusable;
+  }
+  progress.end();
+  const { size } = await stat(output);
+  io.out(`Wrote ${output}: ${job.panels.length} panels, ${pack.files.length} files, ${megabytes(size)}, template sheets on ${paper === 'a4' ? 'A4' : 'US Letter'}.`);
+  if (pack.errors === 0) return EXIT.ok;
+  io.err(`The checks found ${pack.errors} error${pack.errors === 1 ? '' : 's'}: the pack says "contains errors" on its cover sheet. Run borewright check ${file} for the list.`);
+  return EXIT.findings;
+}
