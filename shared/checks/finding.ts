@@ -2,7 +2,7 @@ import * as z from 'zod';
 
 /**
  * Finding codes (design.md §2), stable in the API, the CLI and tests. `unknown-fitting` marks a placement
- * whose fitting is not in the catalog. `hinge-unpaired` is reserved for the check that pairs cups with plates.
+ * whose fitting is not in the catalog.
  */
 export const findingCode = z.enum([
   'bores-overlap',

@@ -7,6 +7,7 @@ import { checkEdgeTooClose } from './edge-too-close';
 import { checkFacesClash } from './faces-clash';
 import { compareFindings, type Finding } from './finding';
 import { checkHingeCount } from './hinge-count';
+import { checkHingeUnpaired } from './hinge-unpaired';
 import { jobSite, type JobSite } from './job-site';
 import { checkKeepOutsOverlap } from './keepouts-overlap';
 import { checkLiftOutOfRange } from './lift-out-of-range';
@@ -20,7 +21,7 @@ export { finding, findingCode, severity, type Finding, type FindingCode, type Se
 
 type PanelCheck = (site: PanelSite) => Finding[];
 
-/** Every check a panel gets; `hinge-unpaired` joins this list when the pairing of cups and plates is built. */
+/** Every check a panel gets. */
 const PANEL_CHECKS: readonly PanelCheck[] = [
   checkUnknownFitting,
   checkOutsidePanel,
@@ -32,6 +33,7 @@ const PANEL_CHECKS: readonly PanelCheck[] = [
   checkKeepOutsOverlap,
   checkOffGrid,
   checkHingeCount,
+  checkHingeUnpaired,
   checkLiftOutOfRange,
   checkShelfSag,
 ];

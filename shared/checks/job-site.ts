@@ -8,6 +8,10 @@ export interface JobSite {
   materials: ReadonlyMap<string, Material>;
   /** For each panel id, the flaps that hang on it (a flap's `hang.on`). */
   flapsOn: ReadonlyMap<string, Panel[]>;
+  /** For each panel id, every panel that hangs on it (doors and flaps): whose cups its plates meet. */
+  hungOn: ReadonlyMap<string, Panel[]>;
+  /** Every panel by id. */
+  panels: ReadonlyMap<string, Panel>;
   /** For each flap id, the lift mechanisms placed on the panels it hangs on. */
   liftsFor: ReadonlyMap<string, number>;
   /** For each carcass id, the thickness of its material: the board that adjoins its sides. */
@@ -24,6 +28,8 @@ export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
   const panels = new Map(job.panels.map((p) => [p.id, p]));
   const flapsOn = new Map<string, Panel[]>();
   const liftsFor = new Map<string, number>();
+  const hungOn = new Map<string, Panel[]>();
+  for (const front of job.panels) for (const target of front.hang?.on ?? []) hungOn.set(target, [...(hungOn.get(target) ?? []), front]);
   for (const flap of job.panels) {
     if (flap.role !== 'flap' || !flap.hang) continue;
     for (const side of flap.hang.on) flapsOn.set(side, [...(flapsOn.get(side) ?? []), flap]);
@@ -34,5 +40,5 @@ export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
     const thickness = materials.get(c.material)?.thickness;
     if (thickness !== undefined) carcassBoard.set(c.id, thickness);
   }
-  return { job, catalog, materials, flapsOn, liftsFor, carcassBoard };
+  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard };
 }

@@ -23,6 +23,7 @@ export function exportJob(fields: Partial<JobDocumentInput> = {}, extraPanels: P
         ],
         placements: [
           { id: 'plate-low', fitting: 'plate-0', x: 37, y: 89, face: 'A' },
+          { id: 'plate-high', fitting: 'plate-0', x: 37, y: 633, face: 'A' },
           { id: 'pin', fitting: 'shelf-pin-5', x: 517, y: 329, face: 'A' },
           { id: 'runner', fitting: 'runner-400', x: 37, y: 297, face: 'A' },
         ],
