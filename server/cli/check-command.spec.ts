@@ -57,7 +57,7 @@ describe('borewright check', () => {
     const invalid = runCli('check', files['invalid.json']);
     expect(invalid.code).toBe(2);
     expect(invalid.stderr).toContain('  panels[0].width: must be greater than 0');
-    expect(invalid.stderr).toContain('  panels[0].bores[0]: ');
+    expect(invalid.stderr).toContain('  panels[0].bores[0].face: Invalid option');
     expect(runCli('check').code).toBe(2);
   });
 
