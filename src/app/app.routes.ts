@@ -11,6 +11,7 @@ export const routes: Routes = [
     children: [
       { path: '', pathMatch: 'full', redirectTo: 'jobs' },
       { path: 'jobs', loadChildren: () => import('./jobs/jobs.routes') },
+      { path: 'jobs/:jobId/panels/:panelId', loadChildren: () => import('./editor/editor.routes') },
     ],
   },
   { path: '**', redirectTo: 'jobs' },

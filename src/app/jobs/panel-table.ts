@@ -7,6 +7,7 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
+import { RouterLink } from '@angular/router';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/model/job-document';
 import { AuthStore } from '../auth/auth-store';
@@ -41,6 +42,7 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status'];
     MatSortModule,
     MatTableModule,
     MatTooltipModule,
+    RouterLink,
   ],
   templateUrl: './panel-table.html',
   styleUrl: './panel-table.scss',

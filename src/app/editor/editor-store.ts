@@ -1,0 +1,200 @@
+import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
+import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
+import { checkPanel } from '../../../shared/checks';
+import { layoutPanel } from '../../../shared/layout/panel-layout';
+import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
+import { addPlacement } from './document/commands/add-placement';
+import { deleteItems } from './document/commands/delete-items';
+import { mirrorItems } from './document/commands/mirror-items';
+import { moveItems } from './document/commands/move-items';
+import { pasteItems, type Clipboard } from './document/commands/paste-items';
+import { repeatAlongRow } from './document/commands/repeat-along-row';
+import { rotateItems } from './document/commands/rotate-items';
+import { setProperties, type PlacementChanges } from './document/commands/set-properties';
+import * as history from './document/history';
+import { isEmptySelection, NO_SELECTION, selectionOf, type Selection } from './document/selection';
+import { panelGrid, snapPlacement } from './document/snap-placement';
+import { AuthStore } from '../auth/auth-store';
+import { EditorSource } from './editor-source';
+
+type Command<P> = (panel: Panel, params: P) => Panel;
+export interface Point {
+  x: number;
+  y: number;
+}
+
+/** Live checks can be switched off with `?checks=off`, for the frame-time bench's baseline. */
+function checksWanted(): boolean {
+  return typeof location === 'undefined' || new URLSearchParams(location.search).get('checks') !== 'off';
+}
+
+/**
+ * The panel being edited: its history of drilling (each edit a command, a drag one step), what is
+ * selected, and what the shared layout and checks make of it on every change.
+ */
+@Injectable()
+export class EditorStore {
+  private readonly source = inject(EditorSource);
+  private readonly auth = inject(AuthStore);
+  readonly catalog = builtinCatalog();
+
+  private readonly history = linkedSignal(() => {
+    const panel = this.source.panel();
+    return panel && history.startHistory(panel);
+  });
+  private readonly clipboard = signal<Clipboard | undefined>(undefined);
+
+  /** Starts empty with every (re)loaded panel. */
+  readonly selection = linkedSignal<Selection>(() => (this.source.record(), NO_SELECTION));
+  readonly face = signal<Face>('A');
+  readonly step = signal(1);
+  readonly checksOn = signal(checksWanted());
+
+  readonly panel = computed(() => this.history()?.present);
+  /** Bench and viewer roles see the drilling but change nothing. */
+  readonly editable = computed(() => this.auth.can('editJobs'));
+  readonly canUndo = computed(() => (this.history()?.past.length ?? 0) > 0);
+  readonly canRedo = computed(() => (this.history()?.future.length ?? 0) > 0);
+  readonly dragging = computed(() => this.history()?.mark !== undefined);
+  readonly hasSelection = computed(() => !isEmptySelection(this.selection()));
+  readonly canPaste = computed(() => this.clipboard() !== undefined);
+
+  /** The job with the edited panel in it, as the checks and the grid read it. */
+  readonly job = computed((): JobDocument | undefined => {
+    const job = this.source.job();
+    const panel = this.panel();
+    return job && panel && { ...job, panels: job.panels.map((p) => (p.id === panel.id ? panel : p)) };
+  });
+  readonly layout = computed(() => {
+    const job = this.source.job();
+    const panel = this.panel();
+    return job && panel ? layoutPanel(panel, this.catalog, job.system) : undefined;
+  });
+  readonly grid = computed(() => {
+    const job = this.job();
+    const panel = this.panel();
+    return job && panel ? panelGrid(job, panel) : undefined;
+  });
+  readonly findings = computed(() => {
+    const job = this.job();
+    const panel = this.panel();
+    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog) : [];
+  });
+  readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
+  readonly selectedPlacements = computed(() => {
+    const ids = this.selection().placements;
+    return this.panel()?.placements.filter((p) => ids.has(p.id)) ?? [];
+  });
+
+  select(selection: Selection): void {
+    this.selection.set(selection);
+  }
+
+  selectAll(): void {
+    const panel = this.panel();
+    if (panel) this.select(selectionOf(panel.placements.map((p) => p.id), panel.bores.map((b) => b.id)));
+  }
+
+  undo(): void {
+    this.history.update((h) => h && history.undo(h));
+  }
+
+  redo(): void {
+    this.history.update((h) => h && history.redo(h));
+  }
+
+  /** Puts a fitting where the pointer or the user says, snapped as the fitting wants; selects it. */
+  placeFitting(fittingId: string, at: Point, free = false): void {
+    const grid = this.grid();
+    if (!grid) return;
+    const spot = snapPlacement(at, { rotation: 0, face: this.face() }, this.catalog.get(fittingId), { grid, step: this.step(), free });
+    const before = new Set(this.panel()?.placements.map((p) => p.id));
+    this.apply(addPlacement, { fitting: fittingId, x: spot.x, y: spot.y, face: this.face() });
+    const added = this.panel()?.placements.find((p) => !before.has(p.id));
+    if (added) this.select(selectionOf([added.id]));
+  }
+
+  nudge(dx: number, dy: number): void {
+    if (this.hasSelection()) this.apply(moveItems, { selection: this.selection(), dx, dy });
+  }
+
+  rotateSelection(): void {
+    this.apply(rotateItems, { selection: this.selection() });
+  }
+
+  mirrorSelection(): void {
+    this.apply(mirrorItems, { selection: this.selection() });
+  }
+
+  deleteSelection(): void {
+    this.apply(deleteItems, { selection: this.selection() });
+    this.select(NO_SELECTION);
+  }
+
+  repeatSelection(count: number, step: number): void {
+    this.apply(repeatAlongRow, { selection: this.selection(), count, step });
+  }
+
+  setPlacement(id: string, changes: PlacementChanges): void {
+    this.apply(setProperties, { id, changes });
+  }
+
+  copySelection(): void {
+    const panel = this.panel();
+    const { placements, bores } = this.selection();
+    if (panel && this.hasSelection())
+      this.clipboard.set({ placements: panel.placements.filter((p) => placements.has(p.id)), bores: panel.bores.filter((b) => bores.has(b.id)) });
+  }
+
+  /** Pastes one pitch above the originals, so the copy is seen and still on the rows; selects the copies. */
+  paste(): void {
+    const clipboard = this.clipboard();
+    const panel = this.panel();
+    if (!clipboard || !panel) return;
+    const offset = { x: 0, y: this.source.job()?.system.pitch ?? 32 };
+    if (!this.editable()) return;
+    const next = pasteItems(panel, { clipboard, offset });
+    this.history.update((h) => h && history.record(h, next));
+    const placements = new Set(panel.placements.map((p) => p.id));
+    const bores = new Set(panel.bores.map((b) => b.id));
+    this.select(selectionOf(next.placements.filter((p) => !placements.has(p.id)).map((p) => p.id), next.bores.filter((b) => !bores.has(b.id)).map((b) => b.id)));
+    this.clipboard.set({ placements: next.placements.filter((p) => !placements.has(p.id)), bores: next.bores.filter((b) => !bores.has(b.id)) });
+  }
+
+  /** A drag begins: the history remembers where. */
+  startDrag(): void {
+    if (!this.editable()) return;
+    this.history.update((h) => h && history.setMark(h));
+  }
+
+  /**
+   * A drag moves on: the selection moves from where the drag began by the pointer's travel, the lead
+   * item (the one grabbed) snapping and the others keeping their distance to it.
+   */
+  dragTo(leadId: string, travel: Point, free: boolean): void {
+    const h = this.history();
+    const grid = this.grid();
+    if (!h?.mark || !grid) return;
+    const lead = h.mark.placements.find((p) => p.id === leadId);
+    const start = lead ?? { x: 0, y: 0, rotation: 0 as const, face: this.face() };
+    const wanted = { x: start.x + travel.x, y: start.y + travel.y };
+    const spot = snapPlacement(wanted, start, lead && this.catalog.get(lead.fitting), { grid, step: this.step(), free: free || !lead });
+    const next = moveItems(h.mark, { selection: this.selection(), dx: spot.x - start.x, dy: spot.y - start.y });
+    this.history.set(history.preview(h, next));
+  }
+
+  endDrag(): void {
+    this.history.update((h) => h && history.commitMark(h));
+  }
+
+  /** Escape mid-drag: back to where it began. */
+  cancelDrag(): void {
+    this.history.update((h) => h && history.bailToMark(h));
+  }
+
+  /** Replaces the drilling from outside the commands (applying another panel's); one undoable step. */
+  private apply<P>(command: Command<P>, params: P): void {
+    if (!this.editable()) return;
+    this.history.update((h) => h && history.record(h, command(h.present, params)));
+  }
+}

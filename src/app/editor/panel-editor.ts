@@ -1,0 +1,146 @@
+import { Component, computed, effect, inject, viewChild } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatDialog } from '@angular/material/dialog';
+import { MatExpansionModule } from '@angular/material/expansion';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { MatTooltipModule } from '@angular/material/tooltip';
+import { Title } from '@angular/platform-browser';
+import { RouterLink } from '@angular/router';
+import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
+import { ConfirmDialog } from '../ui/confirm-dialog';
+import { NO_SELECTION } from './document/selection';
+import { editorAction, type EditorAction } from './editor-keys';
+import { EditorSource } from './editor-source';
+import { EditorStore } from './editor-store';
+import { PanelSaver } from './panel-saver';
+import { CatalogList } from './side/catalog-list';
+import { FindingsList } from './side/findings-list';
+import { PlacementList } from './side/placement-list';
+import { PropertiesForm } from './side/properties-form';
+import { ShortcutList } from './side/shortcut-list';
+import { PanelStage } from './stage/panel-stage';
+import type { LeavesSafely } from './unsaved-changes-guard';
+
+const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', saving: 'Saving…', stale: 'Changed elsewhere', failed: 'Not saved' } as const;
+
+/** The panel editor: the catalog, the stage and what is selected, found and placed, with saving. */
+@Component({
+  selector: 'bw-panel-editor',
+  imports: [
+    CatalogList,
+    FindingsList,
+    MatButtonModule,
+    MatButtonToggleModule,
+    MatExpansionModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MatTooltipModule,
+    PanelStage,
+    PlacementList,
+    PropertiesForm,
+    RouterLink,
+    ShortcutList,
+  ],
+  providers: [EditorSource, EditorStore, PanelSaver],
+  templateUrl: './panel-editor.html',
+  styleUrl: './panel-editor.scss',
+  host: { '(keydown)': 'handleKey($event)', '(window:beforeunload)': 'warnBeforeUnload($event)' },
+})
+export class PanelEditor implements LeavesSafely {
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  protected readonly source = inject(EditorSource);
+  protected readonly store = inject(EditorStore);
+  protected readonly saver = inject(PanelSaver);
+  protected readonly stage = viewChild(PanelStage);
+
+  protected readonly legend = PURPOSE_ORDER.map((purpose) => ({ purpose, ...PURPOSE_STYLES[purpose] }));
+  protected readonly saveWords = SAVE_WORDS;
+  protected readonly readout = computed(() => {
+    const at = this.stage()?.cursor();
+    return at ? `x ${at.x.toFixed(1)}  y ${at.y.toFixed(1)} mm` : '';
+  });
+  protected readonly zoomPercent = computed(() => {
+    const view = this.stage()?.view();
+    return view ? `${Math.round(view.scale * 100)} %` : '';
+  });
+
+  constructor() {
+    const title = inject(Title);
+    effect(() => {
+      const panel = this.store.panel();
+      if (panel) title.setTitle(`${panel.name} · Panel editor · Borewright`);
+    });
+  }
+
+  async confirmLeave(): Promise<boolean> {
+    if (!this.saver.dirty()) return true;
+    return ConfirmDialog.ask(this.dialog, {
+      title: 'Leave without saving?',
+      message: 'This panel has changes that are not saved yet. Leaving now loses them.',
+      confirmLabel: 'Leave',
+    });
+  }
+
+  protected warnBeforeUnload(e: BeforeUnloadEvent): void {
+    if (this.saver.dirty()) e.preventDefault();
+  }
+
+  protected handleKey(e: KeyboardEvent): void {
+    const target = e.target as HTMLElement;
+    if (target.closest('input, textarea, select, mat-select, [contenteditable]')) return;
+    const action = editorAction(e);
+    if (!action) return;
+    e.preventDefault();
+    this.run(action);
+  }
+
+  protected run(action: EditorAction): void {
+    const { store } = this;
+    const pitch = this.source.job()?.system.pitch ?? 32;
+    switch (action.kind) {
+      case 'nudge': {
+        const step = action.pitches ? pitch : 1;
+        return store.nudge(action.dx * step, action.dy * step);
+      }
+      case 'rotate':
+        return store.rotateSelection();
+      case 'mirror':
+        return store.mirrorSelection();
+      case 'delete':
+        return store.deleteSelection();
+      case 'select-all':
+        return store.selectAll();
+      case 'copy':
+        return store.copySelection();
+      case 'paste':
+        return store.paste();
+      case 'undo':
+        return store.undo();
+      case 'redo':
+        return store.redo();
+      case 'escape':
+        return store.dragging() ? store.cancelDrag() : store.select(NO_SELECTION);
+      case 'save':
+        return void this.saver.saveNow();
+      case 'fit':
+        return this.stage()?.fit();
+      case 'zoom-in':
+        return this.stage()?.zoomBy(1.25);
+      case 'zoom-out':
+        return this.stage()?.zoomBy(0.8);
+    }
+  }
+
+  protected repeatUpTheRow(): void {
+    this.store.repeatSelection(1, this.source.job()?.system.pitch ?? 32);
+  }
+
+  protected async applyToOpposite(): Promise<void> {
+    const message = await this.saver.applyToOpposite();
+    if (message) this.snackBar.open(message, undefined, { duration: 5000 });
+  }
+}

@@ -1,0 +1,40 @@
+import type { Fitting } from '../../../../shared/catalog/fitting';
+import type { Panel } from '../../../../shared/model/job-document';
+
+/** A number field of the properties form: what it is called and the values the panel or fitting allows. */
+export interface NumberField {
+  key: 'x' | 'y' | string;
+  label: string;
+  min: number;
+  max: number;
+  /** Where a param lives: on the placement itself or in its params. */
+  param: boolean;
+  hint: string;
+}
+
+/**
+ * The number fields of a placement: its position, limited to the panel, and its fitting's parameters
+ * (a hinge's cup-boring distance, limited to the range the hinge allows).
+ */
+export function placementFields(panel: Panel, fitting: Fitting | undefined): NumberField[] {
+  const fields: NumberField[] = [
+    { key: 'x', label: 'x', min: 0, max: panel.width, param: false, hint: 'From the reference edge' },
+    { key: 'y', label: 'y', min: 0, max: panel.height, param: false, hint: 'From the lower edge' },
+  ];
+  if (fitting?.purpose === 'hinge-cup') {
+    const { min, max } = fitting.hinge.boringDistance;
+    fields.push({ key: 'boringDistance', label: 'Cup-boring distance', min, max, param: true, hint: 'Door edge to cup rim' });
+  }
+  return fields;
+}
+
+/** Reads a typed number against its field; the message says what to type instead. */
+export function readNumber(text: string, field: NumberField): { value: number } | { message: string } {
+  const value = Number(text.trim().replace(',', '.'));
+  if (text.trim() === '' || !Number.isFinite(value)) return { message: `Enter the ${field.label} in mm.` };
+  if (value < field.min || value > field.max) {
+    const where = field.param ? 'for this fitting' : 'to stay on the panel';
+    return { message: `The ${field.label} must be from ${field.min} to ${field.max} mm ${where}.` };
+  }
+  return { value };
+}

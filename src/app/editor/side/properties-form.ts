@@ -1,0 +1,64 @@
+import { Component, computed, inject, linkedSignal } from '@angular/core';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import type { Face, Rotation } from '../../../../shared/model/job-document';
+import { EditorStore } from '../editor-store';
+import { placementFields, readNumber, type NumberField } from './placement-fields';
+
+/** The selected placement's position, face, turn and fitting parameters; a change is one undoable step. */
+@Component({
+  selector: 'bw-properties-form',
+  imports: [MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatSelectModule],
+  templateUrl: './properties-form.html',
+  styleUrl: './properties-form.scss',
+})
+export class PropertiesForm {
+  protected readonly store = inject(EditorStore);
+
+  protected readonly rotations: Rotation[] = [0, 90, 180, 270];
+  protected readonly placement = computed(() => {
+    const selected = this.store.selectedPlacements();
+    return selected.length === 1 ? selected[0] : undefined;
+  });
+  protected readonly fitting = computed(() => {
+    const p = this.placement();
+    return p && this.store.catalog.get(p.fitting);
+  });
+  protected readonly fields = computed(() => {
+    const panel = this.store.panel();
+    return panel ? placementFields(panel, this.fitting()) : [];
+  });
+  /** Messages of refused values, by field; cleared when another placement is selected. */
+  protected readonly problems = linkedSignal<Record<string, string>>(() => (this.placement()?.id, {}));
+
+  protected valueOf(field: NumberField): number | '' {
+    const p = this.placement();
+    if (!p) return '';
+    return field.param ? (p.params?.[field.key] ?? '') : p[field.key as 'x' | 'y'];
+  }
+
+  protected changeNumber(field: NumberField, text: string): void {
+    const p = this.placement();
+    if (!p) return;
+    const read = readNumber(text, field);
+    if ('message' in read) {
+      this.problems.update((m) => ({ ...m, [field.key]: read.message }));
+      return;
+    }
+    this.problems.update(({ [field.key]: _gone, ...rest }) => rest);
+    const changes = field.param ? { params: { ...p.params, [field.key]: read.value } } : { [field.key]: read.value };
+    this.store.setPlacement(p.id, changes);
+  }
+
+  protected changeFace(face: Face): void {
+    const p = this.placement();
+    if (p) this.store.setPlacement(p.id, { face });
+  }
+
+  protected changeRotation(rotation: Rotation): void {
+    const p = this.placement();
+    if (p) this.store.setPlacement(p.id, { rotation });
+  }
+}

@@ -1,0 +1,89 @@
+import Konva from 'konva';
+import type { Finding } from '../../../../shared/checks';
+import type { PanelLayout } from '../../../../shared/layout/panel-layout';
+import type { Box } from '../../../../shared/layout/bore';
+import type { Hit } from './hit-index';
+import { PLACEHOLDER_HALF } from './hit-index';
+import { ACCENT, LABEL_FONT, RING_COLORS } from './paint-style';
+import { toScreen, type Point, type View } from './view';
+
+/** What the overlay shows on top of the bores. */
+export interface OverlayScene {
+  view: View;
+  layout: PanelLayout;
+  findings: readonly Finding[];
+  /** The selected items, the first one dimensioned. */
+  selected: readonly Hit[];
+  /** The anchor of the first selected item, in mm, for its dimensions. */
+  anchor?: Point;
+  /** A box selection being drawn, in screen px. */
+  band?: { a: Point; b: Point };
+}
+
+function screenBox(view: View, box: Box): { x: number; y: number; width: number; height: number } {
+  const a = toScreen(view, { x: box[0], y: box[1] });
+  const b = toScreen(view, { x: box[2], y: box[3] });
+  return { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y) };
+}
+
+function label(text: string, x: number, y: number, color = ACCENT): Konva.Label {
+  const tag = new Konva.Label({ x, y });
+  tag.add(new Konva.Tag({ fill: '#FFFFFF', opacity: 0.9, cornerRadius: 3 }));
+  tag.add(new Konva.Text({ text, fontSize: 12, fontFamily: LABEL_FONT, fill: color, padding: 3 }));
+  return tag;
+}
+
+/** Ordinate dimensions of the selection: x from the reference edge, y from the lower edge. */
+function dimensions(layer: Konva.Layer, view: View, anchor: Point): void {
+  const p = toScreen(view, anchor);
+  const edge = toScreen(view, { x: 0, y: anchor.y });
+  const floor = toScreen(view, { x: anchor.x, y: 0 });
+  const arrow = { stroke: ACCENT, fill: ACCENT, strokeWidth: 1, pointerLength: 6, pointerWidth: 5, pointerAtBeginning: true };
+  layer.add(new Konva.Arrow({ points: [edge.x, p.y, p.x, p.y], ...arrow }));
+  layer.add(new Konva.Arrow({ points: [p.x, floor.y, p.x, p.y], ...arrow }));
+  layer.add(label(`x ${anchor.x}`, (edge.x + p.x) / 2 - 18, p.y - 22));
+  layer.add(label(`y ${anchor.y}`, p.x + 6, (floor.y + p.y) / 2 - 9));
+}
+
+/** Rings around every bore a finding concerns, and around a missing fitting's placeholder. */
+function findingRings(layer: Konva.Layer, scene: OverlayScene): void {
+  const { view, layout } = scene;
+  const bores = new Map(layout.bores.map((b) => [b.id, b]));
+  const unknown = new Map(layout.unknown.map((p) => [p.id, p]));
+  const placed = new Map(layout.placed.map((p) => [p.placement.id, p]));
+  for (const finding of scene.findings) {
+    const stroke = RING_COLORS[finding.severity];
+    for (const id of finding.bores) {
+      const bore = bores.get(id);
+      if (bore?.kind !== 'face') continue;
+      const c = toScreen(view, bore);
+      layer.add(new Konva.Circle({ x: c.x, y: c.y, radius: (bore.diameter / 2) * view.scale + 4, stroke, strokeWidth: 2.5, name: `finding-${finding.code}` }));
+    }
+    // A finding about whole placements (keep-outs that overlap) outlines their keep-outs.
+    if (finding.bores.length === 0)
+      for (const id of finding.placements)
+        for (const k of placed.get(id)?.keepOuts ?? [])
+          layer.add(new Konva.Rect({ ...screenBox(view, k.box), stroke, strokeWidth: 2.5, cornerRadius: 3, name: `finding-${finding.code}` }));
+    for (const id of finding.placements) {
+      const p = unknown.get(id);
+      if (!p) continue;
+      const h = PLACEHOLDER_HALF;
+      const box = screenBox(view, [p.x - h, p.y - h, p.x + h, p.y + h]);
+      layer.add(new Konva.Rect({ ...box, stroke, strokeWidth: 2.5, name: `finding-${finding.code}` }));
+      layer.add(label(`? ${p.fitting}`, box.x, box.y + box.height + 4, stroke));
+    }
+  }
+}
+
+/** The selection, its dimensions, the finding rings and a box selection band, in screen space. */
+export function paintOverlay(layer: Konva.Layer, scene: OverlayScene): void {
+  layer.destroyChildren();
+  findingRings(layer, scene);
+  for (const hit of scene.selected)
+    layer.add(new Konva.Rect({ ...screenBox(scene.view, hit.box), stroke: ACCENT, strokeWidth: 1.5, dash: [6, 3], cornerRadius: 2 }));
+  if (scene.anchor) dimensions(layer, scene.view, scene.anchor);
+  if (scene.band) {
+    const { a, b } = scene.band;
+    layer.add(new Konva.Rect({ x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y), stroke: ACCENT, strokeWidth: 1, fill: 'rgba(14,107,102,0.08)' }));
+  }
+}

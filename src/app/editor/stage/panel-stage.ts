@@ -1,0 +1,213 @@
+import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, signal, untracked, viewChild } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import Konva from 'konva';
+import { fromEvent, map } from 'rxjs';
+import type { Box } from '../../../../shared/layout/bore';
+import { EditorStore } from '../editor-store';
+import { HitIndex, hitItems } from './hit-index';
+import { BorePainter } from './paint-bores';
+import { paintGrid } from './paint-grid';
+import { paintOverlay } from './paint-overlay';
+import { localPoint, pointerTool } from './pointer-tool';
+import { fitView, toPanel, viewOfBox, zoomAt, type Point, type View } from './view';
+
+/** The MIME type a catalog entry carries when dragged onto the stage. */
+export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
+
+/**
+ * The panel at scale on a Konva stage. The document lives in the store; this draws it (grid, bores,
+ * overlay: three layers, none listening, as picking goes through a spatial index) and turns pointer
+ * gestures into the store's commands.
+ */
+@Component({
+  selector: 'bw-panel-stage',
+  templateUrl: './panel-stage.html',
+  styleUrl: './panel-stage.scss',
+  host: {
+    tabindex: '0',
+    role: 'application',
+    'aria-label': 'Panel drawing. Arrow keys move the selection; the placements list beside it names every placement.',
+    '[class.panning]': 'spaceHeld()',
+    '(wheel)': 'zoomWithWheel($event)',
+    '(dragover)': 'allowDrop($event)',
+    '(drop)': 'dropFitting($event)',
+    '(keydown.space)': 'holdSpace($event)',
+    '(keyup.space)': 'spaceHeld.set(false)',
+    '(blur)': 'spaceHeld.set(false)',
+  },
+})
+export class PanelStage {
+  private readonly store = inject(EditorStore);
+  private readonly host: HTMLElement = inject(ElementRef).nativeElement;
+  private readonly canvasHost = viewChild.required<ElementRef<HTMLDivElement>>('canvas');
+
+  private readonly size = signal({ width: 0, height: 0 });
+  private readonly viewState = signal<View | undefined>(undefined);
+  private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
+  protected readonly spaceHeld = signal(false);
+  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; overlay: Konva.Layer; painter: BorePainter } | undefined>(undefined);
+  private readonly items = computed(() => {
+    const panel = this.store.panel();
+    const layout = this.store.layout();
+    return panel && layout ? hitItems(panel, layout) : [];
+  });
+  private readonly index = computed(() => new HitIndex(this.items()));
+  private readonly selected = computed(() => {
+    const { placements, bores } = this.store.selection();
+    return this.items().filter((h) => (h.kind === 'placement' ? placements : bores).has(h.id));
+  });
+  /** The first selected item's anchor, dimensioned from the reference and lower edges. */
+  private readonly anchor = computed((): Point | undefined => {
+    const placement = this.store.selectedPlacements()[0];
+    if (placement) return placement;
+    const ids = this.store.selection().bores;
+    const bore = this.store.panel()?.bores.find((b) => ids.has(b.id) && !('edge' in b));
+    return bore && !('edge' in bore) ? bore : undefined;
+  });
+  /** The board's size and thickness alone: the grid is redrawn when these change, not on every edit. */
+  private readonly board = computed(
+    () => {
+      const panel = this.store.panel();
+      return panel && { id: panel.id, width: panel.width, height: panel.height, thickness: panel.thickness };
+    },
+    { equal: (a, b) => a?.id === b?.id && a?.width === b?.width && a?.height === b?.height && a?.thickness === b?.thickness },
+  );
+
+  /** The pointer's position on the panel in mm, for the readout. */
+  readonly cursor = toSignal(
+    fromEvent<PointerEvent>(this.host, 'pointermove').pipe(
+      map((e) => {
+        const view = this.viewState();
+        return view && toPanel(view, localPoint(this.host, e));
+      }),
+    ),
+  );
+  readonly view = this.viewState.asReadonly();
+
+  constructor() {
+    const destroyRef = inject(DestroyRef);
+    afterNextRender(() => {
+      const container = this.canvasHost().nativeElement;
+      const stage = new Konva.Stage({ container, width: container.clientWidth, height: container.clientHeight });
+      const layers = { grid: new Konva.Layer({ listening: false }), bores: new Konva.Layer({ listening: false }), overlay: new Konva.Layer({ listening: false }) };
+      stage.add(layers.grid, layers.bores, layers.overlay);
+      const resize = new ResizeObserver(() => {
+        stage.size({ width: container.clientWidth, height: container.clientHeight });
+        this.size.set({ width: container.clientWidth, height: container.clientHeight });
+      });
+      resize.observe(container);
+      destroyRef.onDestroy(() => {
+        resize.disconnect();
+        stage.destroy();
+      });
+      this.konva.set({ ...layers, painter: new BorePainter(layers.bores) });
+    });
+    pointerTool(this.host, {
+      store: this.store,
+      view: () => this.viewState(),
+      setView: (view) => this.viewState.set(view),
+      pick: (at) => this.pick(at),
+      inside: (a, b) => this.inside(a, b),
+      setBand: (band) => this.band.set(band),
+      spaceHeld: () => this.spaceHeld(),
+    })
+      .pipe(takeUntilDestroyed())
+      .subscribe();
+    this.paintLayers();
+  }
+
+  fit(): void {
+    const panel = this.store.panel();
+    if (panel) this.viewState.set(fitView(panel, this.size(), this.store.face() === 'B'));
+  }
+
+  zoomBy(factor: number): void {
+    const view = this.viewState();
+    const { width, height } = this.size();
+    if (view) this.viewState.set(zoomAt(view, { x: width / 2, y: height / 2 }, factor));
+  }
+
+  /** Shows a box of the panel (mm) large in the middle: a finding's bores. */
+  zoomTo(box: Box): void {
+    this.viewState.set(viewOfBox(box, this.size(), this.store.face() === 'B'));
+  }
+
+  protected zoomWithWheel(e: WheelEvent): void {
+    const view = this.viewState();
+    if (!view) return;
+    e.preventDefault();
+    this.viewState.set(zoomAt(view, localPoint(this.host, e), Math.exp(-e.deltaY * 0.0015)));
+  }
+
+  /** Space held: the next press pans. */
+  protected holdSpace(e: Event): void {
+    e.preventDefault();
+    this.spaceHeld.set(true);
+  }
+
+  protected allowDrop(e: DragEvent): void {
+    if (e.dataTransfer?.types.includes(FITTING_DRAG_TYPE)) e.preventDefault();
+  }
+
+  protected dropFitting(e: DragEvent): void {
+    const fitting = e.dataTransfer?.getData(FITTING_DRAG_TYPE);
+    const view = this.viewState();
+    if (!fitting || !view) return;
+    e.preventDefault();
+    this.store.placeFitting(fitting, toPanel(view, localPoint(this.host, e)), e.altKey);
+  }
+
+  private pick(at: Point) {
+    const view = this.viewState();
+    if (!view) return undefined;
+    const p = toPanel(view, at);
+    // A few pixels of reach, so that a 5 mm hole is easy to take at any zoom.
+    return this.index().pick(p.x, p.y, 4 / view.scale, this.store.face());
+  }
+
+  private inside(a: Point, b: Point) {
+    const view = this.viewState();
+    if (!view) return [];
+    const p = toPanel(view, a);
+    const q = toPanel(view, b);
+    return this.index().inside(Math.min(p.x, q.x), Math.min(p.y, q.y), Math.max(p.x, q.x), Math.max(p.y, q.y));
+  }
+
+  /** One effect per layer, so that a pan redraws no bore and a drag no grid. */
+  private paintLayers(): void {
+    // Fit the panel when it first has a size and whenever the face shown changes.
+    effect(() => {
+      const size = this.size();
+      const fromB = this.store.face() === 'B';
+      const panel = untracked(() => this.store.panel());
+      const view = untracked(() => this.viewState());
+      if (panel && size.width > 0 && (!view || view.fromB !== fromB)) this.viewState.set(fitView(panel, size, fromB));
+    });
+    effect(() => {
+      const konva = this.konva();
+      const panel = this.board();
+      const view = this.viewState();
+      if (!konva || !panel || !view) return;
+      paintGrid(konva.grid, panel, this.store.grid(), view);
+      konva.grid.batchDraw();
+    });
+    effect(() => {
+      const konva = this.konva();
+      const panel = this.store.panel();
+      const layout = this.store.layout();
+      const view = this.viewState();
+      if (!konva || !panel || !layout || !view) return;
+      konva.painter.setView(view);
+      konva.painter.paint(panel, layout, this.store.face());
+      konva.bores.batchDraw();
+    });
+    effect(() => {
+      const konva = this.konva();
+      const layout = this.store.layout();
+      const view = this.viewState();
+      if (!konva || !layout || !view) return;
+      paintOverlay(konva.overlay, { view, layout, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band() });
+      konva.overlay.batchDraw();
+    });
+  }
+}

@@ -1,0 +1,90 @@
+import type { Page } from 'playwright-core';
+import { afterEach, describe, expect, inject, it } from 'vitest';
+import { fitView, toScreen, type Point } from '../../src/app/editor/stage/view';
+import { openBrowser, screenshot, signIn } from './browser';
+
+const baseUrl = inject('baseUrl');
+
+/** The screen point of a panel point, from the stage's box and the editor's fit-to-panel view. */
+async function screenPoint(page: Page, panel: { width: number; height: number }, at: Point): Promise<Point> {
+  const box = await page.locator('bw-panel-stage').boundingBox();
+  if (!box) throw new Error('the stage is not on the page');
+  const p = toScreen(fitView(panel, box, false), at);
+  return { x: box.x + p.x, y: box.y + p.y };
+}
+
+/** Rings the stage draws for findings of this code, read from Konva's own node tree. */
+function ringsOnStage(page: Page, code: string): Promise<number> {
+  return page.evaluate((name) => {
+    const konva = (window as unknown as { Konva: { stages: { find(selector: string): unknown[] }[] } }).Konva;
+    return konva.stages.reduce((n, stage) => n + stage.find(`.${name}`).length, 0);
+  }, `finding-${code}`);
+}
+
+function placementRows(page: Page) {
+  return page.locator('bw-placement-list .placement').allTextContents();
+}
+
+describe('the panel editor in the browser', () => {
+  let close: (() => Promise<void>) | undefined;
+  afterEach(async () => {
+    await close?.();
+    close = undefined;
+  });
+
+  it('places two mounting plates, shows their clash on the stage and in the list, undoes it, saves and reloads', async () => {
+    const browser = await openBrowser();
+    close = browser.close;
+    const { page } = browser;
+    await signIn(page, baseUrl, 'designer@greyfield.example');
+    await page.getByRole('link', { name: 'Larch Lane kitchen' }).click();
+    await page.getByRole('link', { name: 'Sink base, left side' }).click();
+    await page.waitForURL(/\/panels\/\d+$/);
+    await page.locator('bw-panel-stage canvas').first().waitFor();
+    await expect.poll(() => page.locator('bw-findings-list').innerText()).toContain('No findings');
+    const size = { width: 560, height: 722 };
+    expect(await page.locator('.title .size').innerText()).toContain('560 × 722');
+
+    // The first plate by a click in the catalog; it snaps onto the front row.
+    const plate = page.getByRole('button', { name: /Mounting plate, 0 mm/ });
+    await plate.click();
+    await expect.poll(() => placementRows(page)).toHaveLength(1);
+    const first = (await placementRows(page))[0];
+    const [, x, y] = /x ([\d.]+), y ([\d.]+)/.exec(first) ?? [];
+    expect(Number(x)).toBe(37);
+
+    // A second one, moved three pitches up the row with the keyboard, then dragged down onto the first.
+    await plate.click();
+    await page.locator('bw-panel-stage').focus();
+    for (let i = 0; i < 3; i++) await page.keyboard.press('Shift+ArrowUp');
+    await expect.poll(async () => (await placementRows(page))[1]).toContain(`y ${Number(y) + 96}`);
+    const clashes = page.locator('bw-findings-list .finding[data-code="keepouts-overlap"]');
+    await expect.poll(() => clashes.count()).toBe(0);
+    const from = await screenPoint(page, size, { x: Number(x), y: Number(y) + 96 });
+    const to = await screenPoint(page, size, { x: Number(x), y: Number(y) });
+    await page.mouse.move(from.x, from.y);
+    await page.mouse.down();
+    for (let k = 1; k <= 10; k++) await page.mouse.move(from.x, from.y + ((to.y - from.y) * k) / 10);
+    await page.mouse.up();
+
+    await expect.poll(() => clashes.count()).toBeGreaterThan(0);
+    expect(await ringsOnStage(page, 'bores-overlap') + (await ringsOnStage(page, 'keepouts-overlap'))).toBeGreaterThan(0);
+    await screenshot(page, 'editor-finding');
+
+    // One undo takes the whole drag back.
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => clashes.count()).toBe(0);
+    expect(await ringsOnStage(page, 'keepouts-overlap')).toBe(0);
+    const placed = await placementRows(page);
+    expect(placed[1]).toContain(`y ${Number(y) + 96}`);
+
+    // The plates meet no hinge of the door yet (an error), so saving asks first, naming it.
+    await page.getByRole('button', { name: 'Save', exact: true }).click();
+    await expect.poll(() => page.getByRole('alertdialog').innerText()).toContain('hinge-unpaired');
+    await page.getByRole('button', { name: 'Save anyway' }).click();
+    await expect.poll(() => page.locator('.save-state').innerText()).toContain('All changes saved');
+    await page.reload();
+    await page.locator('bw-panel-stage canvas').first().waitFor();
+    await expect.poll(() => placementRows(page)).toEqual(placed);
+  });
+});
