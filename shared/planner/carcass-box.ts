@@ -1,0 +1,101 @@
+import { mm } from '../checks/wording';
+import { nearestBalancedHeights, isBalancedHeight } from '../grid/balanced-height';
+import { systemGrid, type SystemGrid } from '../grid/system-grid';
+import type { Material } from '../model/job-document';
+import type { CarcassPlanInput } from './carcass-plan-input';
+import { explain, type Explained } from './explained';
+
+/** The box before its fronts: board, depths left by the back, and the sides' system rows. */
+export interface CarcassBox {
+  board: Material;
+  /** Board thickness T of sides, top and bottom. */
+  thickness: number;
+  /** Depth the back takes from the rear of the top, bottom and shelves' room. */
+  backAllowance: Explained;
+  /** Front to back of top and bottom. */
+  partDepth: Explained;
+  /** Front to back of a shelf: clear of the back. */
+  shelfDepth: Explained;
+  /** Between the sides. */
+  innerWidth: Explained;
+  grid: SystemGrid;
+  rows: { front: Explained; rear: Explained; firstHole: Explained; lastHole: Explained };
+  balance: { balanced: boolean; below: number | null; above: number; why: string };
+}
+
+/** A problem with the input, led by the path of the value it concerns. */
+export type PlanError = string;
+
+/** The depth the back takes from the rear: the row behind it keeps the setback to the back's front face. */
+function backAllowance(input: CarcassPlanInput, thickness: number, materials: ReadonlyMap<string, Material>): Explained {
+  const { back } = input;
+  if (back.type === 'none') return explain(0, 'no back');
+  if (back.type === 'inset') return explain(thickness, `an inset back of the carcass board, ${mm(thickness)}, between sides, top and bottom`);
+  const tb = materials.get(back.material)?.thickness ?? 0;
+  return explain(back.setIn + tb, `the groove's set-in ${mm(back.setIn)} plus the ${mm(tb)} back`);
+}
+
+/**
+ * Lays out the box: its board, the room the back takes and the sides' system rows (front row at the
+ * setback, rear row a whole number of pitches behind it and the setback clear of the back; holes from
+ * half the board thickness, trade-reference §1). Refuses a board the material does not come in and a
+ * depth too shallow for the rear row.
+ */
+export function planBox(input: CarcassPlanInput): { box: CarcassBox } | { errors: PlanError[] } {
+  const materials = new Map(input.materials.map((m) => [m.id, m]));
+  const errors: PlanError[] = [];
+  const board = materials.get(input.material);
+  for (const [path, id] of [
+    ['material', input.material],
+    ['back.material', input.back.type === 'grooved' ? input.back.material : undefined],
+    ['fronts.material', 'material' in input.fronts ? input.fronts.material : undefined],
+  ] as const) {
+    if (id !== undefined && !materials.has(id)) errors.push(`${path}: no material with id "${id}" among the job's materials`);
+  }
+  if (!board) return { errors };
+  if (input.thickness !== undefined && input.thickness !== board.thickness) {
+    const others = input.materials.filter((m) => m.thickness === input.thickness).map((m) => m.id);
+    const hint = others.length > 0 ? `; ${mm(input.thickness)} board: ${others.join(', ')}` : '';
+    errors.push(`thickness: ${board.name} comes in ${mm(board.thickness)} only, not ${mm(input.thickness)}${hint}`);
+  }
+  if (errors.length > 0) return { errors };
+  const T = board.thickness;
+  const { system, width, height, depth } = input;
+  const allowance = backAllowance(input, T, materials);
+  const grid = systemGrid({ width: depth, height }, T, system, system.setback + allowance.value);
+  if (grid.rows.length < 2) {
+    const least = 2 * system.setback + system.pitch + allowance.value;
+    errors.push(
+      `depth: ${mm(depth)} leaves no room for the rear system row: it sits a whole ${mm(system.pitch)} pitch behind the front row at ${mm(system.setback)} and keeps ${mm(system.setback)} clear of the back (${allowance.why}); make the carcass at least ${mm(least)} deep`,
+    );
+  }
+  if (width <= 2 * T + system.pitch) errors.push(`width: ${mm(width)} leaves no room between two ${mm(T)} sides`);
+  if (height <= 2 * T + 2 * system.pitch) errors.push(`height: ${mm(height)} leaves no room between a ${mm(T)} top and bottom`);
+  if (errors.length > 0) return { errors };
+  const balanced = isBalancedHeight(height, T, system.pitch);
+  const near = nearestBalancedHeights(height, T, system.pitch);
+  const rule = `a side is balanced when its height is ${mm(system.pitch)} × n + T (T = ${mm(T)}), so the last hole sits as far below the top as the first above the bottom`;
+  return {
+    box: {
+      board,
+      thickness: T,
+      backAllowance: allowance,
+      partDepth: explain(depth - (input.back.type === 'inset' ? T : 0), input.back.type === 'inset' ? 'the depth less the inset back' : 'the full depth; a grooved back runs in a groove'),
+      shelfDepth: explain(depth - allowance.value, allowance.value > 0 ? `the depth less the back's room (${allowance.why})` : 'the full depth'),
+      innerWidth: explain(width - 2 * T, `the width less two ${mm(T)} sides`),
+      grid,
+      rows: {
+        front: explain(grid.rows[0], `the front row at the setback, ${mm(system.setback)} from the front edge`),
+        rear: explain(grid.rows[1], `the furthest whole ${mm(system.pitch)} pitch behind the front row that keeps ${mm(system.setback)} clear of the back`),
+        firstHole: explain(grid.firstY, `half the ${mm(T)} bottom: the first hole is centred on the bottom's joint`),
+        lastHole: explain(grid.lastY, `the highest whole pitch above the first hole; ${mm(height - grid.lastY)} below the top`),
+      },
+      balance: {
+        balanced,
+        below: near.below,
+        above: near.above,
+        why: balanced ? `balanced: ${rule}` : `not balanced (${rule}); the nearest balanced heights are ${near.below === null ? '' : `${mm(near.below)} and `}${mm(near.above)}`,
+      },
+    },
+  };
+}

@@ -1,0 +1,58 @@
+import { mm } from '../checks/wording';
+import { explain, type Explained } from './explained';
+import type { OverlayKind } from './hinge-choice';
+
+/** The outside of the box that fronts cover. */
+export interface FrontOpening {
+  width: number;
+  height: number;
+  /** Board thickness T of the sides, top and bottom. */
+  thickness: number;
+}
+
+/** Sizes of each of `count` fronts side by side, and where they sit on the box. */
+export interface FrontSizes {
+  /** Across one front, edge to edge (in a door's frame its width: hinge edge to opening edge). */
+  width: Explained;
+  /** Top to bottom of a front. */
+  height: Explained;
+  /** The front's lower edge above the sides' lower edge: a door's `hang.dy`. */
+  dy: Explained;
+  /** How far a front reaches over the inside face of the side it hangs on (negative: set in from it). */
+  overlay: Explained;
+  /** How far the first front's left edge sits from the box's left outer face. */
+  left: number;
+}
+
+/**
+ * Front sizes from overlay and reveal. The reveal is the gap between neighbouring fronts, with half of it
+ * at each outer edge so that the next carcass's front is a reveal away too. Full overlay covers the
+ * sides' front edges, half overlay half of them (the other half for the next carcass's front on a shared
+ * side), inset sits within the box with a reveal all round. Vertically full and half overlay both cover
+ * top and bottom.
+ */
+export function frontSizes(kind: OverlayKind, count: number, reveal: number, box: FrontOpening): FrontSizes {
+  const T = box.thickness;
+  const r = reveal;
+  const gaps = `${count - 1} gap${count === 2 ? '' : 's'} of ${mm(r)} between fronts`;
+  if (kind === 'inset') {
+    const width = (box.width - 2 * T - (count + 1) * r) / count;
+    return {
+      width: explain(width, `the ${mm(box.width - 2 * T)} between the sides less a ${mm(r)} reveal at each side${count > 1 ? ` and ${gaps}` : ''}${count > 1 ? `, shared by ${count}` : ''}`),
+      height: explain(box.height - 2 * T - 2 * r, `the ${mm(box.height - 2 * T)} between top and bottom less a ${mm(r)} reveal above and below`),
+      dy: explain(T + r, `the ${mm(T)} bottom plus the ${mm(r)} reveal`),
+      overlay: explain(-r, `inset: set ${mm(r)} in from the side's inside face`),
+      left: T + r,
+    };
+  }
+  const covered = kind === 'full' ? T : T / 2;
+  const lost = 2 * (T - covered) + r + (count - 1) * r;
+  const what = kind === 'full' ? 'full overlay' : `half overlay: half of each ${mm(T)} side left for the next carcass`;
+  return {
+    width: explain((box.width - lost) / count, `the ${mm(box.width)} width less ${mm(lost)} (${what}; half a ${mm(r)} reveal at each outer edge${count > 1 ? `; ${gaps}` : ''})${count > 1 ? `, shared by ${count}` : ''}`),
+    height: explain(box.height - r, `the ${mm(box.height)} height less half a ${mm(r)} reveal above and below`),
+    dy: explain(r / 2, `half the ${mm(r)} reveal above the sides' lower edge`),
+    overlay: explain(covered - r / 2, `${kind} overlay: ${mm(covered)} of the ${mm(T)} side less half the ${mm(r)} reveal`),
+    left: T - covered + r / 2,
+  };
+}

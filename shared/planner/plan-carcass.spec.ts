@@ -1,0 +1,142 @@
+import { describe, expect, it } from 'vitest';
+import { builtinCatalog } from '../catalog/builtin-catalog';
+import { checkJob } from '../checks/index';
+import type { CarcassPlanInputData } from './carcass-plan-input';
+import { planToJob } from './plan-job';
+import { planned, refused } from '../testing/planned-carcass';
+
+const doors = { type: 'doors', count: 2, overlay: 'full', reveal: 3 } as const;
+
+describe('planCarcass: the worked example', () => {
+  /*
+   * Worked by hand. Wall carcass 600 × 723 × 320 of 19 mm MDF (700 kg/m³, EN 622-5), two full-overlay doors,
+   * reveal 3 mm (half of it at each outer edge):
+   *   door width  = (600 − 3 − 3) / 2 = 297 mm; door height = 723 − 3 = 720 mm; the door starts 1.5 mm up the side.
+   *   overlay = 19 − 1.5 = 17.5 mm = hinge constant 13 + B − plate height (trade-reference §2, common practice):
+   *     plate 0 mm gives B = 4.5, plate 2 mm gives B = 6.5; 4.5 is nearer the middle of 3 to 7, so plate-0, B = 4.5;
+   *     cup centre = B + 17.5 = 22 mm from the hinge edge (trade-reference §2, common practice).
+   *   mass = 297 × 720 × 19 mm × 700 kg/m³ = 2.84 kg; up to 900 mm and 6 kg: 2 hinges (trade-reference §2, common practice).
+   *   system holes at 9.5 + 32k (half the 19 mm board; 723 = 32 × 22 + 19 is balanced: WOODWEB, "Panel and Door
+   *     Balancing with 32mm Systems", published). A plate's two holes 32 mm apart fall on holes when its centre is at
+   *     25.5 + 32k; the cup sits 1.5 mm lower on the door: 24 + 32k. Within 76 to 100 mm of the lower end: 88
+   *     (plate at 89.5, holes 73.5 and 105.5). From the upper end 720 − c in 76 to 100: c = 632 (88 from the top,
+   *     plate at 633.5, holes 617.5 and 649.5).
+   *   rows: front 37 (Wikipedia, "32 mm cabinetmaking system", published); rear 37 + 32 × 7 = 261, the last whole
+   *     pitch that keeps 37 mm to the back edge (320 − 261 = 59; one more pitch would leave 27).
+   */
+  const plan = planned({ fronts: doors });
+
+  it('sizes the doors from overlay and reveal', () => {
+    expect(plan.doors.map((d) => [d.width.value, d.height.value, d.dy.value])).toEqual([
+      [297, 720, 1.5],
+      [297, 720, 1.5],
+    ]);
+    expect(plan.doors[0].hinge.overlay.value).toBe(17.5);
+    expect(plan.doors[0].hinge.plate.id).toBe('plate-0');
+    expect(plan.doors[0].hinge.boringDistance.value).toBe(4.5);
+    expect(plan.doors[0].hinge.cupFromEdge.value).toBe(22);
+    expect(plan.doors[0].mass.value).toBeCloseTo(2.844, 3);
+  });
+
+  it('puts two hinges 88 mm from each end, each plate on system holes', () => {
+    for (const door of plan.doors) {
+      expect(door.hingeCount.value).toBe(2);
+      expect(door.hinges.map((h) => [h.cup.value, h.plate])).toEqual([
+        [88, 89.5],
+        [632, 633.5],
+      ]);
+    }
+    const left = plan.panels.find((p) => p.id === 'wall-left')!;
+    expect(left.placements.filter((p) => p.fitting === 'plate-0').map((p) => [p.x, p.y])).toEqual([
+      [37, 89.5],
+      [37, 633.5],
+    ]);
+    const door = plan.panels.find((p) => p.id === 'wall-door-left')!;
+    expect(door.hang).toEqual({ on: ['wall-left'], dy: 1.5 });
+    expect(door.placements.map((p) => [p.fitting, p.x, p.y, p.params?.boringDistance])).toEqual([
+      ['hinge-full-overlay-45', 22, 88, 4.5],
+      ['hinge-full-overlay-45', 22, 632, 4.5],
+    ]);
+  });
+
+  it('lays the rows and finds the height balanced', () => {
+    expect([plan.box.rows.front.value, plan.box.rows.rear.value, plan.box.rows.firstHole.value, plan.box.rows.lastHole.value]).toEqual([37, 261, 9.5, 713.5]);
+    expect(plan.box.balance.balanced).toBe(true);
+    expect(plan.notes).toEqual([]);
+  });
+
+  it('offers the nearest balanced heights when the asked one is not', () => {
+    const { balance } = planned({ fronts: doors, height: 730 }).box;
+    expect(balance).toMatchObject({ balanced: false, below: 723, above: 755 });
+  });
+
+  it('gives a document every check passes, for every construction and front', () => {
+    const cases: Partial<CarcassPlanInputData>[] = [
+      { fronts: doors, shelves: { type: 'adjustable', count: 2, play: 1 } },
+      { construction: 'cams', back: { type: 'inset' }, fronts: { ...doors, count: 1, hingeSide: 'right' }, shelves: { type: 'fixed', count: 1 } },
+      { construction: 'screws', fronts: { type: 'flap', reveal: 3 }, shelves: { type: 'adjustable', count: 1, play: 1 } },
+      { construction: 'cams', depth: 560, height: 755, mounting: { type: 'kickboard', height: 100, setBack: 50 }, fronts: { type: 'drawers', count: 3, reveal: 3 } },
+      { back: { type: 'grooved', material: 'plywood-18', setIn: 10, grooveDepth: 8 }, fronts: { ...doors, overlay: 'half' } },
+    ];
+    for (const fields of cases) {
+      const findings = checkJob(planToJob(planned(fields)), builtinCatalog());
+      expect(findings.filter((f) => f.severity === 'error')).toEqual([]);
+    }
+  });
+
+  it('joins top and bottom to the sides with the chosen connectors on the system columns', () => {
+    const cams = planned({ construction: 'cams' });
+    const side = cams.panels.find((p) => p.id === 'wall-left')!;
+    expect(side.placements.filter((p) => p.fitting === 'cam-bolt').map((p) => [p.x, p.y])).toEqual([
+      [37, 9.5],
+      [165, 9.5],
+      [261, 9.5],
+      [37, 713.5],
+      [165, 713.5],
+      [261, 713.5],
+    ]);
+    const bottom = cams.panels.find((p) => p.id === 'wall-bottom')!;
+    // Cam centre 24 mm from the part's end (trade-reference §6, common practice); the bottom is 600 − 2 × 19 = 562 long.
+    expect(bottom.placements.filter((p) => p.x === 37).map((p) => [p.fitting, p.y, p.rotation])).toEqual([
+      ['cam-15', 24, 0],
+      ['cam-15', 538, 180],
+    ]);
+  });
+
+  it('keeps the shelf pins clear of the plates', () => {
+    const { pins } = planned({ fronts: doors, shelves: { type: 'adjustable', count: 2, play: 1 } });
+    // The plate bodies reach 25 mm either side of 89.5 and 633.5; a Ø5 pin at 105.5 or 617.5 would meet them.
+    expect(pins?.heights.some((y) => Math.abs(y - 89.5) < 30 || Math.abs(y - 633.5) < 30)).toBe(false);
+    expect(pins?.skipped.length).toBeGreaterThan(0);
+  });
+});
+
+describe('planCarcass: bad input', () => {
+  it('refuses a box too small for its doors', () => {
+    // Two inset doors between 19 mm sides with 3 mm reveals: (120 − 2 × 19 − 3 × 3) / 2 = 36.5 mm each.
+    expect(refused({ width: 120, fronts: { ...doors, overlay: 'inset' } })[0]).toMatch(/^width: the carcass is too small for 2 inset doors: each would be 36\.5 mm × /);
+  });
+
+  it('refuses a depth too shallow for the rear row', () => {
+    expect(refused({ depth: 100 })).toEqual([
+      'depth: 100 mm leaves no room for the rear system row: it sits a whole 32 mm pitch behind the front row at 37 mm and keeps 37 mm clear of the back (no back); make the carcass at least 106 mm deep',
+    ]);
+  });
+
+  it('refuses a thickness the material does not come in', () => {
+    expect(refused({ thickness: 18 })).toEqual([
+      'thickness: MDF 19 comes in 19 mm only, not 18 mm; 18 mm board: particleboard-18, plywood-18, lightweight-18',
+    ]);
+  });
+
+  it('refuses a flap too heavy for every mechanism', () => {
+    const [error] = refused({ width: 1200, height: 915, depth: 400, fronts: { type: 'flap', reveal: 3, mechanisms: 1 } });
+    expect(error).toMatch(/^fronts: the flap asks for a power factor of .*; it is too heavy for every mechanism of the catalog \(the strongest goes to 4000\)/);
+  });
+
+  it('leads each problem of the input with its path', () => {
+    expect(refused({ width: -5, fronts: { type: 'doors', count: 3 } as never })).toEqual(
+      expect.arrayContaining(['width: must be greater than 0', expect.stringMatching(/^fronts\.count: /)]),
+    );
+  });
+});

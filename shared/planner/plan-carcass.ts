@@ -1,0 +1,116 @@
+import type { Catalog } from '../catalog/fitting';
+import type { Carcass, Panel } from '../model/job-document';
+import { formatIssues } from '../model/validation-messages';
+import { planBox, type CarcassBox } from './carcass-box';
+import { carcassPlanInput, type CarcassPlanInput } from './carcass-plan-input';
+import { connectorColumns, constructionWhy, jointPlacements } from './construction';
+import { planDoors, type DoorPlan, type FrontsStep } from './doors-plan';
+import { planDrawers, type DrawerPlan } from './drawers-plan';
+import { explain, type Explained } from './explained';
+import { planFlap, type FlapPlan } from './flap-plan';
+import { carcassPanel, noPlacements, type PartPlacements, type PlanContext } from './plan-parts';
+import { planShelves, type PinRows, type ShelfPlan } from './shelves-plan';
+
+/** A planned carcass: its record and panels for the job document, and every number with its reason. */
+export interface CarcassPlan {
+  input: CarcassPlanInput;
+  carcass: Carcass;
+  panels: Panel[];
+  box: CarcassBox;
+  construction: Explained<CarcassPlanInput['construction']>;
+  doors: DoorPlan[];
+  flap?: FlapPlan;
+  drawers: DrawerPlan[];
+  shelves: ShelfPlan[];
+  pins?: PinRows;
+  /** What the designer should know: hinges outside the usual range, shelves that sag. */
+  notes: string[];
+}
+
+export type PlanResult = { ok: true; plan: CarcassPlan } | { ok: false; errors: string[] };
+
+type AnyFronts = FrontsStep<DoorPlan> | FrontsStep<FlapPlan> | FrontsStep<DrawerPlan>;
+
+function planFronts(ctx: PlanContext): AnyFronts | { errors: string[] } {
+  const { fronts } = ctx.input;
+  switch (fronts.type) {
+    case 'none':
+      return { panels: [], parts: noPlacements(), plans: [], notes: [] };
+    case 'doors':
+      return planDoors(ctx, fronts);
+    case 'flap':
+      return planFlap(ctx, fronts);
+    case 'drawers':
+      return planDrawers(ctx, fronts);
+  }
+}
+
+function merge(...steps: PartPlacements[]): PartPlacements {
+  return {
+    left: steps.flatMap((s) => s.left),
+    right: steps.flatMap((s) => s.right),
+    top: steps.flatMap((s) => s.top),
+  };
+}
+
+/**
+ * Plans one carcass from its description: sides on the 32 mm system with their construction bores, top,
+ * bottom, back, kickboard, fronts with their hinges, plates or mechanisms, and shelves. Bad input is
+ * refused with one message per problem, each led by the path of the value it concerns; nothing is made.
+ */
+export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
+  const parsed = carcassPlanInput.safeParse(data);
+  if (!parsed.success) return { ok: false, errors: formatIssues(parsed.error) };
+  const input = parsed.data;
+  const boxed = planBox(input);
+  if ('errors' in boxed) return { ok: false, errors: boxed.errors };
+  const { box } = boxed;
+  const ctx: PlanContext = { input, box, catalog, materials: new Map(input.materials.map((m) => [m.id, m])) };
+  const fronts = planFronts(ctx);
+  if ('errors' in fronts) return { ok: false, errors: fronts.errors };
+  const T = box.thickness;
+  const columns = connectorColumns(box.grid);
+  const partLength = box.innerWidth.value;
+  const bottom = jointPlacements(input.construction, columns, T / 2, partLength, 'bottom');
+  const top = jointPlacements(input.construction, columns, input.height - T / 2, partLength, 'top');
+  const joints: PartPlacements = { left: [...bottom.side, ...top.side], right: [...bottom.side, ...top.side], top: [] };
+  const sides = merge(joints, fronts.parts);
+  const shelved = input.shelves.type === 'none' ? { panels: [], parts: noPlacements(), plans: [] } : planShelves(ctx, input.shelves, sides);
+  if ('errors' in shelved) return { ok: false, errors: shelved.errors };
+  const all = merge(sides, shelved.parts);
+  const sideSize = { width: input.depth, height: input.height };
+  const partSize = { width: box.partDepth.value, height: partLength };
+  const panels: Panel[] = [
+    carcassPanel(ctx, 'left', 'left side', 'side', sideSize, { placements: all.left }),
+    carcassPanel(ctx, 'right', 'right side', 'side', sideSize, { placements: all.right }),
+    carcassPanel(ctx, 'bottom', 'bottom', 'bottom', partSize, { placements: bottom.part }),
+    carcassPanel(ctx, 'top', 'top', 'top', partSize, { placements: [...top.part, ...all.top] }),
+  ];
+  const { back, mounting } = input;
+  if (back.type === 'inset') panels.push(carcassPanel(ctx, 'back', 'back', 'back', { width: partLength, height: input.height - 2 * T }));
+  if (back.type === 'grooved') {
+    const size = { width: partLength + 2 * back.grooveDepth, height: input.height - 2 * T + 2 * back.grooveDepth };
+    panels.push(carcassPanel(ctx, 'back', 'back', 'back', size, { material: back.material }));
+  }
+  if (mounting.type === 'kickboard') panels.push(carcassPanel(ctx, 'kickboard', 'kickboard', 'kickboard', { width: input.width, height: mounting.height }));
+  panels.push(...shelved.panels, ...fronts.panels);
+  const notes = [...fronts.notes, ...shelved.plans.filter((s) => !s.ok).map((s) => `Shelf ${s.panel} sags more than the limit; keep its span under ${Math.floor(s.maxSpan.value)} mm or stiffen it.`)];
+  if (!box.balance.balanced) notes.unshift(`The sides are not balanced: ${box.balance.why}.`);
+  const frontsType = input.fronts.type;
+  return {
+    ok: true,
+    plan: {
+      input,
+      carcass: { id: input.id, name: input.name, width: input.width, height: input.height, depth: input.depth, material: input.material, mounting: mounting.type === 'wall' ? 'wall' : 'floor' },
+      panels,
+      box,
+      construction: explain(input.construction, constructionWhy(input.construction)),
+      doors: frontsType === 'doors' ? (fronts.plans as DoorPlan[]) : [],
+      flap: frontsType === 'flap' ? (fronts.plans as FlapPlan[])[0] : undefined,
+      drawers: frontsType === 'drawers' ? (fronts.plans as DrawerPlan[]) : [],
+      shelves: shelved.plans,
+      pins: 'pins' in shelved ? shelved.pins : undefined,
+      notes,
+    },
+  };
+}
