@@ -28,5 +28,28 @@ export async function embedDrawingFont(doc: PDFDocument, fontBytes: Uint8Array):
   const { bytes, parsed } = prepare(fontBytes);
   const once: Fontkit = { create: (data, postscriptName) => (data === bytes ? parsed : fontkit.create(data, postscriptName)) };
   doc.registerFontkit(once);
-  return doc.embedFont(bytes, { subset: true });
+  return remembering(await doc.embedFont(bytes, { subset: true }));
+}
+
+/**
+ * The font, remembering what it has encoded and measured: a template file writes the same labels on
+ * every page (`100 mm`, the panel's name), and each encoding lays the text out anew. An encoded text is
+ * the same however often it is drawn, so one serves every use in the document.
+ */
+function remembering(font: PDFFont): PDFFont {
+  const encoded = new Map<string, ReturnType<PDFFont['encodeText']>>();
+  const widths = new Map<string, number>();
+  const encode = font.encodeText.bind(font);
+  const measure = font.widthOfTextAtSize.bind(font);
+  font.encodeText = (text) => {
+    let hex = encoded.get(text);
+    if (!hex) encoded.set(text, (hex = encode(text)));
+    return hex;
+  };
+  font.widthOfTextAtSize = (text, size) => {
+    let width = widths.get(text);
+    if (width === undefined) widths.set(text, (width = measure(text, 1000)));
+    return (width * size) / 1000;
+  };
+  return font;
 }
