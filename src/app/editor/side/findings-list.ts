@@ -4,7 +4,7 @@ import type { Finding } from '../../../../shared/checks';
 import { planBox, type Box } from '../../../../shared/layout/bore';
 import { selectionOf } from '../document/selection';
 import { EditorStore } from '../editor-store';
-import { PLACEHOLDER_HALF } from '../stage/hit-index';
+import { hitItems } from '../stage/hit-index';
 
 const ICONS = { error: 'error', warning: 'warning', note: 'info' } as const;
 
@@ -34,8 +34,8 @@ export class FindingsList {
     this.store.select(selectionOf(finding.placements, finding.bores.filter((id) => loose.has(id))));
     const ids = new Set(finding.bores);
     const boxes = layout.bores.filter((b) => ids.has(b.id)).map((b) => planBox(b, panel));
-    for (const p of layout.unknown)
-      if (finding.placements.includes(p.id)) boxes.push([p.x - PLACEHOLDER_HALF, p.y - PLACEHOLDER_HALF, p.x + PLACEHOLDER_HALF, p.y + PLACEHOLDER_HALF]);
+    // A finding about whole placements (a keep-out, a plate without its hinge) shows the placements.
+    if (boxes.length === 0) boxes.push(...hitItems(panel, layout).filter((h) => h.kind === 'placement' && finding.placements.includes(h.id)).map((h) => h.box));
     if (boxes.length === 0) return;
     this.showArea.emit([
       Math.min(...boxes.map((b) => b[0])),

@@ -1,4 +1,4 @@
-import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, signal, untracked, viewChild } from '@angular/core';
+import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
 import { fromEvent, map } from 'rxjs';
@@ -175,13 +175,12 @@ export class PanelStage {
 
   /** One effect per layer, so that a pan redraws no bore and a drag no grid. */
   private paintLayers(): void {
-    // Fit the panel when it first has a size and whenever the face shown changes.
+    // Fit the panel when the stage gets or changes its size, another panel loads, or the other face is shown.
     effect(() => {
       const size = this.size();
       const fromB = this.store.face() === 'B';
-      const panel = untracked(() => this.store.panel());
-      const view = untracked(() => this.viewState());
-      if (panel && size.width > 0 && (!view || view.fromB !== fromB)) this.viewState.set(fitView(panel, size, fromB));
+      const board = this.board();
+      if (board && size.width > 0) this.viewState.set(fitView(board, size, fromB));
     });
     effect(() => {
       const konva = this.konva();
