@@ -10,6 +10,7 @@ import { healthRoutes } from './http/health.routes';
 import type { RouteContext } from './http/route-context';
 import { jobsRoutes } from './jobs/jobs.routes';
 import { panelsRoutes } from './panels/panels.routes';
+import { plannerRoutes } from './planner/planner.routes';
 import type { AppDeps } from './app';
 
 /**
@@ -37,7 +38,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, plannerRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

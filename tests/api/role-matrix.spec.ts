@@ -9,6 +9,18 @@ import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { createTestApp, testConfig, type TestApp } from '../../server/testing/test-app';
 
 type Actor = 'signed out' | Role;
+/** A carcass description the planner accepts: a doweled wall box with two doors. */
+const PLANNED_CARCASS = {
+  width: 600,
+  height: 723,
+  depth: 320,
+  material: 'mdf-19',
+  back: { type: 'none' },
+  construction: 'dowels',
+  fronts: { type: 'doors', count: 2, overlay: 'full', reveal: 3 },
+  shelves: { type: 'none' },
+  mounting: { type: 'wall' },
+};
 const ACTORS: Actor[] = ['signed out', 'admin', 'designer', 'bench', 'viewer'];
 const emailOf = (actor: Actor) => DEMO_PEOPLE.find((p) => p.role === actor)?.email ?? 'viewer@greyfield.example';
 
@@ -50,6 +62,10 @@ const ROUTES: Record<string, Row> = {
   'GET /api/jobs/:jobId/document': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/document`), expect: [401, 200, 200, 200, 200] },
   'POST /api/jobs/:jobId/carcasses': {
     request: (c, f) => c.post(`/api/jobs/${f.jobId}/carcasses`).send({ name: 'Box', width: 600, height: 722, depth: 560, material: 'mdf-19' }),
+    expect: [401, 201, 201, 403, 403],
+  },
+  'POST /api/jobs/:jobId/plan': {
+    request: (c, f) => c.post(`/api/jobs/${f.jobId}/plan`).send(PLANNED_CARCASS),
     expect: [401, 201, 201, 403, 403],
   },
   'POST /api/jobs/:jobId/panels': {
