@@ -9,6 +9,8 @@ import { AppError } from './http/app-error';
 import { healthRoutes } from './http/health.routes';
 import type { RouteContext } from './http/route-context';
 import { jobsRoutes } from './jobs/jobs.routes';
+import { mailRoutes } from './mail/outbox.routes';
+import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
 import { plannerRoutes } from './planner/planner.routes';
 import type { AppDeps } from './app';
@@ -24,6 +26,8 @@ export function createApiRouter(deps: AppDeps): Router {
     config,
     clock: deps.clock ?? (() => new Date()),
     authenticator: createAuthenticator(db, config.demoAccounts),
+    mailer: deps.mailer,
+    sessionSecret: deps.sessionSecret,
   };
   const router = Router();
   router.use((_req, res, next) => {
@@ -38,7 +42,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, plannerRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

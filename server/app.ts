@@ -8,6 +8,7 @@ import { clientApp } from './http/client-app';
 import { errorHandler } from './http/error-handler';
 import { securityHeaders } from './http/security-headers';
 import type { Logger } from './logger';
+import type { Mailer } from './mail/mailer';
 
 /** Where `ng build` puts the browser app. */
 export const DEFAULT_CLIENT_DIR = fileURLToPath(new URL('../dist/borewright/browser', import.meta.url));
@@ -18,6 +19,8 @@ export interface AppDeps {
   /** Signs session cookies: SESSION_SECRET, or the one kept in the data folder (auth/session-secret.ts). */
   sessionSecret: string;
   logger: Logger;
+  /** Where the features' mail goes: the local catcher or the SMTP_URL server (mail/mailer.ts). */
+  mailer: Mailer;
   /** The time sessions are judged by; tests move it forward instead of waiting. */
   clock?: () => Date;
   clientDir?: string;

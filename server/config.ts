@@ -23,8 +23,10 @@ const environment = z
     DATABASE_URL: url(['postgres:', 'postgresql:']).optional(),
     DATA_DIR: z.string().min(1).default('./data'),
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters long').optional(),
-    /** Mail arrives in a later issue; the address is validated now so a typo shows at start. */
+    /** A real mail server; without it, mail goes to the local catcher an admin reads on the Outbox page. */
     SMTP_URL: url(['smtp:', 'smtps:']).optional(),
+    /** The address mail is sent from; a real mail server may insist on one of its own domain. */
+    MAIL_FROM: z.string().trim().email('must be an e-mail address').default('borewright@localhost'),
     ALLOW_DEMO_IN_PRODUCTION: flag.default(false),
     /** Express's "trust proxy": set it when a TLS proxy sits in front, so Secure cookies and client addresses work. */
     TRUST_PROXY: z.string().min(1).optional(),
@@ -47,6 +49,9 @@ export type Config = {
   /** Absent in development: server/auth/session-secret.ts makes one and keeps it in the data folder. */
   sessionSecret?: string;
   smtpUrl?: string;
+  mailFrom: string;
+  /** A pack up to this size goes attached; a larger one as a link that expires. */
+  packAttachLimitBytes: number;
   /** Demo accounts are created and may sign in: always outside production, in production only when allowed. */
   demoAccounts: boolean;
   /** Cookies only over HTTPS: in production (behind TLS, with TRUST_PROXY set when a proxy ends it). */
@@ -77,6 +82,8 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     dataDir: env.DATA_DIR,
     sessionSecret: env.SESSION_SECRET,
     smtpUrl: env.SMTP_URL,
+    mailFrom: env.MAIL_FROM,
+    packAttachLimitBytes: 10 * 1024 * 1024,
     demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,
     secureCookies: env.NODE_ENV === 'production',
     trustProxy: env.TRUST_PROXY,

@@ -9,6 +9,7 @@ import { acquireDataLock, DataFolderLockedError } from './db/data-lock';
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo/greyfield-people';
 import { seedDemoShop } from './demo/seed-demo';
 import { createLogger } from './logger';
+import { startMail } from './mail/mailer';
 
 /** Requests still running get this long after SIGTERM before their connections are cut. */
 const DRAIN_MS = 10_000;
@@ -52,7 +53,8 @@ async function main(): Promise<void> {
   await database.migrate();
   const seeded = config.demoAccounts && (await seedDemoShop(database.db));
 
-  const server = createServer(createApp({ db: database.db, config, sessionSecret, logger }));
+  const mail = await startMail(config, database.db, logger);
+  const server = createServer(createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer }));
   await listen(server, config.port, config.host).catch((err: NodeJS.ErrnoException) =>
     fail(`Borewright cannot listen on ${config.host}:${config.port}: ${err.code === 'EADDRINUSE' ? 'the port is taken (set PORT)' : err.message}`),
   );
@@ -62,6 +64,7 @@ async function main(): Promise<void> {
     '',
     `Borewright is running at http://${config.host.includes(':') ? `[${config.host}]` : config.host}:${config.port}/`,
     `  data: ${where}${seeded ? ', demo shop created' : ''}`,
+    `  mail: ${mail.describe}`,
     `  ready in ${Math.round(performance.now() - started)} ms`,
   ];
   if (!existsSync(path.join(DEFAULT_CLIENT_DIR, 'index.html'))) {
@@ -82,15 +85,16 @@ async function main(): Promise<void> {
     logger.info({ signal }, 'stopping: no new connections, finishing requests');
     setTimeout(() => server.closeAllConnections(), DRAIN_MS).unref();
     server.close(() => {
-      database
+      mail
         .close()
+        .then(() => database.close())
         .then(() => {
           lock?.release();
           logger.info('stopped cleanly');
           process.exit(0);
         })
         .catch((err: unknown) => {
-          logger.error({ err }, 'closing the database failed');
+          logger.error({ err }, 'closing the mail catcher or the database failed');
           process.exit(1);
         });
     });

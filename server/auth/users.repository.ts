@@ -29,3 +29,8 @@ export async function countUsers(db: Database): Promise<number> {
 export async function insertUsers(db: Database, rows: (typeof users.$inferInsert)[]) {
   return db.insert(users).values(rows).returning(accountColumns);
 }
+
+/** Everyone's name and address, by name: the people mail can be sent to without typing an address. */
+export function listPeople(db: Database) {
+  return db.select({ name: users.name, email: users.email }).from(users).orderBy(users.name);
+}

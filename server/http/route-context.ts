@@ -1,6 +1,7 @@
 import type { Authenticator } from '../auth/passport';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
+import type { Mailer } from '../mail/mailer';
 
 /** What every feature's routes may use. */
 export interface RouteContext {
@@ -8,4 +9,7 @@ export interface RouteContext {
   config: Config;
   clock: () => Date;
   authenticator: Authenticator;
+  mailer: Mailer;
+  /** Signs session cookies, and the pack links that work without signing in. */
+  sessionSecret: string;
 }

@@ -2,11 +2,17 @@ import { createApp } from '../app';
 import { loadConfig, type Config } from '../config';
 import type { DatabaseHandle } from '../db/client';
 import { createLogger } from '../logger';
+import { startMail, type Mailer } from '../mail/mailer';
 import { openTestDatabase } from './test-database';
+
+/** The session secret of every test app: tests sign pack links with it. */
+export const TEST_SESSION_SECRET = 'a test secret that is long enough to sign cookies';
 
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   database: DatabaseHandle;
+  /** Sends to a catcher of the test's own, which keeps messages in the test database's outbox. */
+  mailer: Mailer;
   /** Moves the app's clock forward, for session timeouts. */
   advance(ms: number): void;
   close(): Promise<void>;
@@ -20,23 +26,31 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
 /** createApp on an in-memory database from a template, with a clock only the test moves. */
 export async function createTestApp(options: { template?: 'empty' | 'demo'; config?: Partial<Config>; clientDir?: string } = {}): Promise<TestApp> {
   const database = await openTestDatabase(options.template ?? 'demo');
+  const config = testConfig(options.config);
+  const logger = createLogger('silent');
+  const mail = await startMail(config, database.db, logger);
   // A clock that stands still unless the test moves it: a slow machine cannot make a session time out.
   const start = Date.now();
   let offset = 0;
   const app = createApp({
     db: database.db,
-    config: testConfig(options.config),
-    sessionSecret: 'a test secret that is long enough to sign cookies',
-    logger: createLogger('silent'),
+    config,
+    sessionSecret: TEST_SESSION_SECRET,
+    logger,
+    mailer: mail.mailer,
     clock: () => new Date(start + offset),
     clientDir: options.clientDir,
   });
   return {
     app,
     database,
+    mailer: mail.mailer,
     advance: (ms) => {
       offset += ms;
     },
-    close: () => database.close(),
+    close: async () => {
+      await mail.close();
+      await database.close();
+    },
   };
 }

@@ -6,7 +6,8 @@ import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../server/demo/greyfield-people';
 import { larchLaneKitchen } from '../../server/demo/larch-lane-kitchen';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
-import { createTestApp, testConfig, type TestApp } from '../../server/testing/test-app';
+import { signPackLink } from '../../server/packs/pack-links';
+import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 
 type Actor = 'signed out' | Role;
 /** A carcass description the planner accepts: a doweled wall box with two doors. */
@@ -37,6 +38,10 @@ interface Row {
   /** Sign-in and sign-out change the session itself: each actor gets a client of its own. */
   ownClient?: boolean;
 }
+
+/** A message in the outbox with the pack attached, sent before the rows run. */
+let caughtMessageId = 0;
+const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
 
 /**
  * Every API route and what each actor gets from it. A route registered on the API router without a
@@ -86,6 +91,20 @@ const ROUTES: Record<string, Row> = {
     expect: [401, 200, 200, 200, 403],
   },
   'GET /api/activity': { request: (c, f) => c.get(`/api/activity?jobId=${f.jobId}`), expect: [401, 200, 200, 403, 403] },
+  'GET /api/panels/:panelId/drilling-map.svg': { request: (c, f) => c.get(`/api/panels/${f.panel.dbId}/drilling-map.svg`), expect: [401, 200, 200, 200, 200] },
+  'GET /api/panels/:panelId/drilling-map.dxf': { request: (c, f) => c.get(`/api/panels/${f.panel.dbId}/drilling-map.dxf`), expect: [401, 200, 200, 200, 200] },
+  'GET /api/panels/:panelId/template.pdf': { request: (c, f) => c.get(`/api/panels/${f.panel.dbId}/template.pdf?paper=letter`), expect: [401, 200, 200, 200, 200] },
+  'GET /api/jobs/:jobId/findings': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/findings`), expect: [401, 200, 200, 200, 200] },
+  'GET /api/jobs/:jobId/pack.zip': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/pack.zip`), expect: [401, 200, 200, 200, 200] },
+  'POST /api/jobs/:jobId/pack/send': {
+    request: (c, f) => c.post(`/api/jobs/${f.jobId}/pack/send`).send({ to: ['bench@greyfield.example'], paper: 'a4' }),
+    expect: [401, 200, 200, 403, 403],
+  },
+  // The signed link is the permission: it works signed in or not, whatever the role.
+  'GET /api/pack-links/:token': { request: (c, f) => c.get(`/api/pack-links/${packLink(f.jobId)}`), expect: [200, 200, 200, 200, 200] },
+  'GET /api/outbox': { request: (c) => c.get('/api/outbox'), expect: [401, 200, 403, 403, 403] },
+  'GET /api/outbox/:id/attachments/:index': { request: (c) => c.get(`/api/outbox/${caughtMessageId}/attachments/0`), expect: [401, 200, 403, 403, 403] },
+  'GET /api/mail/recipients': { request: (c) => c.get('/api/mail/recipients'), expect: [401, 200, 200, 403, 403] },
 };
 
 describe('role matrix', () => {
@@ -113,11 +132,13 @@ describe('role matrix', () => {
     t = await createTestApp();
     owner = await signedIn(t.app, 'owner@greyfield.example');
     for (const actor of ACTORS) clients.set(actor, await clientFor(actor));
+    await owner.post(`/api/jobs/${(await fixture()).jobId}/pack/send`).send({ to: ['bench@greyfield.example'], paper: 'a4' }).expect(200);
+    caughtMessageId = (await owner.get('/api/outbox').expect(200)).body.messages[0].id;
   });
   afterAll(() => t.close());
 
   it('has a row for every route the API registers, and no other', () => {
-    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent') });
+    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer });
     const registered = router.stack.flatMap((layer) =>
       layer.route ? [...new Set(layer.route.stack.map((handler) => handler.method.toUpperCase()))].map((method) => `${method} /api${layer.route!.path}`) : [],
     );

@@ -25,7 +25,14 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     await database.migrate();
     await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
     await seedDemoShop(database.db);
-    app = createApp({ db: database.db, config: testConfig(), sessionSecret: 'a test secret that is long enough to sign cookies', logger: createLogger('silent') });
+    app = createApp({
+      db: database.db,
+      config: testConfig(),
+      sessionSecret: 'a test secret that is long enough to sign cookies',
+      logger: createLogger('silent'),
+      // These tests send no mail; the outbox is tested on PGlite (server/mail).
+      mailer: { send: () => Promise.reject(new Error('no mail in the PostgreSQL tests')) },
+    });
     designer = await signedIn(app, 'designer@greyfield.example');
   });
   afterAll(() => database?.close());

@@ -7,3 +7,4 @@ export { panels } from './panels';
 export { placements } from './placements';
 export { bores } from './bores';
 export { activity } from './activity';
+export { outbox } from './outbox';

@@ -1,0 +1,70 @@
+import type { Response, Router } from 'express';
+import { pipeline } from 'node:stream/promises';
+import { jobParams, panelParams } from '../../shared/api/contract';
+import { drillingMapQuery, packSendBody, paperQuery } from '../../shared/api/pack-contract';
+import { packZipStream } from '../export/pack-zip';
+import { requirePermission } from '../auth/require-permission';
+import { jsonBody } from '../http/body';
+import type { RouteContext } from '../http/route-context';
+import { verifyPackLink } from './pack-links';
+import { sendPack } from './pack-send.service';
+import * as packs from './packs.service';
+
+function sendFile(res: Response, file: packs.DownloadFile): void {
+  res.attachment(file.name).type(file.type).send(typeof file.bytes === 'string' ? file.bytes : Buffer.from(file.bytes));
+}
+
+/** Streams a job's pack as a zip; each file is made when the zip reaches it, so no length is known up front. */
+async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter'): Promise<void> {
+  const date = context.clock();
+  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date);
+  res.attachment(fileName).type('application/zip');
+  // Once the first bytes are out, a failure can only cut the download short; the error handler then
+  // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
+  await pipeline(packZipStream(pack, date), res);
+}
+
+/** The bench pack: a panel's drilling map, DXF and template sheets; the job's findings and whole pack; sending it. */
+export function packsRoutes(router: Router, context: RouteContext): void {
+  const { db, clock } = context;
+
+  router.get('/panels/:panelId/drilling-map.svg', requirePermission('readJobs'), async (req, res) => {
+    const { panelId } = panelParams.parse(req.params);
+    const { face } = drillingMapQuery.parse(req.query);
+    sendFile(res, await packs.drillingMapSvg(db, panelId, face, clock()));
+  });
+
+  router.get('/panels/:panelId/drilling-map.dxf', requirePermission('readJobs'), async (req, res) => {
+    const { panelId } = panelParams.parse(req.params);
+    sendFile(res, await packs.drillingDxf(db, panelId, clock()));
+  });
+
+  router.get('/panels/:panelId/template.pdf', requirePermission('readJobs'), async (req, res) => {
+    const { panelId } = panelParams.parse(req.params);
+    const { paper } = paperQuery.parse(req.query);
+    sendFile(res, await packs.templateSheets(db, panelId, paper, clock()));
+  });
+
+  router.get('/jobs/:jobId/findings', requirePermission('readJobs'), async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    res.json(await packs.jobFindings(db, jobId));
+  });
+
+  router.get('/jobs/:jobId/pack.zip', requirePermission('readJobs'), async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    const { paper } = paperQuery.parse(req.query);
+    await streamPack(res, context, jobId, paper);
+  });
+
+  router.post('/jobs/:jobId/pack/send', requirePermission('editJobs'), jsonBody, async (req, res) => {
+    const { jobId } = jobParams.parse(req.params);
+    const origin = `${req.protocol}://${req.get('host')}`;
+    res.json(await sendPack(context, req.user!, jobId, packSendBody.parse(req.body), origin));
+  });
+
+  // No sign-in: the signed token is the permission, for a recipient without an account.
+  router.get('/pack-links/:token', async (req, res) => {
+    const { jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
+    await streamPack(res, context, jobId, paper);
+  });
+}

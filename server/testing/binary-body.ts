@@ -1,0 +1,18 @@
+import type { Response } from 'supertest';
+
+type Parser = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => void;
+
+/** A supertest parser that keeps a download's bytes as they came: `.buffer(true).parse(binaryBody)`. */
+export const binaryBody: Parser = (res, done) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk: Buffer) => chunks.push(chunk));
+  res.on('end', () => done(null, Buffer.concat(chunks)));
+  res.on('error', (err: Error) => done(err, Buffer.alloc(0)));
+};
+
+/** The file name a Content-Disposition header offers. */
+export function attachmentName(res: Response): string | undefined {
+  const header = String(res.headers['content-disposition'] ?? '');
+  const encoded = /filename\*=UTF-8''([^;]+)/.exec(header)?.[1];
+  return encoded ? decodeURIComponent(encoded) : /filename="([^"]*)"/.exec(header)?.[1];
+}

@@ -1,0 +1,72 @@
+import * as z from 'zod';
+import { finding } from '../checks/finding';
+import { dbId } from './contract';
+
+/**
+ * The bench pack's part of the HTTP API: downloads, sending by mail, and the outbox of the local mail
+ * catcher. Shared by the server (which validates what comes in) and the client (which validates answers).
+ */
+
+/** The paper the template sheets are tiled onto; A4 unless asked. */
+export const paperQuery = z.object({ paper: z.enum(['a4', 'letter'], 'must be "a4" or "letter"').default('a4') });
+
+/** Which face's drilling map: A always exists, B when the panel has face B bores. */
+export const drillingMapQuery = z.object({ face: z.enum(['A', 'B'], 'must be "A" or "B"').default('A') });
+
+/** The most addresses one send may name: a shop's whole team and a few outside people. */
+export const MAX_RECIPIENTS = 20;
+
+export const packSendBody = z.object({
+  to: z
+    .array(z.string().trim().toLowerCase().email('must be an e-mail address').max(254), 'must be a list of e-mail addresses')
+    .min(1, 'must name at least one recipient')
+    .max(MAX_RECIPIENTS, `must name at most ${MAX_RECIPIENTS} recipients`)
+    .transform((to) => [...new Set(to)]),
+  paper: paperQuery.shape.paper,
+  message: z.string().trim().max(2000, 'must be at most 2000 characters').optional(),
+});
+export type PackSendBody = z.input<typeof packSendBody>;
+
+/** How a pack went out: attached to the message, or as a link that expires. */
+export const packSent = z.object({
+  to: z.array(z.string()),
+  delivery: z.enum(['attached', 'link']),
+  /** The zip's size; only when attached (a link's pack is made when it is downloaded). */
+  bytes: z.number().int().optional(),
+  /** When the link stops working; only for a link. */
+  expiresAt: z.string().optional(),
+});
+export type PackSent = z.output<typeof packSent>;
+
+/** The checks' findings of a job, counted by severity, worst first. */
+export const jobFindings = z.object({
+  errors: z.number().int(),
+  warnings: z.number().int(),
+  notes: z.number().int(),
+  findings: z.array(finding),
+});
+export type JobFindings = z.output<typeof jobFindings>;
+
+/** Someone a pack can be sent to without typing the address: the shop's people. */
+export const mailRecipients = z.object({ people: z.array(z.object({ name: z.string(), email: z.string() })) });
+export type MailRecipient = z.output<typeof mailRecipients>['people'][number];
+
+export const outboxAttachment = z.object({ name: z.string(), contentType: z.string(), bytes: z.number().int() });
+
+/** One message the local mail catcher received. */
+export const outboxMessage = z.object({
+  id: z.number().int(),
+  at: z.string(),
+  sender: z.string(),
+  recipients: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  attachments: z.array(outboxAttachment),
+});
+export type OutboxMessage = z.output<typeof outboxMessage>;
+export const outboxList = z.object({ messages: z.array(outboxMessage) });
+
+export const outboxAttachmentParams = z.object({
+  id: dbId,
+  index: z.string().regex(/^[0-9]{1,3}$/, 'must be a whole number').transform(Number),
+});
