@@ -14,17 +14,20 @@ export interface PageFurniture {
 /** The words every template page carries: print at actual size. */
 const PRINT_AT_ACTUAL_SIZE = 'Print at actual size (100 %): no scaling, no "fit to page".';
 
-const CROSS_ARM = 5;
-const CROSS: Shape[] = (() => {
-  const ink = { color: INK, width: 0.2 };
-  const c = CROSS_ARM;
-  return [{ kind: 'circle', cx: c, cy: c, r: 2.5, stroke: ink }, line(0, c, 2 * c, c, ink), line(c, 0, c, 2 * c, ink)];
-})();
+const MARK = 6;
+/**
+ * A registration mark: a square with two opposite quarters filled. Square and filled, so that no one takes
+ * it for a bore, which is always a circle with a fine cross.
+ */
+const MARK_SHAPES: Shape[] = [
+  { kind: 'rect', x: 0, y: 0, width: MARK, height: MARK, stroke: { color: INK, width: 0.25 } },
+  { kind: 'rect', x: 0, y: 0, width: MARK / 2, height: MARK / 2, fill: INK },
+  { kind: 'rect', x: MARK / 2, y: MARK / 2, width: MARK / 2, height: MARK / 2, fill: INK },
+];
 
-/** A registration cross centred on (x, y): printed on both pages of a seam at the same place of the map. */
-function cross(x: number, y: number): SymbolShape {
-  const size = 2 * CROSS_ARM;
-  return { kind: 'symbol', id: 'registration-cross', x: x - CROSS_ARM, y: y - CROSS_ARM, drawing: { width: size, height: size, title: 'registration cross', shapes: CROSS } };
+/** A registration mark centred on (x, y): printed on both pages of a seam at the same place of the map. */
+function registrationMark(x: number, y: number): SymbolShape {
+  return { kind: 'symbol', id: 'registration-mark', x: x - MARK / 2, y: y - MARK / 2, drawing: { width: MARK, height: MARK, title: 'registration mark', shapes: MARK_SHAPES } };
 }
 
 /** The small map of the tiles in the header, right-aligned at `right`: every page a cell, this one filled. */
@@ -53,13 +56,13 @@ function neighbours(plan: TilePlan, tile: Tile): string {
     row > 0 ? `above ${tileName(row - 1, col)}` : '',
     row < plan.rows - 1 ? `below ${tileName(row + 1, col)}` : '',
   ].filter((p) => p !== '');
-  return parts.length === 0 ? 'A single page: nothing to join.' : `Joins ${parts.join(', ')}. Cut along the dashed edge, lay it on the grey strip of the page before and match the crosses.`;
+  return parts.length === 0 ? 'A single page: nothing to join.' : `Joins ${parts.join(', ')}. Cut along the dashed edge, lay it on the grey strip of the page before and match the square marks.`;
 }
 
 /**
  * The marks of one template page, in the page's mm: its label (what, which tile, which page), the words
  * "print at actual size (100 %)", a small map of the tiles, a 100 mm check bar across and one down, the
- * grey overlap strips the next pages are laid on, dashed cut edges and the registration crosses.
+ * grey overlap strips the next pages are laid on, dashed cut edges and the registration marks.
  */
 export function templatePage(plan: TilePlan, tile: Tile, title: string, page: number, pages: number): PageFurniture {
   const w = plan.window;
@@ -73,9 +76,9 @@ export function templatePage(plan: TilePlan, tile: Tile, title: string, page: nu
   if (tile.col > 0) over.push(line(w.x, w.y, w.x, w.y + w.height, cut));
   if (tile.row > 0) over.push(line(w.x, w.y, w.x + w.width, w.y, cut));
 
-  // Crosses sit mid-strip on every seam, at a quarter and three quarters along it, in the map's frame.
+  // Marks sit mid-strip on every seam, at a quarter and three quarters along it, in the map's frame.
   const { area } = tile;
-  const onPage = (u: number, v: number) => cross(w.x + u - area.x, w.y + v - area.y);
+  const onPage = (u: number, v: number) => registrationMark(w.x + u - area.x, w.y + v - area.y);
   const half = TILE_OVERLAP / 2;
   const down = [area.y + area.height / 4, area.y + (3 * area.height) / 4];
   const across = [area.x + area.width / 4, area.x + (3 * area.width) / 4];

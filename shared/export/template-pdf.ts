@@ -8,7 +8,7 @@ import { mmToPt } from './units';
 
 /**
  * Template sheets of a panel as a PDF: each drilling map at exactly 1:1 (1 mm = 72/25.4 pt), tiled onto A4
- * or US Letter pages with overlap strips, registration crosses, page labels, a small map of the tiles and
+ * or US Letter pages with overlap strips, registration marks, page labels, a small map of the tiles and
  * a 100 mm check bar across and down on every page; the file asks readers not to scale it when printing.
  * Each map is stored once, as a form XObject every one of its pages shows through a clipped window.
  */
