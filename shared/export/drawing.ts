@@ -85,11 +85,12 @@ export function line(x1: number, y1: number, x2: number, y2: number, stroke: Str
 }
 
 /**
- * Text as one printable line: control characters become spaces, since XML cannot hold most of them and
- * a PDF line cannot break. Markup needs nothing here: every renderer writes text as text.
+ * Text as one printable line: control characters, unpaired surrogates and the two non-characters XML
+ * refuses become spaces, since an SVG file cannot hold them and a PDF line cannot break. Markup needs
+ * nothing here: every renderer writes text as text.
  */
 export function printable(value: string): string {
-  return value.replace(/[\u0000-\u001f\u007f]/g, ' ');
+  return value.replace(/[\u0000-\u001f\u007f\ufffe\uffff]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, ' ');
 }
 
 /** A line of text anchored on its baseline. */

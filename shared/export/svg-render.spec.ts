@@ -93,6 +93,13 @@ describe('drilling map as SVG', () => {
     expect(doc.getElementsByTagName('title')[0].textContent).toContain('<script>alert("job")</script> & Co');
   });
 
+  it('stays well-formed XML when a name holds characters XML cannot (set past the schema)', () => {
+    const odd = exportContext(exportJob());
+    odd.job.name = 'bell\u0007 and half a pair \ud800 ok';
+    const svg = drawingToSvg(panelDrillingMaps(odd, side, bores)[0], createSVGWindow());
+    expect(parse(svg).getElementsByTagName('title')[0].textContent).toContain('bell  and half a pair   ok');
+  });
+
   it('places every text by its own x and y attributes', () => {
     for (const t of parse(faceA).getElementsByTagName('text')) {
       expect(Number.isFinite(num(t, 'x')) && Number.isFinite(num(t, 'y'))).toBe(true);

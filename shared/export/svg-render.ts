@@ -1,5 +1,5 @@
 import { registerWindow, SVG, type Container, type Element } from '@svgdotjs/svg.js';
-import { translate, type Drawing, type Shape, type Stroke } from './drawing';
+import { printable, translate, type Drawing, type Shape, type Stroke } from './drawing';
 import { roundTo } from './units';
 
 /**
@@ -62,7 +62,7 @@ export function drawingToSvg(drawing: Drawing, window: SvgWindow): string {
     .attr({ width: `${n(drawing.width)}mm`, height: `${n(drawing.height)}mm` })
     .viewbox(0, 0, n(drawing.width), n(drawing.height))
     .attr({ 'font-family': 'DejaVu Sans, Verdana, Arial, sans-serif' });
-  root.element('title').words(drawing.title);
+  root.element('title').words(printable(drawing.title));
   root.rect(n(drawing.width), n(drawing.height)).attr({ fill: '#ffffff' });
   for (const shape of drawing.shapes) drawShape(root, shape);
   return `<?xml version="1.0" encoding="UTF-8"?>\n${root.svg()}\n`;
