@@ -1,5 +1,4 @@
-import type { PanelBore } from '../layout/bore';
-import type { BorePurpose } from '../layout/bore';
+import type { BorePurpose, PanelBore } from '../layout/bore';
 import { line, text, type Shape } from './drawing';
 import type { MapView } from './map-view';
 import { INK, MUTED, PURPOSE_STYLES } from './palette';

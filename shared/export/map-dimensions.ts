@@ -1,7 +1,6 @@
 import { line, text, type Shape } from './drawing';
 import type { Reach } from './map-panel';
-import type { MapView } from './map-view';
-import { viewPoint } from './map-view';
+import { viewPoint, type MapView } from './map-view';
 import { distinctValues, spreadLabels } from './ordinates';
 import { MUTED } from './palette';
 import { estimateTextWidth } from './text-width';

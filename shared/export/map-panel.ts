@@ -2,8 +2,7 @@ import { planBox, type PanelEdgeBore } from '../layout/bore';
 import type { Edge } from '../model/job-document';
 import { boreMark, tint } from './bore-marks';
 import { line, text, type Shape } from './drawing';
-import type { MapView } from './map-view';
-import { viewPoint } from './map-view';
+import { viewPoint, type MapView } from './map-view';
 import { INK, MUTED, PURPOSE_STYLES } from './palette';
 
 /** Room between the outline and an edge strip, mm. */
