@@ -59,6 +59,7 @@ export class PanelEditor implements LeavesSafely {
 
   protected readonly legend = PURPOSE_ORDER.map((purpose) => ({ purpose, ...PURPOSE_STYLES[purpose] }));
   protected readonly saveWords = SAVE_WORDS;
+  protected readonly steps = [0.1, 0.5, 1, 5, 10];
   protected readonly readout = computed(() => {
     const at = this.stage()?.cursor();
     return at ? `x ${at.x.toFixed(1)}  y ${at.y.toFixed(1)} mm` : '';
