@@ -1,7 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { isBalancedHeight } from '../../shared/grid/balanced-height';
 import { parseJobDocument } from '../../shared/model/parse-job';
-import { isEdgeBore, type JobDocument } from '../../shared/model/job-document';
+import type { JobDocument } from '../../shared/model/job-document';
+import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
+import { checkJob } from '../../shared/checks';
+import { panelBores } from '../../shared/layout/panel-layout';
 import { countUsers } from '../auth/users.repository';
 import { countJobs } from '../jobs/jobs.repository';
 import { openTestDatabase } from '../testing/test-database';
@@ -12,40 +15,50 @@ const documents = DEMO_JOBS.map((input) => {
   if (!result.ok) throw new Error(`${input.name}: ${result.errors.join('; ')}`);
   return result.value;
 });
+const catalog = builtinCatalog();
 const sides = (doc: JobDocument) => doc.panels.filter((p) => p.role === 'side');
 
 describe('the demo jobs', () => {
   it('are valid job documents', () => {
     expect(documents.map((d) => d.name)).toEqual(['Larch Lane kitchen', 'Loft study bookcase', 'Clinic storage wall']);
+    expect(documents.every((d) => d.carcasses.length > 0 && d.panels.length > 0)).toBe(true);
   });
 
   it('have balanced sides: H = 32·n + T (WOODWEB Knowledge Base, "Panel and Door Balancing with 32mm Systems")', () => {
     for (const doc of documents) for (const side of sides(doc)) expect(isBalancedHeight(side.height, side.thickness), `${doc.name}: ${side.name}`).toBe(true);
   });
 
-  it('line-bore each side with Ø5 holes from half the board thickness, 32 mm apart, on the 37 mm row and a rear row', () => {
+  it('put every shelf pin and mounting plate bore of a side on its system rows: x = 37 + 32k, y = T/2 + 32j', () => {
+    // 32 mm system (Wikipedia, "32 mm cabinetmaking system", published): Ø5 holes on a 32 mm pitch, the front row
+    // 37 mm from the front edge; rows start at half the board thickness (WOODWEB Knowledge Base, published).
     for (const doc of documents) {
       for (const side of sides(doc)) {
-        const faceBores = side.bores.filter((b) => !isEdgeBore(b)) as { x: number; y: number; diameter: number }[];
-        expect(faceBores.length).toBe(side.bores.length);
-        const rows = [...new Set(faceBores.map((b) => b.x))];
-        expect(rows[0]).toBe(37);
-        expect(rows).toHaveLength(2);
-        expect((rows[1] - 37) % 32).toBe(0);
-        const ys = faceBores.filter((b) => b.x === 37).map((b) => b.y);
-        // First hole as far from the bottom as the last from the top (Wikipedia, "32 mm cabinetmaking system").
-        expect(ys[0]).toBe(side.thickness / 2);
-        expect(side.height - ys.at(-1)!).toBe(side.thickness / 2);
-        expect(faceBores.every((b) => b.diameter === 5)).toBe(true);
+        const onRows = panelBores(side, catalog, doc.system).filter(
+          (b) => b.kind === 'face' && (b.purpose === 'shelf-pin' || b.purpose === 'mounting-plate'),
+        ) as { x: number; y: number; diameter: number }[];
+        for (const b of onRows) {
+          expect((b.x - 37) % 32, `${side.name} x ${b.x}`).toBe(0);
+          expect((b.y - side.thickness / 2) % 32, `${side.name} y ${b.y}`).toBe(0);
+          expect(b.diameter).toBe(5);
+        }
       }
     }
   });
 
-  it('include the 2131 mm tall side of the 32 mm literature, holes at 9.5 + 32k', () => {
+  it("pass every check with no error: the demo shows a shop's clean work, with a sagging shelf or two as warnings", () => {
+    for (const doc of documents) {
+      const errors = checkJob(doc, catalog).filter((f) => f.severity === 'error');
+      expect(errors, doc.name).toEqual([]);
+    }
+  });
+
+  it('include the 2131 mm tall side of the 32 mm literature, shelf pins at 9.5 + 32k', () => {
     // WOODWEB Knowledge Base (2010): T = 19, n = 66 gives H = 2131, the last hole 9.5 mm below the top.
     const tall = sides(documents[2])[0];
     expect(tall).toMatchObject({ height: 2131, thickness: 19 });
-    expect(tall.bores.filter((b) => !isEdgeBore(b) && b.x === 37)).toHaveLength(67);
+    const pins = panelBores(tall, catalog, documents[2].system).filter((b) => b.purpose === 'shelf-pin') as { y: number }[];
+    expect(pins.length).toBeGreaterThan(0);
+    expect(pins.every((b) => (b.y - 9.5) % 32 === 0)).toBe(true);
   });
 
   it('hang every door and flap on panels of their own carcass', () => {

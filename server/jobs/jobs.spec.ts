@@ -68,23 +68,27 @@ describe('jobs', () => {
     expect(res.body).toEqual((parseJobDocument(larchLaneKitchen) as { value: unknown }).value);
 
     const imported = await designer.post('/api/jobs/import').attach('file', Buffer.from(JSON.stringify(res.body)), 'kitchen.json').expect(201);
-    expect(imported.body).toMatchObject({ name: 'Larch Lane kitchen', carcassCount: 2, panelCount: 11 });
+    expect(imported.body).toMatchObject({ name: 'Larch Lane kitchen', carcassCount: 3, panelCount: 24 });
     expect((await designer.get(`/api/jobs/${imported.body.id}/document`).expect(200)).body).toEqual(res.body);
   });
 
   it('refuses a bad document with every problem by its path, and writes nothing', async () => {
     const before = await counts();
-    const bad = structuredClone(larchLaneKitchen) as { panels: { width: unknown; material: string; bores: { diameter: number }[] }[] };
+    // Through JSON, as an uploaded file would arrive: the planner's panels may share placement objects.
+    const bad = JSON.parse(JSON.stringify(larchLaneKitchen)) as { panels: { width: unknown; material: string; placements: { face: string }[] }[] };
     bad.panels[0].width = -560;
-    bad.panels[0].bores[3].diameter = 0;
-    bad.panels[1].material = 'oak-44';
+    bad.panels[0].placements[3].face = 'C';
     const res = await designer.post('/api/jobs/import').attach('file', Buffer.from(JSON.stringify(bad)), 'bad.json').expect(400);
     expect(res.body.error.code).toBe('invalid-document');
     expect(res.body.error.details).toEqual([
       'panels[0].width: must be greater than 0',
-      'panels[0].bores[3].diameter: must be greater than 0',
-      'panels[1].material: no material with id "oak-44"',
+      'panels[0].placements[3].face: Invalid option: expected one of "A"|"B"',
     ]);
+    // References are checked once every field is valid (a zod object refinement waits for its fields).
+    const badReference = JSON.parse(JSON.stringify(larchLaneKitchen)) as { panels: { material: string }[] };
+    badReference.panels[1].material = 'oak-44';
+    const refused = await designer.post('/api/jobs/import').attach('file', Buffer.from(JSON.stringify(badReference)), 'bad.json').expect(400);
+    expect(refused.body.error.details).toEqual(['panels[1].material: no material with id "oak-44"']);
     const notJson = await designer.post('/api/jobs/import').attach('file', Buffer.from('{"format": '), 'torn.json').expect(400);
     expect(notJson.body.error.details[0]).toMatch(/^the file is not JSON/);
     expect(await counts()).toEqual(before);

@@ -92,7 +92,7 @@ describe('panels', () => {
 
   it('refuses to delete a side a door hangs on', async () => {
     const demoJob = (await designer.get('/api/jobs/1').expect(200)).body;
-    const left = demoJob.panels.find((p: PanelRecord) => p.id === 'base-1-left');
+    const left = demoJob.panels.find((p: PanelRecord) => p.id === 'sink-base-left');
     const res = await designer.delete(`/api/panels/${left.dbId}?version=${left.version}`).expect(409);
     expect(res.body.error).toMatchObject({ code: 'in-use', message: '"Sink base, door" hangs on this panel: re-hang or delete it first.' });
   });
