@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { carcass } from '../model/job-document';
 import { panelRecord } from './contract';
 

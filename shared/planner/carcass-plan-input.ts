@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import * as z from 'zod';
 import { fittingId } from '../catalog/fitting';
 import { DEFAULT_MATERIALS } from '../model/default-materials';
 import { MAX_PANEL_LENGTH, carcass, displayName, material, shopLimits, systemSettings } from '../model/job-document';
