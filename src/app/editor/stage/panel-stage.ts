@@ -16,7 +16,7 @@ export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
 
 /**
  * The panel at scale on a Konva stage. The document lives in the store; this draws it (grid, bores,
- * overlay: three layers, none listening, as picking goes through a spatial index) and turns pointer
+ * drag, overlay: four layers, none listening, as picking goes through a spatial index) and turns pointer
  * gestures into the store's commands.
  */
 @Component({
@@ -45,7 +45,7 @@ export class PanelStage {
   private readonly viewState = signal<View | undefined>(undefined);
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
-  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; overlay: Konva.Layer; painter: BorePainter } | undefined>(undefined);
+  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; drag: Konva.Layer; overlay: Konva.Layer; painter: BorePainter } | undefined>(undefined);
   private readonly items = computed(() => {
     const panel = this.store.panel();
     const layout = this.store.layout();
@@ -89,8 +89,9 @@ export class PanelStage {
     afterNextRender(() => {
       const container = this.canvasHost().nativeElement;
       const stage = new Konva.Stage({ container, width: container.clientWidth, height: container.clientHeight });
-      const layers = { grid: new Konva.Layer({ listening: false }), bores: new Konva.Layer({ listening: false }), overlay: new Konva.Layer({ listening: false }) };
-      stage.add(layers.grid, layers.bores, layers.overlay);
+      const quiet = () => new Konva.Layer({ listening: false });
+      const layers = { grid: quiet(), bores: quiet(), drag: quiet(), overlay: quiet() };
+      stage.add(layers.grid, layers.bores, layers.drag, layers.overlay);
       const resize = new ResizeObserver(() => {
         stage.size({ width: container.clientWidth, height: container.clientHeight });
         this.size.set({ width: container.clientWidth, height: container.clientHeight });
@@ -100,7 +101,7 @@ export class PanelStage {
         resize.disconnect();
         stage.destroy();
       });
-      this.konva.set({ ...layers, painter: new BorePainter(layers.bores) });
+      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.drag) });
     });
     pointerTool(this.host, {
       store: this.store,
@@ -190,6 +191,7 @@ export class PanelStage {
       paintGrid(konva.grid, panel, this.store.grid(), view);
       konva.grid.batchDraw();
     });
+    let paintedView: View | undefined;
     effect(() => {
       const konva = this.konva();
       const panel = this.store.panel();
@@ -197,8 +199,11 @@ export class PanelStage {
       const view = this.viewState();
       if (!konva || !panel || !layout || !view) return;
       konva.painter.setView(view);
-      konva.painter.paint(panel, layout, this.store.face());
-      konva.bores.batchDraw();
+      const changed = konva.painter.paint(panel, layout, this.store.face(), this.store.selection());
+      const moved = view !== paintedView;
+      paintedView = view;
+      if (changed.bores || moved) konva.bores.batchDraw();
+      if (changed.drag || moved) konva.drag.batchDraw();
     });
     effect(() => {
       const konva = this.konva();
