@@ -70,6 +70,9 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   if (size.width < cupReach + input.limits.minEdge) return { errors: [`width: each door would be ${mm(size.width)} wide, too narrow for its hinge cup`] };
   const heights = hingeHeights(hinging.count.value, size.height, sizes.dy.value, box.grid, choice.hinge, choice.plate);
   if ('error' in heights) return { errors: [heights.error] };
+  // Inset doors sit within the box, so their plates go back by the door's thickness: the 37 mm row plus the door
+  // thickness (trade-reference §2, published).
+  const plateX = box.rows.front.value + (doors.overlay === 'inset' ? material.thickness : 0);
   const hands: ('left' | 'right')[] = doors.count === 2 ? ['left', 'right'] : [doors.hingeSide];
   const parts = noPlacements();
   const plans: DoorPlan[] = [];
@@ -77,7 +80,7 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
     const part = doors.count === 2 ? `door-${hand}` : 'door';
     const sideId = partId(ctx, hand);
     parts[hand].push(
-      ...heights.hinges.map((h, i) => ({ id: `plate-${i + 1}`, fitting: choice.plate.id, x: box.rows.front.value, y: h.plate, face: 'A' as const, rotation: 0 as const })),
+      ...heights.hinges.map((h, i) => ({ id: `plate-${i + 1}`, fitting: choice.plate.id, x: plateX, y: h.plate, face: 'A' as const, rotation: 0 as const })),
     );
     const panel = carcassPanel(ctx, part, doors.count === 2 ? `${hand} door` : 'door', 'door', size, {
       material: material.id,
@@ -100,5 +103,6 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   const spread = Math.max(...cups) - Math.min(...cups);
   // The hinge rule wants the outer hinges further apart than the door is wide (trade-reference §2).
   const sag = spread <= size.width ? [`The outer hinges are ${mm(spread)} apart, no more than the ${mm(size.width)} door width: the door may sag; two narrower doors would not.`] : [];
-  return { panels, parts, plans, notes: [...heights.notes, ...sag] };
+  const inset = doors.overlay === 'inset' ? [`The plates sit ${mm(plateX)} from the front edge, the front row plus the ${mm(material.thickness)} door; the grid check knows only the front row and flags them.`] : [];
+  return { panels, parts, plans, notes: [...heights.notes, ...sag, ...inset] };
 }

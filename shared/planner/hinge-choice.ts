@@ -33,13 +33,14 @@ export function chooseHinge(
   wanted: Explained,
   hingeId: string | undefined,
 ): HingeChoice | { error: string } {
+  const what = kind === 'inset' ? 'an inset' : `a ${kind}-overlay`;
   const named = hingeId === undefined ? undefined : catalog.get(hingeId);
   if (hingeId !== undefined && (named?.purpose !== 'hinge-cup' || named.hinge.overlay !== kind)) {
-    return { error: `fronts.hinge: "${hingeId}" is not a ${kind}-overlay hinge of the catalog` };
+    return { error: `fronts.hinge: "${hingeId}" is not ${what} hinge of the catalog` };
   }
   const hinges = named ? [named as HingeFitting] : hingesOf(catalog, kind);
   if (hinges.length === 0) {
-    return { error: `fronts.overlay: the catalog has no ${kind}-overlay hinge; import one from the hinge maker's data` };
+    return { error: `fronts.overlay: the catalog has no ${kind === 'inset' ? 'inset' : `${kind}-overlay`} hinge; import one from the hinge maker's data` };
   }
   const plates = [...catalog.values()].filter((f): f is PlateFitting => f.purpose === 'mounting-plate');
   let best: { hinge: HingeFitting; plate: PlateFitting; b: number; off: number } | undefined;

@@ -117,6 +117,12 @@ describe('planCarcass: bad input', () => {
     expect(refused({ width: 120, fronts: { ...doors, overlay: 'inset' } })[0]).toMatch(/^width: the carcass is too small for 2 inset doors: each would be 36\.5 mm × /);
   });
 
+  it('refuses inset doors while the catalog has no inset hinge, and says what to do', () => {
+    expect(refused({ fronts: { ...doors, overlay: 'inset' } })).toEqual([
+      "fronts.overlay: the catalog has no inset hinge; import one from the hinge maker's data",
+    ]);
+  });
+
   it('refuses a depth too shallow for the rear row', () => {
     expect(refused({ depth: 100 })).toEqual([
       'depth: 100 mm leaves no room for the rear system row: it sits a whole 32 mm pitch behind the front row at 37 mm and keeps 37 mm clear of the back (no back); make the carcass at least 106 mm deep',
