@@ -80,7 +80,7 @@ export function planBox(input: CarcassPlanInput): { box: CarcassBox } | { errors
       board,
       thickness: T,
       backAllowance: allowance,
-      partDepth: explain(depth - (input.back.type === 'inset' ? T : 0), input.back.type === 'inset' ? 'the depth less the inset back' : 'the full depth; a grooved back runs in a groove'),
+      partDepth: explain(depth - (input.back.type === 'inset' ? T : 0), input.back.type === 'inset' ? 'the depth less the inset back' : input.back.type === 'grooved' ? 'the full depth; the back runs in its groove' : 'the full depth'),
       shelfDepth: explain(depth - allowance.value, allowance.value > 0 ? `the depth less the back's room (${allowance.why})` : 'the full depth'),
       innerWidth: explain(width - 2 * T, `the width less two ${mm(T)} sides`),
       grid,
