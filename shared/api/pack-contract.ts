@@ -16,9 +16,12 @@ export const drillingMapQuery = z.object({ face: z.enum(['A', 'B'], 'must be "A"
 /** The most addresses one send may name: a shop's whole team and a few outside people. */
 export const MAX_RECIPIENTS = 20;
 
+/** One address a pack goes to; the send dialog checks each as it is typed, by the same rule. */
+export const recipientAddress = z.string().trim().toLowerCase().email('must be an e-mail address').max(254);
+
 export const packSendBody = z.object({
   to: z
-    .array(z.string().trim().toLowerCase().email('must be an e-mail address').max(254), 'must be a list of e-mail addresses')
+    .array(recipientAddress, 'must be a list of e-mail addresses')
     .min(1, 'must name at least one recipient')
     .max(MAX_RECIPIENTS, `must name at most ${MAX_RECIPIENTS} recipients`)
     .transform((to) => [...new Set(to)]),

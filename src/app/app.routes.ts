@@ -12,6 +12,7 @@ export const routes: Routes = [
       { path: '', pathMatch: 'full', redirectTo: 'jobs' },
       { path: 'jobs', loadChildren: () => import('./jobs/jobs.routes') },
       { path: 'jobs/:jobId/panels/:panelId', loadChildren: () => import('./editor/editor.routes') },
+      { path: 'outbox', loadChildren: () => import('./outbox/outbox.routes') },
       { path: 'jobs/:jobId/plan', loadChildren: () => import('./planner/planner.routes') },
     ],
   },

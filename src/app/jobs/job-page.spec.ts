@@ -12,7 +12,9 @@ describe('JobPage', () => {
   let http: HttpTestingController;
   let page: HTMLElement;
 
-  async function openAs(role: Role): Promise<void> {
+  const noFindings = { errors: 0, warnings: 0, notes: 0, findings: [] };
+
+  async function openAs(role: Role, findings: object = noFindings): Promise<void> {
     TestBed.configureTestingModule({
       providers: [
         provideRouter([{ path: 'jobs/:jobId', component: JobPage }]),
@@ -25,6 +27,11 @@ describe('JobPage', () => {
     const harness = await RouterTestingHarness.create();
     await harness.navigateByUrl('/jobs/11');
     http.expectOne('/api/jobs/11').flush(aJobDetail());
+    await settle();
+    // The bench pack asks for the job's findings once the job is shown: one tick draws it, the next sends its request.
+    TestBed.tick();
+    TestBed.tick();
+    http.expectOne('/api/jobs/11/findings').flush(findings);
     await settle();
     await harness.fixture.whenStable();
     page = harness.routeNativeElement!;
@@ -42,6 +49,8 @@ describe('JobPage', () => {
     expect(page.textContent).toContain('Larch Lane kitchen');
     expect(page.textContent).toContain('600 × 720 × 560 mm');
     expect(buttonNames()).toContain('Job document');
+    expect(buttonNames()).toEqual(expect.arrayContaining(['Download pack', 'Drilling files of Left side']));
+    expect(buttonNames()).not.toContain('Send pack…');
     expect(buttonNames().filter((n) => /add panel|details|edit|delete/i.test(n))).toEqual([]);
     expect(statusSelects()).toBe(0);
     expect(page.textContent).toContain('Planned');
@@ -57,7 +66,7 @@ describe('JobPage', () => {
   it('gives a designer every panel control', async () => {
     await openAs('designer');
 
-    expect(buttonNames()).toEqual(expect.arrayContaining(['Details', 'Add panel', 'Edit Left side', 'Delete Left side']));
+    expect(buttonNames()).toEqual(expect.arrayContaining(['Details', 'Add panel', 'Edit Left side', 'Delete Left side', 'Send pack…']));
     expect(statusSelects()).toBe(2);
   });
 
@@ -88,5 +97,25 @@ describe('JobPage', () => {
     buttonNamed('Cancel')!.click();
     await settle();
     http.expectNone({ method: 'DELETE' });
+  });
+
+  it('names the errors and asks before downloading the pack of a job with errors', async () => {
+    const finding = { code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: 'b1-side-left', bores: ['a', 'b'], placements: [] };
+    await openAs('bench', { errors: 1, warnings: 0, notes: 0, findings: [finding] });
+    expect(page.textContent).toContain('The checks found 1 error.');
+
+    buttonNamed('Download pack')!.click();
+    await settle();
+    expect(overlay().textContent).toContain('This job has 1 error');
+    buttonNamed('Cancel')!.click();
+    await settle();
+    http.expectNone('/api/jobs/11/pack.zip?paper=a4');
+
+    buttonNamed('Download pack')!.click();
+    await settle();
+    buttonNamed('Download anyway')!.click();
+    await settle();
+    http.expectOne('/api/jobs/11/pack.zip?paper=a4');
+    expect(page.textContent).toContain('Making the pack…');
   });
 });

@@ -10,6 +10,7 @@ import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Can } from '../auth/can';
+import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
@@ -20,10 +21,10 @@ import { PanelStatusChange, PanelTable } from './panel-table';
 
 const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 
-/** One job: its header, carcasses and panels, and the document export. */
+/** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [Can, DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
+  imports: [BenchPack, Can, DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
   providers: [JobStore],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',

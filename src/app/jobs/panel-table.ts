@@ -3,6 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
+import { MatMenuModule } from '@angular/material/menu';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
@@ -11,6 +12,7 @@ import { RouterLink } from '@angular/router';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/model/job-document';
 import { AuthStore } from '../auth/auth-store';
+import { hasFaceB, panelFileUrls } from '../packs/pack-api';
 import { roleLabels, statusLabels } from './panel-labels';
 
 /** A panel with the words the table shows and sorts by. */
@@ -21,6 +23,7 @@ interface PanelRow {
   material: string;
   size: string;
   status: string;
+  faceB: boolean;
 }
 
 export interface PanelStatusChange {
@@ -28,7 +31,7 @@ export interface PanelStatusChange {
   status: PanelStatus;
 }
 
-const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status'];
+const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status', 'files'];
 
 /** A job's panels: sortable, filterable, with the controls the user's role allows. */
 @Component({
@@ -38,6 +41,7 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status'];
     MatFormFieldModule,
     MatIconModule,
     MatInputModule,
+    MatMenuModule,
     MatSelectModule,
     MatSortModule,
     MatTableModule,
@@ -64,6 +68,7 @@ export class PanelTable {
   protected readonly canMark = computed(() => this.auth.can('markPanels'));
   protected readonly columns = computed(() => (this.canEdit() ? [...readColumns, 'actions'] : readColumns));
   protected readonly rows = new MatTableDataSource<PanelRow>([]);
+  protected readonly fileUrls = panelFileUrls;
   private readonly panelRows = computed(() => {
     const carcassNames = new Map(this.carcasses().map((c) => [c.id, c.name]));
     const materialNames = new Map(this.materials().map((m) => [m.id, m.name]));
@@ -75,6 +80,7 @@ export class PanelTable {
         material: materialNames.get(panel.material) ?? panel.material,
         size: `${panel.width} × ${panel.height} × ${panel.thickness}`,
         status: statusLabels[panel.status],
+        faceB: hasFaceB(panel),
       }),
     );
   });

@@ -1,0 +1,45 @@
+import { HttpClient, HttpEvent } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { firstValueFrom, Observable } from 'rxjs';
+import { PanelRecord } from '../../../shared/api/contract';
+import { PackSendBody, packSent, PackSent } from '../../../shared/api/pack-contract';
+import { PaperName } from '../../../shared/export/paper';
+import { isEdgeBore } from '../../../shared/model/job-document';
+
+export const jobFindingsUrl = (jobId: number) => `/api/jobs/${jobId}/findings`;
+export const mailRecipientsUrl = '/api/mail/recipients';
+const packUrl = (jobId: number) => `/api/jobs/${jobId}/pack.zip`;
+
+/** Whether a panel has a drilling map of face B: when it has bores there, loose or from a fitting. */
+export function hasFaceB(panel: PanelRecord): boolean {
+  return panel.bores.some((b) => !isEdgeBore(b) && b.face === 'B') || panel.placements.some((p) => p.face === 'B');
+}
+
+/** A panel's downloads; the browser fetches them itself (plain links), as they are small and quick. */
+export const panelFileUrls = (panelDbId: number) => ({
+  svg: (face: 'A' | 'B') => `/api/panels/${panelDbId}/drilling-map.svg?face=${face}`,
+  dxf: `/api/panels/${panelDbId}/drilling-map.dxf`,
+  pdf: (paper: PaperName) => `/api/panels/${panelDbId}/template.pdf?paper=${paper}`,
+});
+
+/** The file name a Content-Disposition header offers, the UTF-8 form first. */
+export function attachmentName(header: string | null, fallback: string): string {
+  const encoded = header && /filename\*=UTF-8''([^;]+)/i.exec(header)?.[1];
+  if (encoded) return decodeURIComponent(encoded);
+  return (header && /filename="([^"]*)"/i.exec(header)?.[1]) || fallback;
+}
+
+/** The bench pack's calls: the whole pack with its download progress, and sending it by mail. */
+@Injectable({ providedIn: 'root' })
+export class PackApi {
+  private readonly http = inject(HttpClient);
+
+  /** The pack as a Blob; the events carry the bytes received so far (the total is not known while it streams). */
+  downloadPack(jobId: number, paper: PaperName): Observable<HttpEvent<Blob>> {
+    return this.http.get(packUrl(jobId), { params: { paper }, responseType: 'blob', reportProgress: true, observe: 'events' });
+  }
+
+  async sendPack(jobId: number, body: PackSendBody): Promise<PackSent> {
+    return packSent.parse(await firstValueFrom(this.http.post(`/api/jobs/${jobId}/pack/send`, body)));
+  }
+}
