@@ -1,4 +1,4 @@
-import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, signal, viewChild } from '@angular/core';
+import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
 import { fromEvent, map } from 'rxjs';
@@ -42,7 +42,12 @@ export class PanelStage {
   private readonly canvasHost = viewChild.required<ElementRef<HTMLDivElement>>('canvas');
 
   private readonly size = signal({ width: 0, height: 0 });
-  private readonly viewState = signal<View | undefined>(undefined);
+  /** Fitted whenever the stage's size, the board or the face shown changes; panned and zoomed in between. */
+  private readonly viewState = linkedSignal<View | undefined>(() => {
+    const size = this.size();
+    const board = this.board();
+    return board && size.width > 0 ? fitView(board, size, this.store.face() === 'B') : undefined;
+  });
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
   private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; drag: Konva.Layer; overlay: Konva.Layer; painter: BorePainter } | undefined>(undefined);
@@ -176,21 +181,6 @@ export class PanelStage {
 
   /** One effect per layer, so that a pan redraws no bore and a drag no grid. */
   private paintLayers(): void {
-    // Fit the panel when the stage gets or changes its size, another panel loads, or the other face is shown.
-    effect(() => {
-      const size = this.size();
-      const fromB = this.store.face() === 'B';
-      const board = this.board();
-      if (board && size.width > 0) this.viewState.set(fitView(board, size, fromB));
-    });
-    effect(() => {
-      const konva = this.konva();
-      const panel = this.board();
-      const view = this.viewState();
-      if (!konva || !panel || !view) return;
-      paintGrid(konva.grid, panel, this.store.grid(), view);
-      konva.grid.batchDraw();
-    });
     let paintedView: View | undefined;
     effect(() => {
       const konva = this.konva();
