@@ -12,15 +12,16 @@ export function formatPath(path: readonly PropertyKey[]): string {
 }
 
 /**
- * A union (a face bore or an edge bore) that matches no branch reports "Invalid input" with the
- * problems of every branch. The branch with the fewest problems is the one the author meant, so
- * its problems are the ones worth showing, each at its full path.
+ * A union of objects (a face bore or an edge bore) that matches no branch reports "Invalid input"
+ * with the problems of every branch. The branch with the fewest problems is the one the author
+ * meant, so its problems are the ones worth showing, each at its full path.
  */
 function flatten(issue: Issue, prefix: readonly PropertyKey[]): { path: PropertyKey[]; message: string }[] {
   const path = [...prefix, ...issue.path];
   if (issue.code === 'invalid_union' && issue.errors.length > 0) {
     const closest = issue.errors.reduce((best, branch) => (branch.length < best.length ? branch : best));
-    if (closest.length > 0) return closest.flatMap((inner) => flatten(inner, path));
+    // Only a union of objects has a branch to point into; a union of values (a number or a keyword) keeps its own message.
+    if (closest.length > 0 && closest.every((inner) => inner.path.length > 0)) return closest.flatMap((inner) => flatten(inner, path));
   }
   return [{ path, message: issue.message }];
 }
