@@ -70,11 +70,15 @@ export class EditorStore {
     const panel = this.panel();
     return job && panel ? layoutPanel(panel, this.catalog, job.system) : undefined;
   });
-  readonly grid = computed(() => {
-    const job = this.job();
-    const panel = this.panel();
-    return job && panel ? panelGrid(job, panel) : undefined;
-  });
+  /** Equal by value, so that an edit that leaves the board alone does not redraw the rows. */
+  readonly grid = computed(
+    () => {
+      const job = this.job();
+      const panel = this.panel();
+      return job && panel ? panelGrid(job, panel) : undefined;
+    },
+    { equal: (a, b) => JSON.stringify(a) === JSON.stringify(b) },
+  );
   readonly findings = computed(() => {
     const job = this.job();
     const panel = this.panel();

@@ -181,6 +181,14 @@ export class PanelStage {
 
   /** One effect per layer, so that a pan redraws no bore and a drag no grid. */
   private paintLayers(): void {
+    effect(() => {
+      const konva = this.konva();
+      const board = this.board();
+      const view = this.viewState();
+      if (!konva || !board || !view) return;
+      paintGrid(konva.grid, board, this.store.grid(), view);
+      konva.grid.batchDraw();
+    });
     let paintedView: View | undefined;
     effect(() => {
       const konva = this.konva();
