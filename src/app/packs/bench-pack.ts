@@ -38,6 +38,11 @@ export class BenchPack {
   protected readonly paper = signal<PaperName>('a4');
   protected readonly findings = httpResource(() => jobFindingsUrl(this.jobId()), { parse: (raw) => jobFindings.parse(raw) });
   protected readonly errors = computed(() => (this.findings.hasValue() ? this.findings.value().errors : 0));
+  protected readonly verdictIcon = computed(() => {
+    if (!this.findings.hasValue()) return null;
+    const { errors, warnings } = this.findings.value();
+    return errors > 0 ? 'error' : warnings > 0 ? 'warning' : 'check_circle';
+  });
   protected readonly verdict = computed(() => {
     if (!this.findings.hasValue()) return null;
     const { errors, warnings } = this.findings.value();
