@@ -1,6 +1,7 @@
-import type { Response } from 'supertest';
+import type { Response, Test } from 'supertest';
 
-type Parser = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => void;
+/** The kind of parser supertest runs on Node: it reads the response stream itself. */
+type Parser = Extract<Parameters<Test['parse']>[0], (res: never, done: never) => void>;
 
 /** A supertest parser that keeps a download's bytes as they came: `.buffer(true).parse(binaryBody)`. */
 export const binaryBody: Parser = (res, done) => {
