@@ -37,7 +37,8 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
   const T = box.thickness;
   const n = drawers.count;
   const one = frontSizes('full', 1, drawers.reveal, { width: input.width, height: input.height, thickness: T });
-  const frontHeight = (input.height - n * drawers.reveal) / n;
+  // Down to half a millimetre, a size a bench can cut; what is left widens the top reveal.
+  const frontHeight = Math.floor(((input.height - n * drawers.reveal) / n) * 2) / 2;
   if (frontHeight < 2 * input.system.pitch) return { errors: [`fronts.count: ${n} drawers leave fronts of ${mm(frontHeight)}, too low for a drawer`] };
   const front = box.rows.front.value;
   const runners = [...catalog.values()]
@@ -63,7 +64,7 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
     plans.push({
       panel: panel.id,
       width: one.width,
-      height: explain(frontHeight, `the ${mm(input.height)} height less ${n} reveals of ${mm(drawers.reveal)}, shared by ${n}`),
+      height: explain(frontHeight, `the ${mm(input.height)} height less ${n} reveals of ${mm(drawers.reveal)}, shared by ${n}, down to 0.5 mm`),
       runner: { fitting: runner.id, y: explain(y, `the lowest system hole that keeps the runner's body above ${mm(Math.max(lower, T))}, behind its front; ${runner.name}, the longest that clears the back`) },
     });
   }
