@@ -45,11 +45,15 @@ describe('the panel editor in the browser', () => {
     const size = { width: 560, height: 722 };
     expect(await page.locator('.title .size').innerText()).toContain('560 × 722');
 
+    // The planned side already carries its connectors and the door's plates; new placements come after them.
+    const before = (await placementRows(page)).length;
+    expect(before).toBeGreaterThan(0);
+
     // The first plate by a click in the catalog; it snaps onto the front row.
     const plate = page.getByRole('button', { name: /Mounting plate, 0 mm/ });
     await plate.click();
-    await expect.poll(() => placementRows(page)).toHaveLength(1);
-    const first = (await placementRows(page))[0];
+    await expect.poll(() => placementRows(page)).toHaveLength(before + 1);
+    const first = (await placementRows(page))[before];
     const [, x, y] = /x ([\d.]+), y ([\d.]+)/.exec(first) ?? [];
     expect(Number(x)).toBe(37);
 
@@ -57,7 +61,7 @@ describe('the panel editor in the browser', () => {
     await plate.click();
     await page.locator('bw-panel-stage').focus();
     for (let i = 0; i < 3; i++) await page.keyboard.press('Shift+ArrowUp');
-    await expect.poll(async () => (await placementRows(page))[1]).toContain(`y ${Number(y) + 96}`);
+    await expect.poll(async () => (await placementRows(page))[before + 1]).toContain(`y ${Number(y) + 96}`);
     const clashes = page.locator('bw-findings-list .finding[data-code="keepouts-overlap"]');
     await expect.poll(() => clashes.count()).toBe(0);
     const from = await screenPoint(page, size, { x: Number(x), y: Number(y) + 96 });
@@ -76,7 +80,7 @@ describe('the panel editor in the browser', () => {
     await expect.poll(() => clashes.count()).toBe(0);
     expect(await ringsOnStage(page, 'keepouts-overlap')).toBe(0);
     const placed = await placementRows(page);
-    expect(placed[1]).toContain(`y ${Number(y) + 96}`);
+    expect(placed[before + 1]).toContain(`y ${Number(y) + 96}`);
 
     // The plates meet no hinge of the door yet (an error), so saving asks first, naming it.
     await page.getByRole('button', { name: 'Save', exact: true }).click();
