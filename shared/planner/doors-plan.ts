@@ -7,6 +7,7 @@ import { explain, type Explained } from './explained';
 import { frontSizes } from './front-sizes';
 import { chooseHinge, type HingeChoice } from './hinge-choice';
 import { hingeHeights, type HingeHeight } from './hinge-heights';
+import { cupPlacements, platePlacements } from './hinge-placements';
 import { carcassPanel, noPlacements, partId, type PartPlacements, type PlanContext } from './plan-parts';
 
 /** One planned door and why it is as it is. */
@@ -79,22 +80,12 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   const panels = hands.map((hand) => {
     const part = doors.count === 2 ? `door-${hand}` : 'door';
     const sideId = partId(ctx, hand);
-    parts[hand].push(
-      ...heights.hinges.map((h, i) => ({ id: `plate-${i + 1}`, fitting: choice.plate.id, x: plateX, y: h.plate, face: 'A' as const, rotation: 0 as const })),
-    );
+    parts[hand].push(...platePlacements(choice, heights.hinges, plateX));
     const panel = carcassPanel(ctx, part, doors.count === 2 ? `${hand} door` : 'door', 'door', size, {
       material: material.id,
       hang: { on: [sideId], dy: sizes.dy.value },
       handleMass: doors.handleMass > 0 ? doors.handleMass : undefined,
-      placements: heights.hinges.map((h, i) => ({
-        id: `hinge-${i + 1}`,
-        fitting: choice.hinge.id,
-        x: choice.cupFromEdge.value,
-        y: h.cup.value,
-        face: 'A',
-        rotation: 0,
-        params: { boringDistance: choice.boringDistance.value },
-      })),
+      placements: cupPlacements(choice, heights.hinges),
     });
     plans.push({ panel: panel.id, hangsOn: sideId, width: sizes.width, height: sizes.height, dy: sizes.dy, mass: hinging.mass, hingeCount: hinging.count, hinge: choice, hinges: heights.hinges });
     return panel;

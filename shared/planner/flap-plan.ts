@@ -8,6 +8,7 @@ import { explain, type Explained } from './explained';
 import { frontSizes } from './front-sizes';
 import { chooseHinge, type HingeChoice } from './hinge-choice';
 import { hingeHeights, type HingeHeight } from './hinge-heights';
+import { cupPlacements, platePlacements } from './hinge-placements';
 import { chooseLift, type LiftChoice } from './lift-choice';
 import { clearOfBodies } from './clear-of-bodies';
 import { connectorColumns, jointPlacements } from './construction';
@@ -78,22 +79,12 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
       y: explain(anchor, `the highest system hole that keeps the mechanism's body (${mm(bottom)} to ${mm(top)} about its top hole) under the top`),
     };
   });
-  parts.top.push(
-    ...heights.hinges.map((h, i): Placement => ({ id: `plate-${i + 1}`, fitting: choice.plate.id, x: topGrid.rows[0], y: h.plate, face: 'A', rotation: 0 })),
-  );
+  parts.top.push(...platePlacements(choice, heights.hinges, topGrid.rows[0]));
   const panel = carcassPanel(ctx, 'flap', 'flap', 'flap', size, {
     material: material.id,
     hang: { on: [partId(ctx, 'top'), ...hands.map((hand) => partId(ctx, hand))], dy },
     handleMass: flap.handleMass > 0 ? flap.handleMass : undefined,
-    placements: heights.hinges.map((h, i) => ({
-      id: `hinge-${i + 1}`,
-      fitting: choice.hinge.id,
-      x: choice.cupFromEdge.value,
-      y: h.cup.value,
-      face: 'A',
-      rotation: 0,
-      params: { boringDistance: choice.boringDistance.value },
-    })),
+    placements: cupPlacements(choice, heights.hinges),
   });
   const load = { height: size.width, mass: board, handleMass: flap.handleMass };
   const moment = Array.from({ length: 90 / ANGLE_STEP + 1 }, (_, i) => ({ angle: i * ANGLE_STEP, moment: flapMoment(load, i * ANGLE_STEP) }));
