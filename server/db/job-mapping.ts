@@ -170,6 +170,22 @@ export function placementDraft(p: Placement): PlacementDraft {
   };
 }
 
+/** A panel of the document as the fields of its row (its drilling and carcass link are stored apart). */
+export function panelDraft(p: Panel): PanelDraft {
+  return {
+    key: p.id,
+    name: p.name,
+    role: p.role,
+    width: p.width,
+    height: p.height,
+    thickness: p.thickness,
+    material: p.material,
+    status: p.status,
+    hang: p.hang ?? null,
+    handleMass: p.handleMass ?? null,
+  };
+}
+
 /** A face or edge bore of the document as the fields of its row; the other kind's columns stay null. */
 export function boreDraft(b: Bore): BoreDraft {
   const none = { x: null, y: null, face: null, edge: null, at: null, z: null };
@@ -191,18 +207,7 @@ export function fromJobDocument(doc: JobDocument): JobDocumentDraft {
     },
     carcasses: doc.carcasses.map(({ id, ...fields }) => ({ key: id, ...fields })),
     panels: doc.panels.map((p) => ({
-      panel: {
-        key: p.id,
-        name: p.name,
-        role: p.role,
-        width: p.width,
-        height: p.height,
-        thickness: p.thickness,
-        material: p.material,
-        status: p.status,
-        hang: p.hang ?? null,
-        handleMass: p.handleMass ?? null,
-      },
+      panel: panelDraft(p),
       carcassKey: p.carcass ?? null,
       placements: p.placements.map(placementDraft),
       bores: p.bores.map(boreDraft),

@@ -4,7 +4,7 @@ import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import { planCarcass } from '../../shared/planner/plan-carcass';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
-import { boreDraft, placementDraft, toCarcass } from '../db/job-mapping';
+import { boreDraft, panelDraft, placementDraft, toCarcass } from '../db/job-mapping';
 import { AppError, notFound } from '../http/app-error';
 import { carcassKeys, findJob, insertCarcass, touchJob } from '../jobs/jobs.repository';
 import * as panels from '../panels/panels.repository';
@@ -34,20 +34,7 @@ export async function addPlannedCarcass(db: Database, actor: User, jobId: number
     const row = await insertCarcass(tx, jobId, { ...fields, key });
     const ids: number[] = [];
     for (const p of plan.panels) {
-      const panelId = await panels.insertPanel(tx, {
-        key: p.id,
-        name: p.name,
-        role: p.role,
-        width: p.width,
-        height: p.height,
-        thickness: p.thickness,
-        material: p.material,
-        status: 'planned',
-        hang: p.hang ?? null,
-        handleMass: p.handleMass ?? null,
-        jobId,
-        carcassId: row.id,
-      });
+      const panelId = await panels.insertPanel(tx, { ...panelDraft(p), jobId, carcassId: row.id });
       await panels.insertDrilling(tx, panelId, p.placements.map(placementDraft), p.bores.map(boreDraft));
       ids.push(panelId);
     }
