@@ -1,3 +1,4 @@
+import { fittingPurpose } from '../catalog/fitting';
 import type { BorePurpose } from '../layout/bore';
 
 /** How a purpose is drawn: its colour, and a letter so that colour never carries the meaning alone. */
@@ -21,16 +22,8 @@ export const PURPOSE_STYLES: Readonly<Record<BorePurpose, PurposeStyle>> = {
   loose: { color: '#757575', letter: 'B', label: 'loose bore (drawn by hand)' },
 };
 
-/** Purposes in the order a legend lists them. */
-export const PURPOSE_ORDER: readonly BorePurpose[] = [
-  'construction',
-  'hinge-cup',
-  'mounting-plate',
-  'shelf-pin',
-  'lift-mechanism',
-  'runner',
-  'loose',
-];
+/** Purposes in the order a legend lists them: the catalog's order, then bores drawn by hand. */
+export const PURPOSE_ORDER: readonly BorePurpose[] = [...fittingPurpose.options, 'loose'];
 
 /** Ink for lines and text that carry no purpose. */
 export const INK = '#222222';
