@@ -128,7 +128,7 @@ export class PanelEditor implements LeavesSafely {
       case 'save':
         return void this.saver.saveNow();
       case 'fit':
-        return this.stage()?.fit();
+        return this.stage()?.fitToPanel();
       case 'zoom-in':
         return this.stage()?.zoomBy(1.25);
       case 'zoom-out':

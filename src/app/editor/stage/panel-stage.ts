@@ -122,7 +122,7 @@ export class PanelStage {
     this.paintLayers();
   }
 
-  fit(): void {
+  fitToPanel(): void {
     const panel = this.store.panel();
     if (panel) this.viewState.set(fitView(panel, this.size(), this.store.face() === 'B'));
   }
