@@ -1,10 +1,13 @@
 import { readFileSync } from 'node:fs';
 import { getTableName, sql, type SQL } from 'drizzle-orm';
 import type { Database } from './client';
-import { activity, bores, carcasses, jobs, panels, placements, users } from './schema';
+import { activity, attachments, bores, carcasses, jobs, panels, placements, shopFittings, users } from './schema';
 
-/** Every table a backup holds, parents before children (the order a restore inserts them). Sessions are transient and left out. */
-const TABLES = [users, jobs, carcasses, panels, placements, bores, activity];
+/**
+ * Every table a backup holds, parents before children (the order a restore inserts them). Sessions
+ * and the single-use mail links are transient and left out: after a restore, invite again.
+ */
+const TABLES = [users, shopFittings, jobs, carcasses, panels, placements, bores, activity, attachments];
 
 export const BACKUP_FORMAT = 'borewright.backup/1';
 

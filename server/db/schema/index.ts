@@ -8,3 +8,6 @@ export { placements } from './placements';
 export { bores } from './bores';
 export { activity } from './activity';
 export { outbox } from './outbox';
+export { mailTokens } from './mail-tokens';
+export { shopFittings } from './shop-fittings';
+export { attachments } from './attachments';

@@ -1,10 +1,5 @@
-import { customType, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
-
-/** Raw bytes: PGlite hands back a Uint8Array, node-postgres a Buffer; both come out as a Buffer. */
-const bytes = customType<{ data: Buffer; driverData: Uint8Array }>({
-  dataType: () => 'bytea',
-  fromDriver: (value) => Buffer.from(value.buffer, value.byteOffset, value.byteLength),
-});
+import { index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { bytes } from './bytes';
 
 export interface OutboxAttachmentRow {
   name: string;

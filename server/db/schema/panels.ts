@@ -4,6 +4,7 @@ import { panelRole, panelStatus, type PanelRole, type PanelStatus } from '../../
 import { carcasses } from './carcasses';
 import { jobs } from './jobs';
 import { oneOf } from './check';
+import { users } from './users';
 
 /** The hang relation of a door or flap, by panel ids of the document (design.md §3). */
 export type HangColumn = { on: string[]; dy: number };
@@ -25,6 +26,9 @@ export const panels = pgTable(
     thickness: doublePrecision('thickness').notNull(),
     material: text('material').notNull(),
     status: text('status').$type<PanelStatus>().notNull().default('planned'),
+    /** Who set the status last and when; null while the panel is as planned. */
+    statusBy: integer('status_by').references(() => users.id, { onDelete: 'set null' }),
+    statusAt: timestamp('status_at', { withTimezone: true }),
     hang: jsonb('hang').$type<HangColumn>(),
     handleMass: doublePrecision('handle_mass'),
     /** Optimistic concurrency: every change bumps it; a write naming an older one is refused. */

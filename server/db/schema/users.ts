@@ -13,6 +13,8 @@ export const users = pgTable(
     passwordHash: text('password_hash').notNull(),
     /** Demo accounts are refused in production unless the operator allows them. */
     demo: boolean('demo').notNull().default(false),
+    /** A deactivated member cannot sign in and their sessions are ended; their name stays in the history. */
+    active: boolean('active').notNull().default(true),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
