@@ -1,15 +1,13 @@
-import type { Test } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { PanelRecord, Role } from '../../shared/api/contract';
 import { createApiRouter } from '../../server/api-router';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../server/demo/greyfield-people';
+import { DEMO_PASSWORD } from '../../server/demo/greyfield-people';
 import { larchLaneKitchen } from '../../server/demo/larch-lane-kitchen';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
 import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
+import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 
-type Actor = 'signed out' | Role;
 /** A carcass description the planner accepts: a doweled wall box with two doors. */
 const PLANNED_CARCASS = {
   width: 600,
@@ -22,22 +20,6 @@ const PLANNED_CARCASS = {
   shelves: { type: 'none' },
   mounting: { type: 'wall' },
 };
-const ACTORS: Actor[] = ['signed out', 'admin', 'designer', 'bench', 'viewer'];
-const emailOf = (actor: Actor) => DEMO_PEOPLE.find((p) => p.role === actor)?.email ?? 'viewer@greyfield.example';
-
-/** A job of its own for each request that changes something, so no request sees another's change. */
-interface Fixture {
-  jobId: number;
-  panel: PanelRecord;
-}
-
-interface Row {
-  request: (client: ApiClient, fixture: Fixture, actor: Actor) => Test;
-  /** Statuses for signed out, admin, designer, bench, viewer (design.md §1). */
-  expect: [number, number, number, number, number];
-  /** Sign-in and sign-out change the session itself: each actor gets a client of its own. */
-  ownClient?: boolean;
-}
 
 /** A message in the outbox with the pack attached, sent before the rows run. */
 let caughtMessageId = 0;
