@@ -1,0 +1,28 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
+import { shopFittings } from '../db/schema';
+import { createTestApp, type TestApp } from '../testing/test-app';
+import { shopCatalog } from './shop-catalog';
+
+describe('shopCatalog', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('adds valid shop fittings, leaves out broken rows and never lets one replace a built-in fitting', async () => {
+    const builtin = builtinCatalog();
+    const pin = builtin.get('shelf-pin-5')!;
+    await t.database.db.insert(shopFittings).values([
+      { fittingId: 'shop-pin', fitting: { ...pin, id: 'shop-pin', name: 'Shop pin' } },
+      { fittingId: 'shelf-pin-5', fitting: { ...pin, name: 'Clashing pin' } },
+      { fittingId: 'broken', fitting: { id: 'broken' } as never },
+    ]);
+    const catalog = await shopCatalog(t.database.db);
+    expect(catalog.get('shop-pin')?.name).toBe('Shop pin');
+    expect(catalog.get('shelf-pin-5')?.name).toBe(pin.name);
+    expect(catalog.has('broken')).toBe(false);
+    expect(catalog.size).toBe(builtin.size + 1);
+  });
+});
