@@ -92,6 +92,12 @@ export async function carcassKeys(db: Database, jobId: number): Promise<Map<stri
   return new Map(rows.map((r) => [r.key, r.id]));
 }
 
+/** Changes a carcass's fields and returns its row. */
+export async function updateCarcass(db: Database, id: number, changes: Omit<CarcassDraft, 'key'>) {
+  const [row] = await db.update(carcasses).set(changes).where(eq(carcasses.id, id)).returning();
+  return row;
+}
+
 /** Adds a carcass to the job and returns its row. */
 export async function insertCarcass(db: Database, jobId: number, draft: CarcassDraft) {
   const [row] = await db.insert(carcasses).values({ ...draft, jobId }).returning();

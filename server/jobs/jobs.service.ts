@@ -38,10 +38,12 @@ async function jobRows(db: Database, jobId: number) {
 /** A job with its materials, carcasses and panels, for the job page. */
 export async function jobDetail(db: Database, jobId: number): Promise<JobDetail> {
   const rows = await jobRows(db, jobId);
-  const { materials, carcasses } = toJobDocument(rows);
+  const { materials, system, limits, carcasses } = toJobDocument(rows);
   return {
     job: { ...(await jobSummary(db, jobId)), notes: rows.job.notes },
     materials,
+    system,
+    limits,
     carcasses,
     panels: toPanelRecords(rows),
   };

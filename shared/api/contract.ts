@@ -1,5 +1,5 @@
 import * as z from 'zod';
-import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement } from '../model/job-document';
+import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement, shopLimits, systemSettings } from '../model/job-document';
 
 /**
  * The HTTP API's bodies and answers, shared by the server (which validates what comes in) and the
@@ -88,6 +88,9 @@ export type PanelRecord = z.output<typeof panelRecord>;
 export const jobDetail = z.object({
   job: jobSummary.extend({ notes: z.string().nullable() }),
   materials: z.array(material),
+  /** The job's own system and shop limits: the planner's preview plans with them, as the server does. */
+  system: systemSettings,
+  limits: shopLimits,
   carcasses: z.array(carcass),
   panels: z.array(panelRecord),
 });

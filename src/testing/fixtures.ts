@@ -48,6 +48,8 @@ export function aJobDetail(panels: PanelRecord[] = [aPanel(), aPanel({ dbId: 102
       { id: 'pb18', name: 'Particleboard 18 white', thickness: 18, density: 650, modulus: 3500 },
       { id: 'mdf19', name: 'MDF 19 lacquer', thickness: 19, density: 750, modulus: 3800 },
     ],
+    system: { pitch: 32, setback: 37, holeDiameter: 5, holeDepth: 13 },
+    limits: { minWeb: 3, minEdge: 3, minFloor: 3, sagRatio: 144 },
     carcasses: [{ id: 'b1', name: 'Base 600', width: 600, height: 720, depth: 560, material: 'pb18', mounting: 'floor' }],
     panels,
   };

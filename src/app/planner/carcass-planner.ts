@@ -8,14 +8,17 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
+import { MatDialog } from '@angular/material/dialog';
 import { Router, RouterLink } from '@angular/router';
 import { map } from 'rxjs';
 import { Can } from '../auth/can';
-import { describeError } from '../core/api-problem';
+import type { ChangedPanelChoice } from '../../../shared/planner/replan';
+import { ApiProblem, describeError } from '../core/api-problem';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
 import { plannerForm, toPlanInput } from './planner-form';
 import { PlannerStore } from './planner-store';
+import { ReplanDialog } from './replan-dialog';
 
 /**
  * The carcass planner: a box and how it opens typed on the left, its drawing and every worked-out number
@@ -43,6 +46,7 @@ import { PlannerStore } from './planner-store';
 export class CarcassPlanner {
   private readonly router = inject(Router);
   private readonly snackBar = inject(MatSnackBar);
+  private readonly dialog = inject(MatDialog);
   protected readonly store = inject(PlannerStore);
 
   protected readonly form = plannerForm();
@@ -52,12 +56,20 @@ export class CarcassPlanner {
     effect(() => this.store.describe(toPlanInput(this.value())));
   }
 
-  protected async addToJob(): Promise<void> {
+  protected async addToJob(changed?: ChangedPanelChoice): Promise<void> {
+    const replanning = this.store.usedIds().has(this.store.plan()?.carcass.id ?? '');
     try {
-      const added = await this.store.addToJob();
-      const ref = this.snackBar.open(`Added “${added.carcass.name}” with ${added.panels.length} panels.`, 'Open the job', { duration: 8000 });
+      const added = await this.store.addToJob(changed);
+      const kept = added.kept.length > 0 ? `; kept ${added.kept.length} changed panel${added.kept.length === 1 ? '' : 's'} as they were` : '';
+      const done = `${replanning ? 'Planned' : 'Added'} “${added.carcass.name}” with ${added.panels.length} panels${kept}.`;
+      const ref = this.snackBar.open(done, 'Open the job', { duration: 8000 });
       ref.onAction().subscribe(() => void this.router.navigate(['/jobs', this.store.jobId()]));
     } catch (error) {
+      if (changed === undefined && error instanceof ApiProblem && error.code === 'replan-changed') {
+        const choice = await ReplanDialog.ask(this.dialog, error);
+        if (choice) await this.addToJob(choice);
+        return;
+      }
       this.snackBar.open(describeError(error), 'Close');
     }
   }

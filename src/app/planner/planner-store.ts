@@ -8,6 +8,7 @@ import { plannedCarcass, type PlannedCarcass } from '../../../shared/api/plan-co
 import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
 import type { CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
 import { planCarcass } from '../../../shared/planner/plan-carcass';
+import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { jobUrl } from '../jobs/jobs-api';
 
 /**
@@ -24,13 +25,14 @@ export class PlannerStore {
   private readonly description = signal<CarcassPlanInputData | undefined>(undefined);
 
   readonly job = computed(() => (this.detail.hasValue() ? this.detail.value().job : undefined));
-  readonly materials = computed(() => (this.detail.hasValue() ? this.detail.value().materials : []));
+  private readonly settings = computed(() => (this.detail.hasValue() ? this.detail.value() : undefined));
+  readonly materials = computed(() => this.settings()?.materials ?? []);
   readonly usedIds = computed(() => new Set(this.detail.hasValue() ? this.detail.value().carcasses.map((c) => c.id) : []));
   readonly result = computed(() => {
     const input = this.description();
-    const materials = this.materials();
-    if (!input || materials.length === 0) return undefined;
-    return planCarcass({ ...input, materials }, builtinCatalog());
+    const settings = this.settings();
+    if (!input || !settings) return undefined;
+    return planCarcass({ ...input, materials: settings.materials, system: settings.system, limits: settings.limits }, builtinCatalog());
   });
   readonly plan = computed(() => {
     const result = this.result();
@@ -43,13 +45,18 @@ export class PlannerStore {
     this.description.set(input);
   }
 
-  /** Adds the planned carcass with all its panels to the job, in one request: all of it or none. */
-  async addToJob(): Promise<PlannedCarcass> {
+  /**
+   * Adds the planned carcass with all its panels to the job, or plans a carcass of the same id again,
+   * in one request: all of it or none. `changed` says what to do with panels changed by hand since
+   * they were planned; without it the server refuses (409 replan-changed) and names them.
+   */
+  async addToJob(changed?: ChangedPanelChoice): Promise<PlannedCarcass> {
     const input = this.description();
     if (!input) throw new Error('Nothing to add: describe the carcass first.');
     this.adding.set(true);
     try {
-      const answer = plannedCarcass.parse(await firstValueFrom(this.http.post(`${jobUrl(this.jobId())}/plan`, input)));
+      const params = changed ? { changed } : undefined;
+      const answer = plannedCarcass.parse(await firstValueFrom(this.http.post(`${jobUrl(this.jobId())}/plan`, input, { params })));
       this.added.set(answer);
       this.detail.reload();
       return answer;
