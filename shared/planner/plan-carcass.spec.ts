@@ -2,8 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { builtinCatalog } from '../catalog/builtin-catalog';
 import { checkJob } from '../checks/index';
 import type { CarcassPlanInputData } from './carcass-plan-input';
+import { planCarcass } from './plan-carcass';
 import { planToJob } from './plan-job';
-import { planned, refused } from '../testing/planned-carcass';
+import { planned, refused, WALL_CARCASS } from '../testing/planned-carcass';
 
 const doors = { type: 'doors', count: 2, overlay: 'full', reveal: 3 } as const;
 
@@ -111,16 +112,45 @@ describe('planCarcass: the worked example', () => {
   });
 });
 
+describe('planCarcass: inset doors', () => {
+  /*
+   * Worked by hand. The wall carcass with two inset doors and a 3 mm reveal all round:
+   *   door width  = (600 − 2 × 19 − 3 × 3) / 2 = 276.5 mm; door height = 723 − 2 × 19 − 2 × 3 = 679 mm;
+   *   the door starts 19 + 3 = 22 mm up the side.
+   *   overlay −3 mm (the door sits 3 mm inside the side) = hinge constant −8 + B − plate 0 → B = 5, the middle of 3 to 7
+   *     (trade-reference §2, common practice; the constant is the catalog's estimate).
+   *   plates 37 + 19 = 56 mm from the front edge (trade-reference §2: for inset doors 37 mm + door thickness, published).
+   *   plate centres on 25.5 + 32k (holes at 9.5 + 32k, 16 mm either side), the cup 22 mm lower: c = 3.5 + 32k.
+   *   From the lower end, 76 to 100: c = 99.5 (plate 121.5). From the upper end 679 − c in 76 to 100: c = 579.5 (plate 601.5).
+   */
+  const plan = planned({ fronts: { ...doors, overlay: 'inset' } });
+
+  it('sizes the doors inside the box and hangs them on inset plates', () => {
+    const [door] = plan.doors;
+    expect([door.width.value, door.height.value, door.dy.value]).toEqual([276.5, 679, 22]);
+    expect([door.hinge.hinge.id, door.hinge.plate.id, door.hinge.boringDistance.value]).toEqual(['hinge-inset-45', 'plate-0', 5]);
+    expect(door.hinges.map((h) => [h.cup.value, h.plate])).toEqual([
+      [99.5, 121.5],
+      [579.5, 601.5],
+    ]);
+    const left = plan.panels.find((p) => p.id === 'wall-left')!;
+    expect(left.placements.filter((p) => p.fitting === 'plate-0').map((p) => [p.x, p.y])).toEqual([
+      [56, 121.5],
+      [56, 601.5],
+    ]);
+  });
+});
+
 describe('planCarcass: bad input', () => {
   it('refuses a box too small for its doors', () => {
     // Two inset doors between 19 mm sides with 3 mm reveals: (120 − 2 × 19 − 3 × 3) / 2 = 36.5 mm each.
     expect(refused({ width: 120, fronts: { ...doors, overlay: 'inset' } })[0]).toMatch(/^width: the carcass is too small for 2 inset doors: each would be 36\.5 mm × /);
   });
 
-  it('refuses inset doors while the catalog has no inset hinge, and says what to do', () => {
-    expect(refused({ fronts: { ...doors, overlay: 'inset' } })).toEqual([
-      "fronts.overlay: the catalog has no inset hinge; import one from the hinge maker's data",
-    ]);
+  it('refuses inset doors when the catalog has no inset hinge, and says what to do', () => {
+    const catalog = new Map([...builtinCatalog()].filter(([, f]) => f.purpose !== 'hinge-cup' || f.hinge.overlay !== 'inset'));
+    const result = planCarcass({ ...WALL_CARCASS, fronts: { ...doors, overlay: 'inset' } }, catalog);
+    expect(result.ok ? [] : result.errors).toEqual(["fronts.overlay: the catalog has no inset hinge; import one from the hinge maker's data"]);
   });
 
   it('refuses a depth too shallow for the rear row', () => {
