@@ -16,6 +16,7 @@ import { editorAction, type EditorAction } from './editor-keys';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
 import { PanelSaver } from './panel-saver';
+import { PanelDownloads } from '../packs/panel-downloads';
 import { CatalogList } from './side/catalog-list';
 import { FindingsList } from './side/findings-list';
 import { PlacementList } from './side/placement-list';
@@ -38,6 +39,7 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
     MatIconModule,
     MatProgressBarModule,
     MatTooltipModule,
+    PanelDownloads,
     PanelStage,
     PlacementList,
     PropertiesForm,

@@ -3,7 +3,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatMenuModule } from '@angular/material/menu';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
@@ -12,7 +11,7 @@ import { RouterLink } from '@angular/router';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/model/job-document';
 import { AuthStore } from '../auth/auth-store';
-import { hasFaceB, panelFileUrls } from '../packs/pack-api';
+import { PanelDownloads } from '../packs/panel-downloads';
 import { roleLabels, statusLabels } from './panel-labels';
 
 /** A panel with the words the table shows and sorts by. */
@@ -23,7 +22,6 @@ interface PanelRow {
   material: string;
   size: string;
   status: string;
-  faceB: boolean;
 }
 
 export interface PanelStatusChange {
@@ -41,11 +39,11 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status', 'f
     MatFormFieldModule,
     MatIconModule,
     MatInputModule,
-    MatMenuModule,
     MatSelectModule,
     MatSortModule,
     MatTableModule,
     MatTooltipModule,
+    PanelDownloads,
     RouterLink,
   ],
   templateUrl: './panel-table.html',
@@ -68,7 +66,6 @@ export class PanelTable {
   protected readonly canMark = computed(() => this.auth.can('markPanels'));
   protected readonly columns = computed(() => (this.canEdit() ? [...readColumns, 'actions'] : readColumns));
   protected readonly rows = new MatTableDataSource<PanelRow>([]);
-  protected readonly fileUrls = panelFileUrls;
   private readonly panelRows = computed(() => {
     const carcassNames = new Map(this.carcasses().map((c) => [c.id, c.name]));
     const materialNames = new Map(this.materials().map((m) => [m.id, m.name]));
@@ -80,7 +77,6 @@ export class PanelTable {
         material: materialNames.get(panel.material) ?? panel.material,
         size: `${panel.width} × ${panel.height} × ${panel.thickness}`,
         status: statusLabels[panel.status],
-        faceB: hasFaceB(panel),
       }),
     );
   });
