@@ -1,5 +1,5 @@
 import { checkJob } from '../checks/index';
-import type { Severity } from '../checks/finding';
+import type { Finding, Severity } from '../checks/finding';
 import { cautionsFor } from './cautions';
 import { coverSheet } from './cover-sheet';
 import { type ExportContext } from './export-context';
@@ -15,6 +15,11 @@ export interface PackInput extends PanelFileOptions {
   ctx: ExportContext;
   /** SHA-256 of some bytes as lower-case hex: a platform's (node:crypto on the server, SubtleCrypto in a browser). */
   sha256: (bytes: Uint8Array) => string | Promise<string>;
+  /**
+   * The findings the cover sheet and the manifest report; by default the checks of the job. A pack of part
+   * of a job (a swap's retrofit) passes the findings of the whole job on its panels instead.
+   */
+  findings?: readonly Finding[];
   /** Told after each file is made: how many are done, of how many, and what the last one was. */
   onProgress?: (done: number, total: number, label: string) => void;
 }
@@ -51,7 +56,7 @@ export function planPack(input: PackInput): Pack {
   const { job, catalog } = ctx;
   const root = safeSegment(`${job.name} bench pack`, 'bench pack');
   const drilling = jobDrilling(job, catalog);
-  const findings = checkJob(job, catalog);
+  const findings = input.findings ?? checkJob(job, catalog);
   const hardware = hardwareList(ctx);
   const producer = `${ctx.generator.name} ${ctx.generator.version}`;
 
