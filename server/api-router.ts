@@ -1,10 +1,12 @@
 import { Router } from 'express';
 import { activityRoutes } from './activity/activity.routes';
+import { attachmentsRoutes } from './attachments/attachments.routes';
 import { authRoutes } from './auth/auth.routes';
 import { csrfProtection } from './auth/csrf';
 import { createAuthenticator } from './auth/passport';
 import { sessionMiddleware } from './auth/sessions';
 import { sessionTimeouts } from './auth/session-timeouts';
+import { cutListRoutes } from './cut-list/cut-list.routes';
 import { AppError } from './http/app-error';
 import { healthRoutes } from './http/health.routes';
 import type { RouteContext } from './http/route-context';
@@ -42,7 +44,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, cutListRoutes, attachmentsRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

@@ -52,6 +52,8 @@ export type Config = {
   mailFrom: string;
   /** A pack up to this size goes attached; a larger one as a link that expires. */
   packAttachLimitBytes: number;
+  /** The largest photo or PDF a job attachment may be. */
+  attachmentLimitBytes: number;
   /** Demo accounts are created and may sign in: always outside production, in production only when allowed. */
   demoAccounts: boolean;
   /** Cookies only over HTTPS: in production (behind TLS, with TRUST_PROXY set when a proxy ends it). */
@@ -84,6 +86,7 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     smtpUrl: env.SMTP_URL,
     mailFrom: env.MAIL_FROM,
     packAttachLimitBytes: 10 * 1024 * 1024,
+    attachmentLimitBytes: 10 * 1024 * 1024,
     demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,
     secureCookies: env.NODE_ENV === 'production',
     trustProxy: env.TRUST_PROXY,

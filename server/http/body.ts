@@ -1,5 +1,6 @@
 import express, { type RequestHandler } from 'express';
 import multer from 'multer';
+import { sizeInWords } from '../../shared/api/file-size';
 import { AppError } from './app-error';
 import { findNulText, NUL_MESSAGE } from './nul-text';
 
@@ -28,18 +29,33 @@ export const jsonBody: RequestHandler = (req, res, next) => {
 };
 
 /**
- * For routes that take one uploaded file in the field `name`, kept in memory. Busboy's own errors
- * (a torn multipart body) are the client's, so they answer 400 rather than 500.
+ * For routes that take one uploaded file in the field `name`, kept in memory, of at most `maxBytes`.
+ * A larger file answers 413 naming the limit. Busboy's own errors (a torn multipart body) are the
+ * client's, so they answer 400 rather than 500.
  */
-export function fileUpload(name: string): RequestHandler {
-  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: UPLOAD_LIMIT_BYTES, files: 1 } }).single(name);
+export function fileUpload(name: string, maxBytes = UPLOAD_LIMIT_BYTES): RequestHandler {
+  // Browsers send a file's name as raw UTF-8 (HTML's multipart/form-data encoding); busboy reads Latin-1 unless told.
+  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1 }, defParamCharset: 'utf8' }).single(name);
   return (req, res, next) => {
     const refused = wrongType(req, 'multipart/form-data');
     if (refused) return next(refused);
     single(req, res, (err: unknown) => {
+      if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
+        const message = `is larger than ${sizeInWords(maxBytes)}, the most this upload takes`;
+        return next(new AppError(413, 'too-large', `${name}: the file ${message}.`, { fields: { [name]: message } }));
+      }
       if (!err || err instanceof multer.MulterError) return next(err);
       const message = (err as Error).message;
       next(new AppError(400, 'invalid-upload', `${name}: ${message}`, { fields: { [name]: message } }));
     });
   };
+}
+
+/**
+ * An uploaded file's name as the client gave it (busboy has already dropped any folder), kept printable
+ * and short before it is shown, logged, stored or offered back as a download's name.
+ */
+export function uploadedFileName(file: Express.Multer.File): string {
+  const name = file.originalname.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 200);
+  return name === '' ? 'upload' : name;
 }

@@ -22,11 +22,10 @@ function toAppError(err: unknown): AppError | undefined {
     const summary = Object.entries(fields).map(([path, message]) => `${path}: ${message}`);
     return new AppError(400, 'invalid-input', summary.join('; '), { fields });
   }
+  // A file over its limit is answered by fileUpload (http/body.ts), which knows the limit to name.
   if (err instanceof multer.MulterError) {
     const field = err.field ?? 'file';
-    return err.code === 'LIMIT_FILE_SIZE'
-      ? new AppError(413, 'too-large', `${field}: the file is too large.`, { fields: { [field]: 'is too large' } })
-      : new AppError(400, 'invalid-upload', `${field}: ${err.message}`, { fields: { [field]: err.message } });
+    return new AppError(400, 'invalid-upload', `${field}: ${err.message}`, { fields: { [field]: err.message } });
   }
   // Drizzle wraps the driver's error; its SQLSTATE is in `cause.code`. A unique key taken between our
   // check and our insert is a race with another user, not a server fault.

@@ -2,7 +2,7 @@ import type { Router } from 'express';
 import { carcassCreateBody, jobCreateBody, jobListQuery, jobParams, jobUpdateBody } from '../../shared/api/contract';
 import { requirePermission } from '../auth/require-permission';
 import { invalidField } from '../http/app-error';
-import { fileUpload, jsonBody } from '../http/body';
+import { fileUpload, jsonBody, uploadedFileName } from '../http/body';
 import type { RouteContext } from '../http/route-context';
 import { documentFileName } from './document-file-name';
 import * as jobs from './jobs.service';
@@ -21,9 +21,7 @@ export function jobsRoutes(router: Router, { db }: RouteContext): void {
   router.post('/jobs/import', requirePermission('editJobs'), fileUpload('file'), async (req, res) => {
     if (!req.file) throw invalidField('file', 'is required: send the job document as the multipart field "file"');
     const doc = jobs.readJobFile(req.file.buffer);
-    // The name is the client's to choose: keep it printable before it goes into the activity log.
-    const fileName = req.file.originalname.replace(/[\u0000-\u001f\u007f]/g, '').slice(0, 200);
-    res.status(201).json(await jobs.importJob(db, req.user!, doc, fileName));
+    res.status(201).json(await jobs.importJob(db, req.user!, doc, uploadedFileName(req.file)));
   });
 
   router.get('/jobs/:jobId', requirePermission('readJobs'), async (req, res) => {

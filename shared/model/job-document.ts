@@ -11,6 +11,8 @@ export const JOB_FORMAT = 'borewright.job/1' as const;
 export const MAX_PANEL_LENGTH = 6000;
 /** Thickest board we accept; thicker stock is not drilled on the 32 mm system. */
 export const MAX_THICKNESS = 100;
+/** Most panels one job may hold. */
+export const MAX_JOB_PANELS = 5000;
 
 const id = z
   .string()
@@ -151,7 +153,7 @@ const jobShape = z.object({
   limits: shopLimits.default({ minWeb: 3, minEdge: 3, minFloor: 3, sagRatio: 144 }),
   materials: z.array(material).max(200),
   carcasses: z.array(carcass).max(1000).default([]),
-  panels: z.array(panel).max(5000).default([]),
+  panels: z.array(panel).max(MAX_JOB_PANELS).default([]),
 });
 
 /** Every id unique in its list, every reference pointing at something that exists. */

@@ -43,6 +43,8 @@ describe('bad input', () => {
     ['JSON where a file upload is expected', () => designer.post('/api/jobs/import').send({ file: 'x' }), 415, 'code:unsupported-media-type'],
     ['a 10 MB string', () => designer.post('/api/jobs').send({ name: 'x'.repeat(10 * 1024 * 1024) }), 413, 'code:too-large'],
     ['a torn multipart body', () => designer.post('/api/jobs/import').set('Content-Type', 'multipart/form-data; boundary=zzz').send('--zzz\r\nContent-Disposition: form-data; name="file"; filename="a.json"\r\n\r\n{'), 400, 'file'],
+    ['a file named and sent as a PNG that is not one', () => designer.post('/api/jobs/1/attachments').attach('file', Buffer.from('not a picture'), { filename: 'photo.png', contentType: 'image/png' }), 415, 'file'],
+    ['a cut list with one bad row among good ones', () => designer.post('/api/jobs/1/cut-list').attach('file', Buffer.from('name,width,height,thickness,material,qty\nShelf,540,300,18,plywood-18,2\nDoor,-1,700,19,mdf-19,1\n'), 'cut.csv'), 400, 'code:invalid-cut-list'],
     ['unknown API route', () => designer.get('/api/nothing-here'), 404, 'code:not-found'],
     ['unknown method on a known path', () => designer.put('/api/jobs'), 404, 'code:not-found'],
   ];

@@ -1,0 +1,28 @@
+import { fileTypeFromBuffer } from 'file-type';
+import { ATTACHMENT_TYPES, type AttachmentType } from '../../shared/api/attachment-contract';
+import { AppError } from '../http/app-error';
+
+const isAllowed = (mime: string): mime is AttachmentType => mime in ATTACHMENT_TYPES;
+
+const BY_EXTENSION: Record<string, AttachmentType> = { png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', pdf: 'application/pdf' };
+
+/** The type the client claims, from the part's Content-Type or else the name's extension, when it is one we take. */
+function claimedType(fileName: string, declared: string): AttachmentType | undefined {
+  if (isAllowed(declared)) return declared;
+  return BY_EXTENSION[/\.([a-z0-9]+)$/i.exec(fileName)?.[1].toLowerCase() ?? ''];
+}
+
+const ACCEPTED = 'Attachments may be PNG, JPEG or WebP images or PDF documents, told by their content.';
+
+/**
+ * The type of an upload, decided by its content's signature (file-type reads the magic numbers), never
+ * by its name or the type the browser sent: a file named `.png` that is not a PNG is refused, saying so.
+ */
+export async function attachmentType(bytes: Uint8Array, fileName: string, declared: string): Promise<AttachmentType> {
+  const found = await fileTypeFromBuffer(bytes);
+  if (found && isAllowed(found.mime)) return found.mime;
+  const content = found ? `its content is ${found.ext.toUpperCase()} (${found.mime})` : 'its content is not a kind of file Borewright recognises';
+  const claimed = claimedType(fileName, declared);
+  const message = claimed ? `${fileName} is named or sent as a ${ATTACHMENT_TYPES[claimed]}, but it is not one: ${content}.` : `${fileName} cannot be attached: ${content}.`;
+  throw new AppError(415, 'unsupported-file-type', `${message} ${ACCEPTED}`, { fields: { file: found ? `is ${found.mime}` : 'is of an unknown type' } });
+}
