@@ -1,8 +1,8 @@
-import { filter, finalize, fromEvent, map, Observable, switchMap, takeUntil, tap } from 'rxjs';
+import { filter, finalize, fromEvent, ignoreElements, map, merge, Observable, switchMap, takeUntil, tap } from 'rxjs';
 import type { EditorStore } from '../editor-store';
 import { selectionOf, unionSelection, type Selection } from '../document/selection';
 import type { Hit } from './hit-index';
-import { toPanel, type Point, type View } from './view';
+import { pinchView, toPanel, type Point, type View } from './view';
 
 /** What the pointer tool reads and changes besides the document. */
 export interface ToolContext {
@@ -27,10 +27,12 @@ export function localPoint(el: HTMLElement, e: { clientX: number; clientY: numbe
   return { x: e.clientX - r.left, y: e.clientY - r.top };
 }
 
-/** A gesture from press to release: a state of the tool (idle → pointing → dragging, panning, banding). */
+/** A gesture from press to release: a state of the tool (idle → pointing → dragging, panning, banding, pinching). */
 interface Gesture {
   move(at: Point, e: PointerEvent): void;
   end(): void;
+  /** A second finger turned the gesture into a pinch: undo what it did so far; `end` then does nothing. */
+  cancel?(): void;
 }
 
 function panning(ctx: ToolContext, from: Point): Gesture {
@@ -41,7 +43,8 @@ function panning(ctx: ToolContext, from: Point): Gesture {
   };
 }
 
-function banding(ctx: ToolContext, from: Point, adding: boolean): Gesture {
+function banding(ctx: ToolContext, from: Point, addingToSelection: boolean): Gesture {
+  let adding = addingToSelection;
   const before = ctx.store.selection();
   let to = from;
   return {
@@ -53,6 +56,11 @@ function banding(ctx: ToolContext, from: Point, adding: boolean): Gesture {
       ctx.setBand(undefined);
       const picked = selectionOfHits(ctx.inside(from, to));
       ctx.store.select(adding ? unionSelection(before, picked) : picked);
+    },
+    cancel: () => {
+      ctx.setBand(undefined);
+      to = from;
+      adding = true;
     },
   };
 }
@@ -71,6 +79,24 @@ function dragging(ctx: ToolContext, from: Point, lead: Hit): Gesture {
       ctx.store.dragTo(lead.kind === 'placement' ? lead.id : '', { x: b.x - a.x, y: b.y - a.y }, e.altKey);
     },
     end: () => started && ctx.store.endDrag(),
+    cancel: () => {
+      if (started) ctx.store.cancelDrag();
+      started = false;
+    },
+  };
+}
+
+/** Two fingers on a touch screen zoom and pan the view; `touches` holds where each finger is now. */
+function pinching(ctx: ToolContext, touches: ReadonlyMap<number, Point>): Gesture {
+  const start = ctx.view();
+  const [a, b] = [...touches.keys()];
+  const from = [touches.get(a)!, touches.get(b)!] as const;
+  return {
+    move: () => {
+      const now = [touches.get(a), touches.get(b)] as const;
+      if (start && now[0] && now[1]) ctx.setView(pinchView(start, from, [now[0], now[1]]));
+    },
+    end: () => undefined,
   };
 }
 
@@ -91,24 +117,37 @@ function begin(ctx: ToolContext, el: HTMLElement, down: PointerEvent): Gesture {
 /**
  * The stage's pointer tool: each press on the stage becomes one gesture (drag the item under it, draw
  * a selection band on empty board, or pan with the middle button or Space held), fed by the moves
- * until the release.
+ * until the release. A second finger on a touch screen turns whatever the first began into a pinch.
  */
 export function pointerTool(el: HTMLElement, ctx: ToolContext): Observable<unknown> {
   const moves = fromEvent<PointerEvent>(el, 'pointermove');
-  const ups = fromEvent<PointerEvent>(el, 'pointerup');
-  return fromEvent<PointerEvent>(el, 'pointerdown').pipe(
+  const ups = merge(fromEvent<PointerEvent>(el, 'pointerup'), fromEvent<PointerEvent>(el, 'pointercancel'));
+  const touches = new Map<number, Point>();
+  const track = (e: PointerEvent) => e.pointerType === 'touch' && touches.has(e.pointerId) && touches.set(e.pointerId, localPoint(el, e));
+  let current: Gesture | undefined;
+  const gestures = fromEvent<PointerEvent>(el, 'pointerdown').pipe(
     filter((e) => e.button === 0 || e.button === 1),
     switchMap((down) => {
       down.preventDefault();
       el.setPointerCapture(down.pointerId);
       el.focus();
-      const gesture = begin(ctx, el, down);
+      if (down.pointerType === 'touch') touches.set(down.pointerId, localPoint(el, down));
+      const pinch = touches.size >= 2;
+      if (pinch) current?.cancel?.();
+      const gesture = pinch ? pinching(ctx, touches) : begin(ctx, el, down);
+      current = gesture;
       return moves.pipe(
         takeUntil(ups),
+        tap(track),
         map((e) => ({ e, at: localPoint(el, e) })),
         tap(({ e, at }) => gesture.move(at, e)),
         finalize(() => gesture.end()),
       );
     }),
   );
+  const lifted = ups.pipe(
+    tap((e) => touches.delete(e.pointerId)),
+    ignoreElements(),
+  );
+  return merge(gestures, lifted);
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitView, toPanel, toScreen, viewOfBox, zoomAt } from './view';
+import { fitView, pinchView, toPanel, toScreen, viewOfBox, zoomAt } from './view';
 
 describe('view', () => {
   const stage = { width: 800, height: 600 };
@@ -27,6 +27,18 @@ describe('view', () => {
     const after = toPanel(zoomAt(view, at, 2), at);
     expect(after.x).toBeCloseTo(before.x);
     expect(after.y).toBeCloseTo(before.y);
+  });
+
+  it('pinches: fingers twice as far apart double the scale, and the panel point under their midpoint follows it', () => {
+    const view = fitView(panel, stage, false);
+    const from = [{ x: 350, y: 300 }, { x: 450, y: 300 }] as const;
+    const to = [{ x: 280, y: 260 }, { x: 480, y: 260 }] as const;
+    const under = toPanel(view, { x: 400, y: 300 });
+    const pinched = pinchView(view, from, to);
+    expect(pinched.scale).toBeCloseTo(view.scale * 2);
+    const now = toPanel(pinched, { x: 380, y: 260 });
+    expect(now.x).toBeCloseTo(under.x);
+    expect(now.y).toBeCloseTo(under.y);
   });
 
   it('centres a finding\'s box', () => {

@@ -43,6 +43,19 @@ export function zoomAt(view: View, at: Point, factor: number): View {
   return { ...view, scale, x: at.x - (at.x - view.x) * k, y: at.y - (at.y - view.y) * k };
 }
 
+/**
+ * Two fingers on a touch screen: the panel follows their midpoint and zooms by the change of their
+ * distance, so the panel point first under the midpoint stays under it.
+ */
+export function pinchView(start: View, from: readonly [Point, Point], to: readonly [Point, Point]): View {
+  const mid = ([a, b]: readonly [Point, Point]) => ({ x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 });
+  const apart = ([a, b]: readonly [Point, Point]) => Math.hypot(a.x - b.x, a.y - b.y);
+  const m0 = mid(from);
+  const m1 = mid(to);
+  const moved = { ...start, x: start.x + m1.x - m0.x, y: start.y + m1.y - m0.y };
+  return zoomAt(moved, m1, apart(to) / Math.max(apart(from), 1));
+}
+
 /** A view that shows the box [minX, minY, maxX, maxY] (mm) large in the middle, for a finding's bores. */
 export function viewOfBox(box: readonly number[], stage: { width: number; height: number }, fromB: boolean): View {
   const [minX, minY, maxX, maxY] = box;
