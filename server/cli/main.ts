@@ -4,6 +4,7 @@ import { EXIT, processIo, type CliIo } from './cli-io';
 import { packCommand } from './pack-command';
 import { planCommand } from './plan-command';
 import { schemaCommand } from './schema-command';
+import { swapCommand } from './swap-command';
 
 export const USAGE = `Usage: borewright <command> [options]
 
@@ -13,6 +14,7 @@ Commands:
   check <job.json>   check every panel and print the findings grouped by panel (--json for programs)
   pack <job.json>    write the bench pack: drilling maps, DXF, template sheets, lists (-o pack.zip)
   plan <carcass.json> plan one carcass and print the job document of its panels
+  swap <job.json>    check a fitting's replacement: holes reused, new, clashing, unused (--from, --to)
   catalog            list the fittings of the built-in catalog (--json for programs)
   schema             print the JSON Schema of the job document
 
@@ -21,7 +23,7 @@ Exit code: 0 all clear, 1 a check found an error, 2 the command could not run.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
 
-const COMMANDS: Record<string, Command> = { check: checkCommand, pack: packCommand, plan: planCommand, catalog: catalogCommand, schema: schemaCommand };
+const COMMANDS: Record<string, Command> = { check: checkCommand, pack: packCommand, plan: planCommand, swap: swapCommand, catalog: catalogCommand, schema: schemaCommand };
 
 /** Runs the command line and returns the exit code. Never throws on bad arguments or files. */
 export async function main(argv: string[], io: CliIo = processIo): Promise<number> {

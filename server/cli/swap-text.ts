@@ -1,0 +1,61 @@
+import { formatNumber } from '../../shared/checks/wording';
+import type { PanelSwap, SwapBore, SwapReport } from '../../shared/swap/swap-report';
+import { VISIBLE_FACE_RULE } from '../../shared/swap/visible-face';
+
+const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+
+/** A hole as the bench reads it: its id, size and where it is, `hinge-1/fix-1 Ø8 × 11, face A x 31 y 64.5`. */
+export function holeText(bore: SwapBore): string {
+  const depth = bore.kind === 'face' && bore.through ? 'through' : formatNumber(bore.depth);
+  const where = bore.kind === 'face' ? `face ${bore.face} x ${formatNumber(bore.x)} y ${formatNumber(bore.y)}` : `edge ${bore.edge} at ${formatNumber(bore.at)} z ${formatNumber(bore.z)}`;
+  return `${bore.id} Ø${formatNumber(bore.diameter)} × ${depth}, ${where}`;
+}
+
+const VERDICT: Record<PanelSwap['verdict'], string> = { fine: 'fine', 'to-drill': 'to drill', 'to-remake': 'to remake' };
+
+/** What a panel comes to, in words: a planned panel gets the new plan whatever its holes would say. */
+export function verdictText(p: PanelSwap): string {
+  if (!p.drilled) return `not drilled yet: it simply gets the new plan (drilled, it would be ${VERDICT[p.verdict]})`;
+  if (p.verdict === 'fine') return 'fine: every hole the new fitting needs is there';
+  if (p.verdict === 'to-drill') return `to drill: ${plural(p.new.length, 'new hole')}, none in the way of an existing one`;
+  const visible = p.unused.filter((u) => u.visible).length;
+  const why = [
+    p.clashing.length > 0 ? `${plural(p.clashing.length, 'new hole')} cannot be drilled for an existing one in the way` : '',
+    visible > 0 ? `${plural(visible, 'old hole')} would show on a visible face` : '',
+  ];
+  return `to remake: ${why.filter(Boolean).join(', and ')}`;
+}
+
+function panelLines(p: PanelSwap): string[] {
+  const lines = [`Panel ${p.panel.id} (${p.panel.name}, ${p.panel.role}), ${p.panel.status}: ${verdictText(p)}`];
+  const row = (label: string, text: string) => lines.push(`  ${label.padEnd(9)}${text}`);
+  for (const r of p.reused) row('reused', `${holeText(r.bore)}${r.uses === r.bore.id ? '' : ` (the hole of ${r.uses})`}`);
+  for (const n of p.new) row('new', `${holeText(n.bore)}${n.deepens ? ` (deepen ${n.deepens})` : ''}`);
+  for (const c of p.clashing) {
+    row('clash', holeText(c.bore));
+    for (const w of c.with) lines.push(`${' '.repeat(11)}${w.message}`);
+  }
+  for (const u of p.unused) row('unused', `${holeText(u.bore)}${u.visible ? ', shows on a visible face' : ''}`);
+  return lines;
+}
+
+/** The swap check as a bench hand reads it: the fittings, the summary, each panel's holes, the new findings, the notes. */
+export function swapText(jobName: string, report: SwapReport): string {
+  const { from, to, summary: s } = report;
+  const lines = [
+    `Swap check: ${jobName}`,
+    `${from.name} (${from.id}) for ${to.name} (${to.id})`,
+    '',
+    `${plural(s.panels, 'panel')} ${s.panels === 1 ? 'uses' : 'use'} it, with ${plural(s.placements, 'placement')}.`,
+    `Drilled panels: ${s.fine} fine, ${s.toDrill} to drill, ${s.toRemake} to remake. Not drilled yet: ${s.notDrilled} (they simply get the new plan).`,
+    `Holes: ${s.reused} reused as they are, ${s.new} new to drill, ${s.clashing} new that clash with an existing hole, ${s.unused} old left unused (${s.unusedVisible} on a visible face).`,
+  ];
+  for (const p of report.panels) lines.push('', ...panelLines(p));
+  const { added, resolved } = report.findings;
+  lines.push('', added.length === 0 ? 'The checks find nothing new after the swap.' : `The checks find ${plural(added.length, 'new finding')} after the swap:`);
+  for (const f of added) lines.push(`  ${f.severity.padEnd(8)}${f.code.padEnd(19)}${f.panel}: ${f.message}`);
+  if (resolved > 0) lines.push(`${plural(resolved, 'finding')} of before the swap no longer ${resolved === 1 ? 'applies' : 'apply'}.`);
+  if (report.notes.length > 0) lines.push('', 'Notes:', ...report.notes.map((n) => `  - ${n}`));
+  if (report.panels.length > 0) lines.push('', VISIBLE_FACE_RULE);
+  return lines.join('\n');
+}

@@ -1,0 +1,13 @@
+import { and, eq } from 'drizzle-orm';
+import type { Database } from '../db/client';
+import { placements } from '../db/schema';
+
+/** Gives every placement of fitting `from` on a panel fitting `to`; returns how many it changed. */
+export async function swapPanelPlacements(db: Database, panelId: number, from: string, to: string): Promise<number> {
+  const rows = await db
+    .update(placements)
+    .set({ fitting: to })
+    .where(and(eq(placements.panelId, panelId), eq(placements.fitting, from)))
+    .returning({ id: placements.id });
+  return rows.length;
+}
