@@ -16,6 +16,7 @@ import { editorAction, type EditorAction } from './editor-keys';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
 import { PanelSaver } from './panel-saver';
+import { RepeatDialog } from './repeat-dialog';
 import { PanelDownloads } from '../packs/panel-downloads';
 import { CatalogList } from './side/catalog-list';
 import { FindingsList } from './side/findings-list';
@@ -138,8 +139,13 @@ export class PanelEditor implements LeavesSafely {
     }
   }
 
-  protected repeatUpTheRow(): void {
-    this.store.repeatSelection(1, this.source.job()?.system.pitch ?? 32);
+  protected async repeatAlongTheRow(): Promise<void> {
+    const panel = this.store.panel();
+    const ys = this.store.selectedPlacements().map((p) => p.y);
+    if (!panel || ys.length === 0) return;
+    const pitch = this.source.job()?.system.pitch ?? 32;
+    const choice = await RepeatDialog.ask(this.dialog, { pitch, lowest: Math.min(...ys), highest: Math.max(...ys), panelHeight: panel.height });
+    if (choice) this.store.repeatSelection(choice.count, choice.step);
   }
 
   protected async applyToOpposite(): Promise<void> {
