@@ -1,10 +1,10 @@
-import { HttpEvent, HttpEventType } from '@angular/common/http';
 import { computed, inject, Injectable } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { catchError, filter, map, Observable, of, startWith, Subject, switchMap } from 'rxjs';
 import { jobSummary, JobSummary } from '../../../shared/api/contract';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { JobsApi } from './jobs-api';
+import { uploadStep } from './upload-progress';
 
 export type ImportState =
   | { step: 'idle' }
@@ -39,8 +39,9 @@ export class JobImportStore {
   private upload(file: File): Observable<ImportState> {
     const fileName = file.name;
     return this.api.importDocument(file).pipe(
-      map((event) => progressOf(event, fileName)),
-      filter((state): state is ImportState => state !== null),
+      map(uploadStep),
+      filter((step) => step !== null),
+      map((step): ImportState => ('body' in step ? { step: 'done', job: jobSummary.parse(step.body) } : { step: 'uploading', fileName, percent: step.percent })),
       startWith<ImportState>({ step: 'uploading', fileName, percent: 0 }),
       catchError((error: unknown) =>
         of<ImportState>({
@@ -52,15 +53,6 @@ export class JobImportStore {
       ),
     );
   }
-}
-
-function progressOf(event: HttpEvent<unknown>, fileName: string): ImportState | null {
-  if (event.type === HttpEventType.UploadProgress) {
-    const sent = event.total ? event.loaded / event.total : 0;
-    return { step: 'uploading', fileName, percent: sent >= 1 ? null : Math.round(sent * 100) };
-  }
-  if (event.type === HttpEventType.Response) return { step: 'done', job: jobSummary.parse(event.body) };
-  return null;
 }
 
 function importFailure(error: unknown): string {

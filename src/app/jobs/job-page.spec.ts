@@ -32,6 +32,7 @@ describe('JobPage', () => {
     TestBed.tick();
     TestBed.tick();
     http.expectOne('/api/jobs/11/findings').flush(findings);
+    http.expectOne('/api/jobs/11/attachments').flush({ attachments: [], maxBytes: 10 * 1024 * 1024 });
     await settle();
     await harness.fixture.whenStable();
     page = harness.routeNativeElement!;
@@ -51,7 +52,7 @@ describe('JobPage', () => {
     expect(buttonNames()).toContain('Job document');
     expect(buttonNames()).toEqual(expect.arrayContaining(['Download pack', 'Drilling files of Left side']));
     expect(buttonNames()).not.toContain('Send pack…');
-    expect(buttonNames().filter((n) => /add panel|details|edit|delete/i.test(n))).toEqual([]);
+    expect(buttonNames().filter((n) => /add panel|details|edit|delete|import|attach/i.test(n))).toEqual([]);
     expect(statusSelects()).toBe(0);
     expect(page.textContent).toContain('Planned');
   });
@@ -66,7 +67,9 @@ describe('JobPage', () => {
   it('gives a designer every panel control', async () => {
     await openAs('designer');
 
-    expect(buttonNames()).toEqual(expect.arrayContaining(['Details', 'Add panel', 'Edit Left side', 'Delete Left side', 'Send pack…']));
+    expect(buttonNames()).toEqual(
+      expect.arrayContaining(['Details', 'Add panel', 'Import cut list', 'Edit Left side', 'Delete Left side', 'Send pack…', 'Attach photo or PDF']),
+    );
     expect(statusSelects()).toBe(2);
   });
 

@@ -13,6 +13,8 @@ import { Can } from '../auth/can';
 import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
+import { CutListImport } from './cut-list-import';
+import { JobAttachments } from './job-attachments';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
 import { JobStore } from './job-store';
 import { jobDocumentUrl, PanelFields } from './jobs-api';
@@ -24,7 +26,7 @@ const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 /** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [BenchPack, Can, DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
+  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
   providers: [JobStore],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',
