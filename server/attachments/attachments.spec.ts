@@ -52,11 +52,11 @@ describe('job attachments', () => {
     expect(text.body.error).toMatchObject({
       code: 'unsupported-file-type',
       message:
-        'photo.png is named or sent as a PNG image, but it is not one: its content is not a kind of file Borewright recognises. Attachments may be PNG, JPEG or WebP images or PDF documents, told by their content.',
+        'This file is named or sent as a PNG image, but it is not one: its content is not a kind of file Borewright recognises. Attachments may be PNG, JPEG or WebP images or PDF documents, told by their content.',
     });
     // A GIF's signature is "GIF89a" (GIF89a specification, §17 Header).
     const gif = await upload(Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;', 'latin1'), 'photo.png').expect(415);
-    expect(gif.body.error.message).toMatch(/^photo\.png is named or sent as a PNG image, but it is not one: its content is GIF \(image\/gif\)\./);
+    expect(gif.body.error.message).toMatch(/^This file is named or sent as a PNG image, but it is not one: its content is GIF \(image\/gif\)\./);
     expect(await t.database.db.$count(attachments)).toBe(before);
   });
 

@@ -23,6 +23,7 @@ export async function attachmentType(bytes: Uint8Array, fileName: string, declar
   if (found && isAllowed(found.mime)) return found.mime;
   const content = found ? `its content is ${found.ext.toUpperCase()} (${found.mime})` : 'its content is not a kind of file Borewright recognises';
   const claimed = claimedType(fileName, declared);
-  const message = claimed ? `${fileName} is named or sent as a ${ATTACHMENT_TYPES[claimed]}, but it is not one: ${content}.` : `${fileName} cannot be attached: ${content}.`;
+  // The client shows the file's name before the message, so the message speaks of "this file".
+  const message = claimed ? `This file is named or sent as a ${ATTACHMENT_TYPES[claimed]}, but it is not one: ${content}.` : `This file cannot be attached: ${content}.`;
   throw new AppError(415, 'unsupported-file-type', `${message} ${ACCEPTED}`, { fields: { file: found ? `is ${found.mime}` : 'is of an unknown type' } });
 }

@@ -25,7 +25,7 @@ function textOf(file: CutListFile): string {
   try {
     return new TextDecoder('utf-8', { fatal: true }).decode(file.bytes);
   } catch {
-    throw new AppError(400, 'invalid-cut-list', `${file.fileName} is not UTF-8 text. Save the cut list from the spreadsheet as "CSV UTF-8" and try again.`, {
+    throw new AppError(400, 'invalid-cut-list', 'The file is not UTF-8 text. Save the cut list from the spreadsheet as "CSV UTF-8" and try again.', {
       fields: { file: 'is not UTF-8 text' },
     });
   }
@@ -42,12 +42,15 @@ export async function previewCutList(db: Database, jobId: number, file: CutListF
   return preview(file, parseCutList(textOf(file), job.materials));
 }
 
-/** Every problem of a list that cannot be imported, one line each: the file's first, then each bad row's by its row number. */
-function refusal(file: CutListFile, list: CutList): AppError {
+/**
+ * Every problem of a list that cannot be imported, one line each: the file's first, then each bad row's
+ * by its row number. The client shows the file's name before the message, so the message does not repeat it.
+ */
+function refusal(list: CutList): AppError {
   const bad = list.rows.filter((r) => r.errors.length > 0);
   const details = [...list.problems, ...bad.flatMap((r) => r.errors.map((e) => `row ${r.row}: ${e}`))];
-  const what = bad.length > 0 ? `${bad.length} of its ${list.rows.length} rows ${bad.length === 1 ? 'has' : 'have'} errors` : 'it cannot be read as a cut list';
-  return new AppError(400, 'invalid-cut-list', `${file.fileName}: ${what}; nothing was imported.`, { details });
+  const what = bad.length > 0 ? `has errors in ${bad.length} of its ${list.rows.length} rows` : 'cannot be read as a cut list';
+  return new AppError(400, 'invalid-cut-list', `The cut list ${what}; nothing was imported.`, { details });
 }
 
 /**
@@ -61,11 +64,11 @@ export async function importCutList(db: Database, actor: User, jobId: number, fi
     const job = await findJob(tx, jobId);
     if (!job) throw notFound(`Job ${jobId}`);
     const list = parseCutList(text, job.materials);
-    if (!isImportable(list)) throw refusal(file, list);
+    if (!isImportable(list)) throw refusal(list);
     const panels = cutListPanels(list.rows);
     const taken = new Set((await jobPanelRefs(tx, jobId)).map((p) => p.key));
     if (taken.size + panels.length > MAX_JOB_PANELS) {
-      throw new AppError(400, 'invalid-cut-list', `${file.fileName}: the job has ${taken.size} panels and a job may have at most ${MAX_JOB_PANELS}; this list would add ${panels.length}. Nothing was imported.`);
+      throw new AppError(400, 'invalid-cut-list', `The job has ${taken.size} panels and a job may have at most ${MAX_JOB_PANELS}; this list would add ${panels.length}. Nothing was imported.`);
     }
     for (const fields of panels) {
       const key = nextDocumentId(fields.role, taken);

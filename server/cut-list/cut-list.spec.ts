@@ -56,7 +56,7 @@ describe('cut list import', () => {
       .post(`/api/jobs/${jobId}/cut-list`)
       .attach('file', cutList([...GOOD, ['Plinth', 'long', 100, 18, 'walnut', 1]]), 'utility.csv')
       .expect(400);
-    expect(res.body.error).toMatchObject({ code: 'invalid-cut-list', message: 'utility.csv: 1 of its 3 rows has errors; nothing was imported.' });
+    expect(res.body.error).toMatchObject({ code: 'invalid-cut-list', message: 'The cut list has errors in 1 of its 3 rows; nothing was imported.' });
     expect(res.body.error.details).toEqual([
       'row 4: width: "long" is not a number',
       expect.stringMatching(/^row 4: material: this job has no material "walnut"; its materials are mdf-19 \(MDF 19, 19 mm\), /),
@@ -100,7 +100,7 @@ describe('cut list import', () => {
   it('refuses a file that is not UTF-8 text, one over the size limit, and one with no file', async () => {
     const latin1 = Buffer.concat([cutList([]), Buffer.from('Caf\xe9 shelf,540,300,18,plywood-18,1\r\n', 'latin1')]);
     const notUtf8 = await designer.post(`/api/jobs/${jobId}/cut-list/preview`).attach('file', latin1, 'latin1.csv').expect(400);
-    expect(notUtf8.body.error.message).toBe('latin1.csv is not UTF-8 text. Save the cut list from the spreadsheet as "CSV UTF-8" and try again.');
+    expect(notUtf8.body.error.message).toBe('The file is not UTF-8 text. Save the cut list from the spreadsheet as "CSV UTF-8" and try again.');
     const big = await designer.post(`/api/jobs/${jobId}/cut-list/preview`).attach('file', Buffer.alloc(CUT_LIST_MAX_BYTES + 1, 32), 'big.csv').expect(413);
     expect(big.body.error).toMatchObject({ code: 'too-large', message: 'file: the file is larger than 1 MB, the most this upload takes.' });
     await designer.post(`/api/jobs/${jobId}/cut-list`).field('x', 'y').expect(400);

@@ -113,13 +113,13 @@ describe('CutListDialog', () => {
     buttonNamed('Create 2 panels')!.click();
     await fixture.whenStable();
     http.expectOne('/api/jobs/11/cut-list').flush(
-      { error: { code: 'invalid-cut-list', message: 'kitchen.csv: 1 of its 1 rows has errors; nothing was imported.', details: ['row 2: material: this job has no material "pb18"'] } },
+      { error: { code: 'invalid-cut-list', message: 'The cut list has errors in 1 of its 1 rows; nothing was imported.', details: ['row 2: material: this job has no material "pb18"'] } },
       { status: 400, statusText: 'Bad Request' },
     );
     await settle();
     await fixture.whenStable();
 
-    expect(text('[role=alert]')).toContain('nothing was imported');
+    expect(text('[role=alert] .bw-alert-text')).toBe('kitchen.csv: The cut list has errors in 1 of its 1 rows; nothing was imported.');
     expect(text('.details')).toBe('row 2: material: this job has no material "pb18"');
     expect(close).not.toHaveBeenCalled();
   });
