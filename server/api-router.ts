@@ -15,6 +15,7 @@ import { mailRoutes } from './mail/outbox.routes';
 import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
 import { plannerRoutes } from './planner/planner.routes';
+import { teamRoutes } from './team/team.routes';
 import { swapRoutes } from './swap/swap.routes';
 import type { AppDeps } from './app';
 
@@ -45,7 +46,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, cutListRoutes, attachmentsRoutes, swapRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, cutListRoutes, attachmentsRoutes, swapRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

@@ -11,6 +11,7 @@ describe('loadConfig', () => {
       demoAccounts: true,
       logLevel: 'info',
       session: { idleMs: 8 * 3_600_000, absoluteMs: 7 * 86_400_000 },
+      mailLinks: { invitationMs: 7 * 86_400_000, passwordResetMs: 3_600_000 },
     });
     expect(loadConfig({}).databaseUrl).toBeUndefined();
   });
@@ -41,7 +42,14 @@ describe('loadConfig', () => {
   });
 
   it('treats an empty variable as unset and reads the rest', () => {
-    const config = loadConfig({ PORT: '', DATABASE_URL: 'postgres://u@127.0.0.1:5432/shop', SESSION_IDLE_MINUTES: '30', NODE_ENV: 'test' });
-    expect(config).toMatchObject({ port: 3000, databaseUrl: 'postgres://u@127.0.0.1:5432/shop', logLevel: 'silent', session: { idleMs: 1_800_000 } });
+    const config = loadConfig({ PORT: '', DATABASE_URL: 'postgres://u@127.0.0.1:5432/shop', SESSION_IDLE_MINUTES: '30', NODE_ENV: 'test', INVITATION_DAYS: '14', PASSWORD_RESET_MINUTES: '' });
+    expect(config).toMatchObject({
+      port: 3000,
+      databaseUrl: 'postgres://u@127.0.0.1:5432/shop',
+      logLevel: 'silent',
+      session: { idleMs: 1_800_000 },
+      mailLinks: { invitationMs: 14 * 86_400_000, passwordResetMs: 3_600_000 },
+    });
+    expect(() => loadConfig({ PASSWORD_RESET_MINUTES: '1' })).toThrow('PASSWORD_RESET_MINUTES: must be between 5 and 1440');
   });
 });

@@ -33,6 +33,10 @@ const environment = z
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
     SESSION_IDLE_MINUTES: whole(1, 7 * 24 * 60).default(8 * 60),
     SESSION_MAX_DAYS: whole(1, 365).default(7),
+    /** How long an invitation link works: long enough for someone back from a week away. */
+    INVITATION_DAYS: whole(1, 90).default(7),
+    /** How long a password reset link works: short, as whoever reads the mail can take the account. */
+    PASSWORD_RESET_MINUTES: whole(5, 24 * 60).default(60),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
@@ -62,6 +66,10 @@ export type Config = {
   logLevel: string;
   session: { idleMs: number; absoluteMs: number };
   signInLimits: { windowMs: number; perAccount: number; perAddress: number };
+  /** How long the single-use links sent by mail work (server/team/mail-tokens.ts). */
+  mailLinks: { invitationMs: number; passwordResetMs: number };
+  /** Reset mails asked for, per address asked about and per client address: no one fills a mailbox with them. */
+  passwordResetLimits: { windowMs: number; perAccount: number; perAddress: number };
 };
 
 /** The environment is not valid; the message names every bad variable. */
@@ -93,5 +101,7 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     session: { idleMs: env.SESSION_IDLE_MINUTES * 60_000, absoluteMs: env.SESSION_MAX_DAYS * 86_400_000 },
     signInLimits: { windowMs: 15 * 60_000, perAccount: 5, perAddress: 30 },
+    mailLinks: { invitationMs: env.INVITATION_DAYS * 86_400_000, passwordResetMs: env.PASSWORD_RESET_MINUTES * 60_000 },
+    passwordResetLimits: { windowMs: 60 * 60_000, perAccount: 3, perAddress: 20 },
   };
 }

@@ -1,15 +1,21 @@
 import type { Router } from 'express';
 import { signInBody } from '../../shared/api/contract';
+import { linkParams, passwordResetBody, passwordResetRequestBody } from '../../shared/api/team-contract';
 import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
+import { requestOrigin } from '../http/request-origin';
 import type { RouteContext } from '../http/route-context';
 import { issueCsrfToken } from './csrf';
-import { authenticateLocal, logIn } from './passport';
+import { authenticateLocal } from './passport';
+import { passwordResetFor, requestPasswordResetLater, resetPassword } from './password-reset.service';
+import { passwordResetLimits } from './password-reset-limits';
 import { signInLimits } from './sign-in-limits';
+import { csrfCookie, startSession } from './start-session';
 
-/** Sign-in, sign-out and "who am I"; /auth/me also hands the client its XSRF token. */
-export function authRoutes(router: Router, { config, clock, authenticator }: RouteContext): void {
-  const cookie = { secure: config.secureCookies, maxAge: config.session.idleMs };
+/** Sign-in, sign-out, "who am I" and password reset by mail; /auth/me also hands the client its XSRF token. */
+export function authRoutes(router: Router, context: RouteContext): void {
+  const { config, authenticator } = context;
+  const cookie = csrfCookie(config);
 
   router.get('/auth/me', (req, res) => {
     issueCsrfToken(req, res, cookie);
@@ -20,10 +26,7 @@ export function authRoutes(router: Router, { config, clock, authenticator }: Rou
   router.post('/auth/sign-in', jsonBody, signInLimits(config.signInLimits), async (req, res) => {
     req.body = signInBody.parse(req.body);
     const user = await authenticateLocal(authenticator, req, res);
-    await logIn(req, user);
-    const now = clock().getTime();
-    Object.assign(req.session, { signedInAt: now, lastSeenAt: now });
-    issueCsrfToken(req, res, cookie);
+    await startSession(req, res, user, context);
     res.json({ user });
   });
 
@@ -32,6 +35,25 @@ export function authRoutes(router: Router, { config, clock, authenticator }: Rou
   router.post('/auth/sign-out', async (req, res) => {
     await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
     issueCsrfToken(req, res, cookie);
+    res.status(204).end();
+  });
+
+  // The same 202 for every well-formed address, before anything is looked up: the answer says nothing
+  // about who has an account, and the mail (if any) is sent after it has gone.
+  router.post('/auth/password-reset', jsonBody, passwordResetLimits(config.passwordResetLimits), (req, res) => {
+    const { email } = passwordResetRequestBody.parse(req.body);
+    res.status(202).json({ message: 'If this address belongs to a member of the shop, a link to choose a new password is on its way to it.' });
+    requestPasswordResetLater(context, email, requestOrigin(req), req.log);
+  });
+
+  // No sign-in: the link's token is the permission. 404 for an unknown link, 410 used or expired.
+  router.get('/auth/password-reset/:token', async (req, res) => {
+    res.json(await passwordResetFor(context, linkParams.parse(req.params).token));
+  });
+
+  router.post('/auth/password-reset/:token', jsonBody, async (req, res) => {
+    const body = passwordResetBody.parse(req.body);
+    await resetPassword(context, linkParams.parse(req.params).token, body, req.sessionID);
     res.status(204).end();
   });
 }

@@ -4,16 +4,17 @@ import { AppError } from '../http/app-error';
 import { spendComparisonTime, verifyPassword } from './passwords';
 import { findAccount, findAccountByEmail } from './users.repository';
 
-type Account = User & { demo: boolean };
+type Account = User & { demo: boolean; active: boolean };
 
 const toUser = ({ id, email, name, role }: Account): User => ({ id, email, name, role });
 
 /** Why a sign-in was refused; the route turns it into the answer. */
-export type SignInRefusal = 'bad-credentials' | 'demo-accounts-off';
+export type SignInRefusal = 'bad-credentials' | 'demo-accounts-off' | 'account-deactivated';
 
 /**
  * Checks an address and password. Unknown address and wrong password look alike to the caller,
- * in answer and in time. Demo accounts sign in only where the configuration allows them.
+ * in answer and in time. Demo accounts sign in only where the configuration allows them; a
+ * deactivated member never does. Both are said only to whoever knows the password.
  */
 export async function checkCredentials(
   db: Database,
@@ -27,19 +28,28 @@ export async function checkCredentials(
     return { refused: 'bad-credentials' };
   }
   if (!(await verifyPassword(password, account.passwordHash))) return { refused: 'bad-credentials' };
+  if (!account.active) return { refused: 'account-deactivated' };
   if (account.demo && !demoAccounts) return { refused: 'demo-accounts-off' };
   return { user: toUser(account) };
 }
 
-/** The signed-in user of a session, or undefined when the account is gone or no longer allowed. */
+/** Whether an account may be signed in at all: active, and not a demo account where those are off. */
+export function mayUse(account: { active: boolean; demo: boolean }, demoAccounts: boolean): boolean {
+  return account.active && (demoAccounts || !account.demo);
+}
+
+/**
+ * The signed-in user of a session, or undefined when the account is gone or no longer allowed: a
+ * deactivated member's session is refused here even if its row has not been deleted yet.
+ */
 export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<User | undefined> {
   const account = await findAccount(db, id);
-  return account && (demoAccounts || !account.demo) ? toUser(account) : undefined;
+  return account && mayUse(account, demoAccounts) ? toUser(account) : undefined;
 }
 
 /** The error a refused sign-in answers with. */
 export function refusal(reason: SignInRefusal): AppError {
-  return reason === 'demo-accounts-off'
-    ? new AppError(403, 'demo-accounts-off', 'Demo accounts are switched off on this server (NODE_ENV=production).')
-    : new AppError(401, 'bad-credentials', 'That e-mail address and password do not match an account.');
+  if (reason === 'demo-accounts-off') return new AppError(403, 'demo-accounts-off', 'Demo accounts are switched off on this server (NODE_ENV=production).');
+  if (reason === 'account-deactivated') return new AppError(403, 'account-deactivated', 'This account has been deactivated. Ask an admin of your shop if you need it again.');
+  return new AppError(401, 'bad-credentials', 'That e-mail address and password do not match an account.');
 }

@@ -2,7 +2,7 @@ import { count, eq, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { users } from '../db/schema';
 
-const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, demo: users.demo };
+const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, demo: users.demo, active: users.active };
 
 /** The account with this address (any case), with its password hash. */
 export async function findAccountByEmail(db: Database, email: string) {

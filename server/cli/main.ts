@@ -1,3 +1,4 @@
+import { adminCommand } from './admin-command';
 import { catalogCommand } from './catalog-command';
 import { checkCommand } from './check-command';
 import { EXIT, processIo, type CliIo } from './cli-io';
@@ -17,13 +18,14 @@ Commands:
   swap <job.json>    check a fitting's replacement: holes reused, new, clashing, unused (--from, --to)
   catalog            list the fittings of the built-in catalog (--json for programs)
   schema             print the JSON Schema of the job document
+  admin add          add a member to the shop's database, such as the first admin of a production install
 
 Run borewright <command> --help for its options.
 Exit code: 0 all clear, 1 a check found an error, 2 the command could not run.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
 
-const COMMANDS: Record<string, Command> = { check: checkCommand, pack: packCommand, plan: planCommand, swap: swapCommand, catalog: catalogCommand, schema: schemaCommand };
+const COMMANDS: Record<string, Command> = { admin: (args, io) => adminCommand(args, io), check: checkCommand, pack: packCommand, plan: planCommand, swap: swapCommand, catalog: catalogCommand, schema: schemaCommand };
 
 /** Runs the command line and returns the exit code. Never throws on bad arguments or files. */
 export async function main(argv: string[], io: CliIo = processIo): Promise<number> {

@@ -8,6 +8,7 @@ import { signPackLink } from '../../server/packs/pack-links';
 import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 import { SWAP_ROUTES } from './role-matrix.swap';
+import { TEAM_ROUTES } from './role-matrix.team';
 import { UPLOADS_ROUTES } from './role-matrix.uploads';
 
 /** A carcass description the planner accepts: a doweled wall box with two doors. */
@@ -89,6 +90,7 @@ const ROUTES: Record<string, Row> = {
   'GET /api/outbox': { request: (c) => c.get('/api/outbox'), expect: [401, 200, 403, 403, 403] },
   'GET /api/outbox/:id/attachments/:index': { request: (c) => c.get(`/api/outbox/${caughtMessageId}/attachments/0`), expect: [401, 200, 403, 403, 403] },
   'GET /api/mail/recipients': { request: (c) => c.get('/api/mail/recipients'), expect: [401, 200, 200, 403, 403] },
+  ...TEAM_ROUTES,
   ...UPLOADS_ROUTES,
   ...SWAP_ROUTES,
 };
