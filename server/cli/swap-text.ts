@@ -1,5 +1,6 @@
 import { formatNumber } from '../../shared/checks/wording';
 import type { PanelSwap, SwapBore, SwapReport } from '../../shared/swap/swap-report';
+import { verdictText } from '../../shared/swap/verdict-text';
 import { VISIBLE_FACE_RULE } from '../../shared/swap/visible-face';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -9,21 +10,6 @@ export function holeText(bore: SwapBore): string {
   const depth = bore.kind === 'face' && bore.through ? 'through' : formatNumber(bore.depth);
   const where = bore.kind === 'face' ? `face ${bore.face} x ${formatNumber(bore.x)} y ${formatNumber(bore.y)}` : `edge ${bore.edge} at ${formatNumber(bore.at)} z ${formatNumber(bore.z)}`;
   return `${bore.id} Ø${formatNumber(bore.diameter)} × ${depth}, ${where}`;
-}
-
-const VERDICT: Record<PanelSwap['verdict'], string> = { fine: 'fine', 'to-drill': 'to drill', 'to-remake': 'to remake' };
-
-/** What a panel comes to, in words: a planned panel gets the new plan whatever its holes would say. */
-export function verdictText(p: PanelSwap): string {
-  if (!p.drilled) return `not drilled yet: it simply gets the new plan (drilled, it would be ${VERDICT[p.verdict]})`;
-  if (p.verdict === 'fine') return 'fine: every hole the new fitting needs is there';
-  if (p.verdict === 'to-drill') return `to drill: ${plural(p.new.length, 'new hole')}, none in the way of an existing one`;
-  const visible = p.unused.filter((u) => u.visible).length;
-  const why = [
-    p.clashing.length > 0 ? `${plural(p.clashing.length, 'new hole')} cannot be drilled for an existing one in the way` : '',
-    visible > 0 ? `${plural(visible, 'old hole')} would show on a visible face` : '',
-  ];
-  return `to remake: ${why.filter(Boolean).join(', and ')}`;
 }
 
 function panelLines(p: PanelSwap): string[] {
