@@ -4,6 +4,22 @@ import { Shell } from './layout/shell';
 
 export const routes: Routes = [
   { path: 'sign-in', loadChildren: () => import('./auth/auth.routes') },
+  // The pages behind the links we mail: outside the signed-in shell, as their readers are not signed in.
+  {
+    path: 'accept-invitation',
+    loadComponent: () => import('./auth/accept-invitation').then((m) => m.AcceptInvitation),
+    title: 'Join the shop · Borewright',
+  },
+  {
+    path: 'forgot-password',
+    loadComponent: () => import('./auth/forgot-password').then((m) => m.ForgotPassword),
+    title: 'Forgot password · Borewright',
+  },
+  {
+    path: 'reset-password',
+    loadComponent: () => import('./auth/reset-password').then((m) => m.ResetPassword),
+    title: 'New password · Borewright',
+  },
   {
     path: '',
     component: Shell,
@@ -13,6 +29,7 @@ export const routes: Routes = [
       { path: 'jobs', loadChildren: () => import('./jobs/jobs.routes') },
       { path: 'jobs/:jobId/panels/:panelId', loadChildren: () => import('./editor/editor.routes') },
       { path: 'outbox', loadChildren: () => import('./outbox/outbox.routes') },
+      { path: 'team', loadChildren: () => import('./team/team.routes') },
       { path: 'jobs/:jobId/plan', loadChildren: () => import('./planner/planner.routes') },
     ],
   },

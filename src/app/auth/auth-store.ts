@@ -58,6 +58,11 @@ export class AuthStore {
     this.forgetSession();
   }
 
+  /** A session the server started itself, by accepting an invitation: the app is signed in as its user. */
+  adoptSession(who: User): void {
+    this.remember(who);
+  }
+
   /**
    * Called when the session has ended. The next restoreSession() asks the server again, which also
    * hands out the token the new session's first change needs.

@@ -6,7 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { Router } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { AuthStore } from './auth-store';
 
@@ -20,6 +20,7 @@ import { AuthStore } from './auth-store';
     MatIconModule,
     MatInputModule,
     MatProgressBarModule,
+    RouterLink,
   ],
   templateUrl: './sign-in.html',
   styleUrl: './sign-in.scss',
@@ -31,6 +32,8 @@ export class SignIn {
 
   /** Where the guard was sending the user before it asked them to sign in. */
   readonly returnUrl = input<string>();
+  /** Set by the reset page after a new password was saved. */
+  readonly passwordChanged = input<string>();
 
   protected readonly form = this.fb.group({
     email: ['', [Validators.required, Validators.email]],
