@@ -62,6 +62,8 @@ describe('swap check API', () => {
       expect(unknown.body.error).toMatchObject({ code: 'unknown-fitting', fields: { from: '"hinge-99": no fitting of the catalog has this id.' } });
       const missing = await viewer.get(`/api/jobs/${job.job.id}/swap?to=hinge-full-overlay-48`).expect(400);
       expect(Object.keys(missing.body.error.fields)).toEqual(['from']);
+      const twice = await viewer.get(`/api/jobs/${job.job.id}/swap?from=runner-500&from=runner-400&to=runner-300`).expect(400);
+      expect(Object.keys(twice.body.error.fields)).toEqual(['from']);
       await viewer.get(`/api/jobs/999999/swap?${HINGES}`).expect(404);
     });
 
