@@ -30,7 +30,7 @@ describe('borewright swap', () => {
   it('prints the report and exits 1 when a drilled panel must be remade', () => {
     const { code, stdout } = runCli('swap', files['drilled.json'], '--from', 'hinge-full-overlay-45', '--to', 'hinge-full-overlay-48');
     expect(code).toBe(1);
-    expect(stdout).toContain('Cup hinge, full overlay, 45/9.5 (hinge-full-overlay-45) for Cup hinge, full overlay, 48/6 (hinge-full-overlay-48)');
+    expect(stdout).toContain('Replacing Cup hinge, full overlay, 45/9.5 (hinge-full-overlay-45) by Cup hinge, full overlay, 48/6 (hinge-full-overlay-48)');
     expect(stdout).toContain('Drilled panels: 0 fine, 0 to drill, 1 to remake. Not drilled yet: 0');
     expect(stdout).toContain('Panel door (door, door), drilled: to remake: 4 new holes cannot be drilled for an existing one in the way');
     expect(stdout).toMatch(/reused\s+hinge-1\/cup Ø35 × 13, face A x 21\.5 y 87/);

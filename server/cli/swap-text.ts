@@ -30,7 +30,7 @@ export function swapText(jobName: string, report: SwapReport): string {
   const { from, to, summary: s } = report;
   const lines = [
     `Swap check: ${jobName}`,
-    `${from.name} (${from.id}) for ${to.name} (${to.id})`,
+    `Replacing ${from.name} (${from.id}) by ${to.name} (${to.id})`,
     '',
     `${plural(s.panels, 'panel')} ${s.panels === 1 ? 'uses' : 'use'} it, with ${plural(s.placements, 'placement')}.`,
     `Drilled panels: ${s.fine} fine, ${s.toDrill} to drill, ${s.toRemake} to remake. Not drilled yet: ${s.notDrilled} (they simply get the new plan).`,
