@@ -6,6 +6,7 @@ import type { Config } from './config';
 import type { Database } from './db/client';
 import { clientApp } from './http/client-app';
 import { errorHandler } from './http/error-handler';
+import { loggedUrl } from './http/logged-url';
 import { securityHeaders } from './http/security-headers';
 import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
@@ -42,7 +43,7 @@ export function createApp(deps: AppDeps): Express {
       logger: deps.logger,
       // Method, path and status are enough to follow a request; headers stay out of the log.
       serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: loggedUrl(req.url) }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
