@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, isNull, ne, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Database } from '../db/client';
 import { mailTokens, users } from '../db/schema';
@@ -30,14 +30,19 @@ export async function findMemberByEmail(db: Database, email: string) {
   return row;
 }
 
-/** The active admins other than this member, held until the transaction ends so two demotions cannot cross. */
-export async function otherActiveAdmins(db: Database, exceptId: number): Promise<number> {
+/**
+ * The active admins' ids, their rows held until the transaction ends. Every change of a member takes
+ * these locks first, always in id order, then the member's own: two admins demoting each other at
+ * once queue up instead of deadlocking, and the second sees what the first did.
+ */
+export async function lockActiveAdmins(db: Database): Promise<number[]> {
   const rows = await db
     .select({ id: users.id })
     .from(users)
-    .where(and(eq(users.role, 'admin'), eq(users.active, true), ne(users.id, exceptId)))
+    .where(and(eq(users.role, 'admin'), eq(users.active, true)))
+    .orderBy(asc(users.id))
     .for('update');
-  return rows.length;
+  return rows.map((r) => r.id);
 }
 
 export async function updateMember(db: Database, id: number, changes: Partial<Pick<typeof users.$inferInsert, 'role' | 'active' | 'passwordHash'>>): Promise<void> {

@@ -84,6 +84,7 @@ export async function withdrawInvitation(db: RouteContext['db'], actor: User, id
  */
 export async function changeMember(db: RouteContext['db'], actor: User, userId: number, body: z.output<typeof memberUpdateBody>): Promise<TeamMember> {
   return db.transaction(async (tx) => {
+    const admins = await repo.lockActiveAdmins(tx);
     const member = await repo.findMember(tx, userId, true);
     if (!member) throw notFound(`Member ${userId}`);
     const role = body.role ?? member.role;
@@ -92,7 +93,7 @@ export async function changeMember(db: RouteContext['db'], actor: User, userId: 
       throw new AppError(409, 'own-account', 'You cannot deactivate your own account. Another admin can, once there is one.', { fields: { active: 'cannot be switched off for yourself' } });
     }
     const losesAdmin = member.role === 'admin' && member.active && (role !== 'admin' || !active);
-    if (losesAdmin && (await repo.otherActiveAdmins(tx, member.id)) === 0) {
+    if (losesAdmin && admins.every((id) => id === member.id)) {
       throw new AppError(409, 'last-admin', `${member.name} is the shop's only active admin. Make someone else an admin first, so the shop can still manage its team.`, {
         fields: { [body.active === false ? 'active' : 'role']: 'would leave the shop without an active admin' },
       });

@@ -96,6 +96,28 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     await target.close();
   });
 
+  it('ends a deactivated member\'s sessions, and keeps one active admin when two admins demote each other at once', async () => {
+    const owner = await signedIn(app, 'owner@greyfield.example');
+    const bench = await signedIn(app, 'bench@greyfield.example');
+    const { members } = (await owner.get('/api/team').expect(200)).body as { members: { id: number; email: string }[] };
+    const idOf = (email: string) => members.find((m) => m.email === email)!.id;
+    await owner.patch(`/api/team/members/${idOf('bench@greyfield.example')}`).send({ active: false }).expect(200);
+    await bench.get('/api/jobs').expect(401);
+
+    const [ownerId, tomasId] = [idOf('owner@greyfield.example'), idOf('designer@greyfield.example')];
+    await owner.patch(`/api/team/members/${tomasId}`).send({ role: 'admin' }).expect(200);
+    const tomas = await signedIn(app, 'designer@greyfield.example');
+    // Each on a connection of its own: the row locks queue the second behind the first, which it then sees.
+    const answers = await Promise.all([
+      owner.patch(`/api/team/members/${tomasId}`).send({ role: 'designer' }),
+      tomas.patch(`/api/team/members/${ownerId}`).send({ role: 'designer' }),
+    ]);
+    expect(answers.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(answers.find((r) => r.status === 409)!.body.error.code).toBe('last-admin');
+    const admins = await database.db.execute(sql`select count(*)::int as n from users where role = 'admin' and active`);
+    expect((admins as unknown as { rows: { n: number }[] }).rows[0].n).toBe(1);
+  });
+
   it('restores a backup made with PGlite, so a shop can move to a PostgreSQL server', async () => {
     const local = await openDatabase({ engine: 'pglite' });
     await local.migrate();
