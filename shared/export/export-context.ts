@@ -26,10 +26,16 @@ export function dateText(date: Date): string {
 const INSIDE: readonly PanelRole[] = ['side', 'top', 'bottom', 'shelf', 'back'];
 const BACK: readonly PanelRole[] = ['door', 'flap', 'drawer-front'];
 
-/** A face as the bench knows it: face A is the inside face of a carcass part and the back face of a door or flap (design.md §2). */
-export function faceText(role: PanelRole, face: Face): string {
+/** What a face is on a panel of this role: face A is the inside face of a carcass part and the back face of a door or flap (design.md §2). */
+export function faceName(role: PanelRole, face: Face): string | undefined {
   const which = INSIDE.includes(role) ? ['inside face', 'outside face'] : BACK.includes(role) ? ['back face', 'front face'] : undefined;
-  return which ? `${face} (${face === 'A' ? which[0] : which[1]})` : face;
+  return which?.[face === 'A' ? 0 : 1];
+}
+
+/** A face as the bench knows it: `A (inside face)`, or the letter alone where the role gives the face no name. */
+export function faceText(role: PanelRole, face: Face): string {
+  const name = faceName(role, face);
+  return name ? `${face} (${name})` : face;
 }
 
 /** The name of the carcass a panel belongs to, or `none`. */
