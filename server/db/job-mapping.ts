@@ -75,8 +75,13 @@ function groupByPanel<T extends { id: number; panelId: number }>(rows: readonly 
 
 /** A carcass row as the document's carcass. */
 export function toCarcass(row: CarcassRow): Carcass {
-  const { key, name, width, height, depth, material, mounting } = row;
-  return { id: key, name, width, height, depth, material, mounting };
+  const { key, name, width, height, depth, material, mounting, plannedFrom } = row;
+  return { id: key, name, width, height, depth, material, mounting, ...(plannedFrom ? { plannedFrom } : {}) };
+}
+
+/** The document's carcass as a row to store; what the document leaves out is null in the row. */
+export function carcassDraft({ id, plannedFrom, ...fields }: Carcass): CarcassDraft {
+  return { key: id, ...fields, plannedFrom: plannedFrom ?? null };
 }
 
 /** A placement row as the document's placement; absent options stay absent. */
@@ -205,7 +210,7 @@ export function fromJobDocument(doc: JobDocument): JobDocumentDraft {
       limits: doc.limits,
       materials: doc.materials,
     },
-    carcasses: doc.carcasses.map(({ id, ...fields }) => ({ key: id, ...fields })),
+    carcasses: doc.carcasses.map(carcassDraft),
     panels: doc.panels.map((p) => ({
       panel: panelDraft(p),
       carcassKey: p.carcass ?? null,

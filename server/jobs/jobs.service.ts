@@ -5,7 +5,7 @@ import { JOB_FORMAT, jobDocument, type Carcass, type JobDocument } from '../../s
 import { parseJobDocument } from '../../shared/model/parse-job';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
-import { fromJobDocument, toCarcass, toJobDocument, toPanelRecords } from '../db/job-mapping';
+import { carcassDraft, fromJobDocument, toCarcass, toJobDocument, toPanelRecords } from '../db/job-mapping';
 import { AppError, invalidField, notFound } from '../http/app-error';
 import { findNulText, NUL_MESSAGE } from '../http/nul-text';
 import { nextDocumentId } from './document-ids';
@@ -120,8 +120,7 @@ export async function addCarcass(db: Database, actor: User, jobId: number, body:
     if (body.id !== undefined && taken.has(body.id)) {
       throw new AppError(409, 'duplicate-id', `id: this job already has a carcass "${body.id}".`, { fields: { id: 'is already used in this job' } });
     }
-    const { id, ...fields } = body;
-    const row = await repo.insertCarcass(tx, jobId, { ...fields, key: id ?? nextDocumentId('carcass', taken) });
+    const row = await repo.insertCarcass(tx, jobId, carcassDraft({ ...body, id: body.id ?? nextDocumentId('carcass', taken) }));
     await repo.touchJob(tx, jobId);
     await recordActivity(tx, { userId: actor.id, jobId, action: 'carcass.created', details: { carcass: row.key, name: row.name } });
     return toCarcass(row);

@@ -7,7 +7,7 @@ import { changedSincePlanned, replacement, type ChangedPanelChoice, type StoredP
 import { recordActivity } from '../activity/activity.repository';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
-import { boreDraft, panelDraft, placementDraft, toCarcass, type CarcassRow } from '../db/job-mapping';
+import { boreDraft, carcassDraft, panelDraft, placementDraft, toCarcass, type CarcassRow } from '../db/job-mapping';
 import { panels as panelTable } from '../db/schema';
 import { AppError, notFound } from '../http/app-error';
 import { carcassKeys, findJob, insertCarcass, touchJob, updateCarcass } from '../jobs/jobs.repository';
@@ -38,8 +38,8 @@ async function addCarcass(tx: Database, actor: User, jobId: number, plan: Carcas
   const taken = new Set((await panels.jobPanelRefs(tx, jobId)).map((p) => p.key));
   const clash = plan.panels.find((p) => taken.has(p.id));
   if (clash) throw new AppError(409, 'duplicate-id', `id: this job already has a panel "${clash.id}"; give the carcass another id.`, { fields: { id: 'is already used in this job' } });
-  const { id: key, ...fields } = plan.carcass;
-  const row = await insertCarcass(tx, jobId, { ...fields, key });
+  const row = await insertCarcass(tx, jobId, carcassDraft(plan.carcass));
+  const key = row.key;
   for (const p of plan.panels) await insertPlannedPanel(tx, jobId, row.id, p);
   await recordActivity(tx, { userId: actor.id, jobId, action: 'carcass.planned', details: { carcass: key, name: row.name, panels: plan.panels.length } });
   return { carcass: toCarcass(row), panels: await carcassPanelRecords(tx, row.id), kept: [] };
@@ -81,7 +81,7 @@ async function replan(tx: Database, actor: User, jobId: number, carcassId: numbe
     if (!(await panels.deletePanelAtVersion(tx, record.dbId, record.version))) throw stale(key);
   }
   for (const p of insert) await insertPlannedPanel(tx, jobId, carcassId, p);
-  const { id: key, ...fields } = plan.carcass;
+  const { key, ...fields } = carcassDraft(plan.carcass);
   const row: CarcassRow = await updateCarcass(tx, carcassId, fields);
   await recordActivity(tx, {
     userId: actor.id,

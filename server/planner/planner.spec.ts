@@ -37,6 +37,9 @@ describe('POST /api/jobs/:jobId/plan', () => {
     const res = await designer.post(`/api/jobs/${jobId}/plan`).send(FLAP_UNIT).expect(201);
     const planned = plannedCarcass.parse(res.body);
     expect(planned.carcass).toMatchObject({ id: 'flap-unit', mounting: 'wall' });
+    // The description is kept to plan the carcass again, without the job's own materials, system and limits.
+    expect(planned.carcass.plannedFrom).toMatchObject({ width: 700, fronts: { type: 'flap', reveal: 3 }, shelves: { type: 'adjustable', count: 1 } });
+    expect(planned.carcass.plannedFrom).not.toHaveProperty('materials');
     const flap = planned.panels.find((p) => p.role === 'flap');
     expect(flap?.hang?.on).toEqual(['flap-unit-top', 'flap-unit-left', 'flap-unit-right']);
     const doc = jobDocument.parse((await designer.get(`/api/jobs/${jobId}/document`).expect(200)).body);

@@ -96,7 +96,7 @@ export const jobDetail = z.object({
 });
 export type JobDetail = z.output<typeof jobDetail>;
 
-export const carcassCreateBody = carcass.omit({ id: true }).extend({ id: carcass.shape.id.optional() });
+export const carcassCreateBody = carcass.omit({ id: true, plannedFrom: true }).extend({ id: carcass.shape.id.optional() });
 
 /** Adding or editing a panel's board data; its drilling changes through the editor. */
 export const panelFieldsBody = z.object({

@@ -84,6 +84,11 @@ export const carcass = z.object({
   depth: length(MAX_PANEL_LENGTH),
   material: id,
   mounting: z.enum(['floor', 'wall']).default('floor'),
+  /**
+   * The description the carcass planner made this carcass from, as the planner reads it (without the
+   * job's materials, system and limits), so that it can be planned again; absent for a carcass drawn by hand.
+   */
+  plannedFrom: z.record(z.string().max(64), z.unknown()).optional(),
 });
 
 export const placement = z.object({

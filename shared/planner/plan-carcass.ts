@@ -58,6 +58,12 @@ function merge(...steps: PartPlacements[]): PartPlacements {
  * bottom, back, kickboard, fronts with their hinges, plates or mechanisms, and shelves. Bad input is
  * refused with one message per problem, each led by the path of the value it concerns; nothing is made.
  */
+/** The input as the carcass keeps it to be planned again: the job's materials, system and limits come from the job. */
+function description(input: CarcassPlanInput): Record<string, unknown> {
+  const { materials: _materials, system: _system, limits: _limits, ...own } = input;
+  return own;
+}
+
 export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
   const parsed = carcassPlanInput.safeParse(data);
   if (!parsed.success) return { ok: false, errors: formatIssues(parsed.error) };
@@ -101,7 +107,16 @@ export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
     ok: true,
     plan: {
       input,
-      carcass: { id: input.id, name: input.name, width: input.width, height: input.height, depth: input.depth, material: input.material, mounting: mounting.type === 'wall' ? 'wall' : 'floor' },
+      carcass: {
+        id: input.id,
+        name: input.name,
+        width: input.width,
+        height: input.height,
+        depth: input.depth,
+        material: input.material,
+        mounting: mounting.type === 'wall' ? 'wall' : 'floor',
+        plannedFrom: description(input),
+      },
       panels,
       box,
       construction: explain(input.construction, constructionWhy(input.construction)),

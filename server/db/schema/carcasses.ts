@@ -1,4 +1,4 @@
-import { check, doublePrecision, integer, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { check, doublePrecision, integer, jsonb, pgTable, text, unique } from 'drizzle-orm/pg-core';
 import { jobs } from './jobs';
 import { oneOf } from './check';
 
@@ -18,6 +18,8 @@ export const carcasses = pgTable(
     /** A material id of the job's materials. */
     material: text('material').notNull(),
     mounting: text('mounting').$type<'floor' | 'wall'>().notNull().default('floor'),
+    /** The planner's description it was made from (the document's `plannedFrom`); null when drawn by hand. */
+    plannedFrom: jsonb('planned_from').$type<Record<string, unknown>>(),
   },
   (t) => [unique('carcasses_job_key_unique').on(t.jobId, t.key), check('carcasses_mounting_check', oneOf(t.mounting, ['floor', 'wall']))],
 );

@@ -1,4 +1,4 @@
-import { Component, effect, inject } from '@angular/core';
+import { Component, effect, inject, untracked } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -16,7 +16,7 @@ import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
-import { plannerForm, toPlanInput } from './planner-form';
+import { fromPlanInput, plannerForm, toPlanInput } from './planner-form';
 import { PlannerStore } from './planner-store';
 import { ReplanDialog } from './replan-dialog';
 
@@ -54,6 +54,11 @@ export class CarcassPlanner {
 
   constructor() {
     effect(() => this.store.describe(toPlanInput(this.value())));
+    // Planning a carcass again starts from the description it was planned from, once, when it arrives.
+    effect(() => {
+      const again = this.store.againFrom();
+      if (again) untracked(() => this.form.patchValue(fromPlanInput(again)));
+    });
   }
 
   protected async addToJob(changed?: ChangedPanelChoice): Promise<void> {

@@ -1,5 +1,5 @@
 import { FormControl, FormGroup } from '@angular/forms';
-import type { CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
+import type { CarcassPlanInput, CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
 
 const n = (value: number) => new FormControl(value, { nonNullable: true });
 const s = <T extends string>(value: T) => new FormControl<T>(value, { nonNullable: true });
@@ -7,14 +7,14 @@ const s = <T extends string>(value: T) => new FormControl<T>(value, { nonNullabl
 /** The planner's form: every choice of the carcass description, flat, as the fields show them. Invented starting numbers. */
 export function plannerForm() {
   return new FormGroup({
-    id: s('wall-1'),
-    name: s('Wall unit'),
+    id: s<string>('wall-1'),
+    name: s<string>('Wall unit'),
     width: n(600),
     height: n(723),
     depth: n(320),
-    material: s('mdf-19'),
+    material: s<string>('mdf-19'),
     back: s<'none' | 'inset' | 'grooved'>('none'),
-    backMaterial: s('plywood-18'),
+    backMaterial: s<string>('plywood-18'),
     setIn: n(10),
     grooveDepth: n(8),
     construction: s<'dowels' | 'cams' | 'screws'>('cams'),
@@ -59,5 +59,33 @@ export function toPlanInput(v: PlannerFormValue): CarcassPlanInputData {
     fronts,
     shelves: v.shelves === 'none' ? { type: 'none' } : v.shelves === 'fixed' ? { type: 'fixed', count: v.shelfCount } : { type: 'adjustable', count: v.shelfCount, play: v.play },
     mounting: v.mounting === 'wall' ? { type: 'wall' } : { type: 'kickboard', height: v.kickHeight, setBack: v.kickSetBack },
+  };
+}
+
+/**
+ * The form's values for a description a carcass was planned from, to plan it again; what the form
+ * does not show (a chosen hinge, a shelf range) keeps the form's own value.
+ */
+export function fromPlanInput(input: CarcassPlanInput): Partial<PlannerFormValue> {
+  const { fronts, back, shelves, mounting } = input;
+  return {
+    id: input.id,
+    name: input.name,
+    width: input.width,
+    height: input.height,
+    depth: input.depth,
+    material: input.material,
+    construction: input.construction,
+    back: back.type,
+    ...(back.type === 'grooved' ? { backMaterial: back.material, setIn: back.setIn, grooveDepth: back.grooveDepth } : {}),
+    fronts: fronts.type,
+    ...(fronts.type === 'doors' ? { doorCount: fronts.count === 1 ? '1' : '2', overlay: fronts.overlay, hingeSide: fronts.hingeSide, reveal: fronts.reveal, handleMass: fronts.handleMass } : {}),
+    ...(fronts.type === 'flap' ? { mechanisms: fronts.mechanisms === 1 ? '1' : '2', reveal: fronts.reveal, handleMass: fronts.handleMass } : {}),
+    ...(fronts.type === 'drawers' ? { drawerCount: fronts.count, reveal: fronts.reveal } : {}),
+    shelves: shelves.type,
+    ...(shelves.type !== 'none' ? { shelfCount: shelves.count } : {}),
+    ...(shelves.type === 'adjustable' ? { play: shelves.play } : {}),
+    mounting: mounting.type,
+    ...(mounting.type === 'kickboard' ? { kickHeight: mounting.height, kickSetBack: mounting.setBack } : {}),
   };
 }

@@ -6,7 +6,7 @@ import { firstValueFrom, map } from 'rxjs';
 import { jobDetail } from '../../../shared/api/contract';
 import { plannedCarcass, type PlannedCarcass } from '../../../shared/api/plan-contract';
 import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
-import type { CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
+import { carcassPlanInput, type CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
 import { planCarcass } from '../../../shared/planner/plan-carcass';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { jobUrl } from '../jobs/jobs-api';
@@ -20,13 +20,22 @@ import { jobUrl } from '../jobs/jobs-api';
 export class PlannerStore {
   private readonly http = inject(HttpClient);
 
-  readonly jobId = toSignal(inject(ActivatedRoute).paramMap.pipe(map((params) => Number(params.get('jobId')))), { initialValue: 0 });
+  private readonly route = inject(ActivatedRoute);
+  readonly jobId = toSignal(this.route.paramMap.pipe(map((params) => Number(params.get('jobId')))), { initialValue: 0 });
+  /** `?carcass=` names a carcass of the job to plan again from the description it was planned from. */
+  private readonly againId = toSignal(this.route.queryParamMap.pipe(map((params) => params.get('carcass'))), { initialValue: null });
   private readonly detail = httpResource(() => (this.jobId() > 0 ? jobUrl(this.jobId()) : undefined), { parse: (raw) => jobDetail.parse(raw) });
   private readonly description = signal<CarcassPlanInputData | undefined>(undefined);
 
   readonly job = computed(() => (this.detail.hasValue() ? this.detail.value().job : undefined));
   private readonly settings = computed(() => (this.detail.hasValue() ? this.detail.value() : undefined));
   readonly materials = computed(() => this.settings()?.materials ?? []);
+  /** The description of the carcass to plan again, once the job has loaded; undefined when there is none to read. */
+  readonly againFrom = computed(() => {
+    const carcass = this.detail.hasValue() ? this.detail.value().carcasses.find((c) => c.id === this.againId()) : undefined;
+    const parsed = carcass?.plannedFrom && carcassPlanInput.safeParse(carcass.plannedFrom);
+    return parsed && parsed.success ? parsed.data : undefined;
+  });
   readonly usedIds = computed(() => new Set(this.detail.hasValue() ? this.detail.value().carcasses.map((c) => c.id) : []));
   readonly result = computed(() => {
     const input = this.description();

@@ -1,0 +1,1 @@
+ALTER TABLE "carcasses" ADD COLUMN "planned_from" jsonb;
