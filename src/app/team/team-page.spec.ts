@@ -102,6 +102,34 @@ describe('TeamPage', () => {
     expect(page.textContent).toContain('No open invitations.');
   });
 
+  it('changes a role, and puts the choice back when the server refuses it', async () => {
+    const choose = async (member: string, option: string) => {
+      row(member).querySelector<HTMLElement>('.mat-mdc-select-trigger')!.click();
+      await fixture.whenStable();
+      [...document.querySelectorAll<HTMLElement>('mat-option')].find((o) => o.textContent?.trim() === option)!.click();
+      await fixture.whenStable();
+    };
+    const shown = (member: string) => row(member).querySelector('.mat-mdc-select-value')?.textContent?.trim();
+
+    await choose('Ada Keel', 'Designer');
+    const request = http.expectOne({ method: 'PATCH', url: '/api/team/members/5' });
+    expect(request.request.body).toEqual({ role: 'designer' });
+    request.flush({ ...team.members[0], role: 'designer' });
+    await settle();
+    await fixture.whenStable();
+    expect(shown('Ada Keel')).toBe('Designer');
+
+    await choose('Ada Keel', 'Viewer');
+    http.expectOne('/api/team/members/5').flush(
+      { error: { code: 'conflict', message: 'Someone made a conflicting change at the same moment. Reload and try again.' } },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await settle();
+    await fixture.whenStable();
+    expect(page.querySelector('[role="alert"]')?.textContent).toContain("Ada Keel's role was not changed.");
+    expect(shown('Ada Keel')).toBe('Designer');
+  });
+
   it('says why a change was refused and keeps what the server has', async () => {
     toggleOf('Sam Fitter').click();
     await fixture.whenStable();
