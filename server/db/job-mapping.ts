@@ -32,6 +32,8 @@ export type JobRows = {
   panels: PanelRow[];
   placements: PlacementRow[];
   bores: BoreRow[];
+  /** The names of the members who marked a panel's status, by user id (the panel record says who). */
+  people?: ReadonlyMap<number, string>;
 };
 
 /** Row fields the document determines; the repository adds the ids the database hands out. */
@@ -125,23 +127,41 @@ export function toPanel(row: PanelRow, carcassKey: string | undefined, placement
   };
 }
 
-/** A panel as the API returns it: the document's panel plus what the database keeps about it. */
+/**
+ * A panel as the API returns it: the document's panel plus what the database keeps about it. `statusBy`
+ * is the name of the member the row's status_by names, looked up by the caller.
+ */
 export function toPanelRecord(
   row: PanelRow,
   carcassKey: string | undefined,
   placementRows: readonly PlacementRow[],
   boreRows: readonly BoreRow[],
+  statusBy: string | null = null,
 ): PanelRecord {
-  return { ...toPanel(row, carcassKey, placementRows, boreRows), dbId: row.id, version: row.version, updatedAt: row.updatedAt.toISOString() };
+  return {
+    ...toPanel(row, carcassKey, placementRows, boreRows),
+    dbId: row.id,
+    version: row.version,
+    updatedAt: row.updatedAt.toISOString(),
+    statusBy,
+    statusAt: row.statusAt?.toISOString() ?? null,
+  };
 }
 
-/** Each panel of the job as a panel record, in stored order. */
-export function toPanelRecords(rows: Omit<JobRows, 'job'>): PanelRecord[] {
+/** Each panel of the job made by `make` from its row and children, in stored order. */
+function eachPanel<T>(rows: Omit<JobRows, 'job'>, make: (row: PanelRow, carcassKey: string | undefined, placements: PlacementRow[], bores: BoreRow[]) => T): T[] {
   const carcassKeys = new Map(rows.carcasses.map((c) => [c.id, c.key]));
   const placementsOf = groupByPanel(rows.placements);
   const boresOf = groupByPanel(rows.bores);
   return byId(rows.panels).map((p) =>
-    toPanelRecord(p, p.carcassId === null ? undefined : carcassKeys.get(p.carcassId), placementsOf.get(p.id) ?? [], boresOf.get(p.id) ?? []),
+    make(p, p.carcassId === null ? undefined : carcassKeys.get(p.carcassId), placementsOf.get(p.id) ?? [], boresOf.get(p.id) ?? []),
+  );
+}
+
+/** Each panel of the job as a panel record, in stored order. */
+export function toPanelRecords(rows: Omit<JobRows, 'job'>): PanelRecord[] {
+  return eachPanel(rows, (row, carcassKey, placementRows, boreRows) =>
+    toPanelRecord(row, carcassKey, placementRows, boreRows, row.statusBy === null ? null : (rows.people?.get(row.statusBy) ?? null)),
   );
 }
 
@@ -157,7 +177,7 @@ export function toJobDocument(rows: JobRows): JobDocument {
     limits: inSchemaOrder(shopLimits, job.limits),
     materials: job.materials.map((m) => inSchemaOrder(material, m)),
     carcasses: byId(rows.carcasses).map(toCarcass),
-    panels: toPanelRecords(rows).map(({ dbId: _dbId, version: _version, updatedAt: _updatedAt, ...panel }) => panel),
+    panels: eachPanel(rows, toPanel),
   };
 }
 

@@ -1,7 +1,7 @@
 import { asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
-import { bores, carcasses, jobs, panels, placements } from '../db/schema';
+import { bores, carcasses, jobs, panels, placements, users } from '../db/schema';
 import { insertDrilling, insertPanel } from '../panels/panels.repository';
 
 const summaryColumns = (db: Database) => ({
@@ -43,13 +43,22 @@ export async function loadJobRows(db: Database, id: number): Promise<JobRows | u
   const job = await findJob(db, id);
   if (!job) return undefined;
   const panelIds = db.select({ id: panels.id }).from(panels).where(eq(panels.jobId, id));
-  const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
+  const markedBy = db.select({ id: panels.statusBy }).from(panels).where(eq(panels.jobId, id));
+  const [carcassRows, panelRows, placementRows, boreRows, people] = await Promise.all([
     db.select().from(carcasses).where(eq(carcasses.jobId, id)).orderBy(asc(carcasses.id)),
     db.select().from(panels).where(eq(panels.jobId, id)).orderBy(asc(panels.id)),
     db.select().from(placements).where(inArray(placements.panelId, panelIds)).orderBy(asc(placements.id)),
     db.select().from(bores).where(inArray(bores.panelId, panelIds)).orderBy(asc(bores.id)),
+    db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, markedBy)),
   ]);
-  return { job, carcasses: carcassRows, panels: panelRows, placements: placementRows, bores: boreRows };
+  return {
+    job,
+    carcasses: carcassRows,
+    panels: panelRows,
+    placements: placementRows,
+    bores: boreRows,
+    people: new Map(people.map((p) => [p.id, p.name])),
+  };
 }
 
 /** Stores a whole job; call inside a transaction so a failure leaves nothing behind. Returns the job's id. */

@@ -1,8 +1,8 @@
-import { and, asc, eq, sql } from 'drizzle-orm';
+import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
 import type { PanelRecord } from '../../shared/api/contract';
 import type { Database } from '../db/client';
 import { toPanelRecord, type BoreDraft, type PanelDraft, type PanelRow, type PlacementDraft } from '../db/job-mapping';
-import { bores, carcasses, panels, placements } from '../db/schema';
+import { bores, carcasses, panels, placements, users } from '../db/schema';
 
 /** The panel's row, without its drilling. */
 export async function findPanel(db: Database, id: number): Promise<PanelRow | undefined> {
@@ -18,16 +18,17 @@ export function jobPanelRefs(db: Database, jobId: number) {
 /** The panel as the API returns it; undefined when there is no such panel. */
 export async function loadPanelRecord(db: Database, id: number): Promise<PanelRecord | undefined> {
   const [found] = await db
-    .select({ panel: panels, carcassKey: carcasses.key })
+    .select({ panel: panels, carcassKey: carcasses.key, statusBy: users.name })
     .from(panels)
     .leftJoin(carcasses, eq(carcasses.id, panels.carcassId))
+    .leftJoin(users, eq(users.id, panels.statusBy))
     .where(eq(panels.id, id));
   if (!found) return undefined;
   const [placementRows, boreRows] = await Promise.all([
     db.select().from(placements).where(eq(placements.panelId, id)).orderBy(asc(placements.id)),
     db.select().from(bores).where(eq(bores.panelId, id)).orderBy(asc(bores.id)),
   ]);
-  return toPanelRecord(found.panel, found.carcassKey ?? undefined, placementRows, boreRows);
+  return toPanelRecord(found.panel, found.carcassKey ?? undefined, placementRows, boreRows, found.statusBy);
 }
 
 /** Adds a panel row; returns its database id. */
@@ -36,16 +37,14 @@ export async function insertPanel(db: Database, row: PanelDraft & { jobId: numbe
   return id;
 }
 
+/** What a change may set on a panel's row; `statusAt` takes SQL so that it can be the database's now(). */
+export type PanelChanges = Partial<PanelDraft & { carcassId: number | null; statusBy: number | null; statusAt: Date | SQL | null }>;
+
 /**
  * Applies the changes and bumps the version, but only while the panel is still at `version`.
  * Returns the new row, or undefined when someone else got there first.
  */
-export async function updatePanelAtVersion(
-  db: Database,
-  id: number,
-  version: number,
-  changes: Partial<PanelDraft & { carcassId: number | null }>,
-): Promise<PanelRow | undefined> {
+export async function updatePanelAtVersion(db: Database, id: number, version: number, changes: PanelChanges): Promise<PanelRow | undefined> {
   const [row] = await db
     .update(panels)
     .set({ ...changes, version: sql`${panels.version} + 1`, updatedAt: sql`now()` })

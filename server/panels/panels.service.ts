@@ -1,15 +1,17 @@
+import { sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import type { PanelRecord, User, panelDrillingBody, panelFieldsBody, panelStatusBody, panelUpdateBody } from '../../shared/api/contract';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
-import { boreDraft, placementDraft, type PanelDraft, type PanelRow } from '../db/job-mapping';
+import type { PanelStatus } from '../../shared/model/job-document';
+import { statusStep } from '../../shared/model/panel-status';
+import { boreDraft, placementDraft, type PanelRow } from '../db/job-mapping';
 import { AppError, invalidField, notFound } from '../http/app-error';
 import { nextDocumentId } from '../jobs/document-ids';
 import { carcassKeys, findJob, touchJob } from '../jobs/jobs.repository';
 import * as repo from './panels.repository';
 
 type BoardFields = Partial<z.output<typeof panelFieldsBody>>;
-type PanelChanges = Partial<PanelDraft & { carcassId: number | null }>;
 
 function stale(current?: number): AppError {
   const now = current === undefined ? '' : ` (it is now at version ${current})`;
@@ -22,7 +24,7 @@ function stale(current?: number): AppError {
 }
 
 /** Checks board fields against the job (its materials and carcasses) and turns them into column changes. */
-async function boardChanges(tx: Database, jobId: number, fields: BoardFields): Promise<PanelChanges> {
+async function boardChanges(tx: Database, jobId: number, fields: BoardFields): Promise<repo.PanelChanges> {
   const job = await findJob(tx, jobId);
   if (!job) throw notFound(`Job ${jobId}`);
   const { carcass, ...columns } = fields;
@@ -79,7 +81,7 @@ async function changePanel(
   panelId: number,
   version: number,
   action: string,
-  apply: (tx: Database, current: PanelRow) => Promise<{ changes?: PanelChanges; details: Record<string, unknown> }>,
+  apply: (tx: Database, current: PanelRow) => Promise<{ changes?: repo.PanelChanges; details: Record<string, unknown> }>,
 ): Promise<PanelRecord> {
   return db.transaction(async (tx) => {
     const current = await repo.findPanel(tx, panelId);
@@ -116,12 +118,29 @@ export function saveDrilling(db: Database, actor: User, panelId: number, body: z
   });
 }
 
-/** Marks a panel planned, drilled or checked, at the version the client saw. */
+/**
+ * Marks a panel planned, drilled or checked, at the version the client saw, by the rule of
+ * shared/model/panel-status.ts: forward one step at a time, back any number. The panel keeps who marked
+ * its current status and when; going back to planned clears both, as a planned panel has no mark. Going
+ * back to drilled records the member who went back, then: the activity log keeps the earlier marks.
+ */
 export function setPanelStatus(db: Database, actor: User, panelId: number, body: z.output<typeof panelStatusBody>): Promise<PanelRecord> {
-  return changePanel(db, actor, panelId, body.version, 'panel.status-changed', async (_tx, current) => ({
-    changes: { status: body.status },
-    details: { from: current.status, to: body.status },
-  }));
+  return changePanel(db, actor, panelId, body.version, 'panel.status-changed', async (_tx, current) => {
+    const step = statusStep(current.status, body.status);
+    if (!step.ok) throw statusRefused(current, body.status, step.reason);
+    const planned = body.status === 'planned';
+    return {
+      changes: { status: body.status, statusBy: planned ? null : actor.id, statusAt: planned ? null : sql`now()` },
+      details: { from: current.status, to: body.status, direction: step.direction },
+    };
+  });
+}
+
+function statusRefused(panel: PanelRow, to: PanelStatus, reason: 'unchanged' | 'skips-a-step'): AppError {
+  const fields = { status: reason === 'unchanged' ? `is already "${to}"` : `cannot follow "${panel.status}"` };
+  return reason === 'unchanged'
+    ? new AppError(409, 'status-unchanged', `“${panel.name}” is already marked ${to}: reload to see who marked it.`, { fields })
+    : new AppError(409, 'status-order', `“${panel.name}” is ${panel.status}: a panel is checked only after it is drilled, so mark it drilled first.`, { fields });
 }
 
 /** Deletes a panel at the version the client saw; refused while a door or flap hangs on it. */

@@ -75,11 +75,54 @@ describe('panels', () => {
     expect(duplicate.body.error.fields).toEqual({ 'bores[1].id': 'duplicate id "b-1"' });
   });
 
-  it('lets the bench mark a panel drilled, then checked', async () => {
-    expect((await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'drilled' }).expect(200)).body).toMatchObject({ status: 'drilled', version: 2 });
-    expect((await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 2, status: 'checked' }).expect(200)).body.status).toBe('checked');
+  it('lets the bench mark a panel drilled, then checked, saying who and when', async () => {
+    expect(panel).toMatchObject({ statusBy: null, statusAt: null });
+    const drilled = (await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'drilled' }).expect(200)).body;
+    expect(drilled).toMatchObject({ status: 'drilled', version: 2, statusBy: 'Ada Keel', statusAt: expect.any(String) });
+    expect(panelRecord.parse(drilled)).toEqual(drilled);
+    expect(Math.abs(Date.parse(drilled.statusAt) - Date.now())).toBeLessThan(60_000);
+    const checked = (await designer.patch(`/api/panels/${panel.dbId}/status`).send({ version: 2, status: 'checked' }).expect(200)).body;
+    expect(checked).toMatchObject({ status: 'checked', statusBy: 'Tomas Ward' });
     const unknown = await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 3, status: 'painted' }).expect(400);
     expect(Object.keys(unknown.body.error.fields)).toEqual(['status']);
+    // The job page reads the same names through the job's detail.
+    const detail = await bench.get(`/api/jobs/${jobId}`).expect(200);
+    expect(detail.body.panels.find((p: PanelRecord) => p.dbId === panel.dbId)).toMatchObject({ status: 'checked', statusBy: 'Tomas Ward', statusAt: checked.statusAt });
+  });
+
+  it('refuses to check a panel that is not drilled, or to mark a status it already has, with 409', async () => {
+    const skipped = await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'checked' }).expect(409);
+    expect(skipped.body.error).toMatchObject({
+      code: 'status-order',
+      message: '“Left side” is planned: a panel is checked only after it is drilled, so mark it drilled first.',
+      fields: { status: 'cannot follow "planned"' },
+    });
+    const same = await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'planned' }).expect(409);
+    expect(same.body.error).toMatchObject({ code: 'status-unchanged', fields: { status: 'is already "planned"' } });
+    // Neither refusal changed the panel.
+    await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version: 1, status: 'drilled' }).expect(200);
+  });
+
+  it('goes back a step or two, clearing who and when at planned, and logs each mark with its direction', async () => {
+    const at = async (version: number, status: string) => (await bench.patch(`/api/panels/${panel.dbId}/status`).send({ version, status }).expect(200)).body;
+    await at(1, 'drilled');
+    await at(2, 'checked');
+    expect(await at(3, 'drilled')).toMatchObject({ status: 'drilled', statusBy: 'Ada Keel', statusAt: expect.any(String) });
+    await at(4, 'checked');
+    expect(await at(5, 'planned')).toMatchObject({ status: 'planned', statusBy: null, statusAt: null, version: 6 });
+    const owner = await signedIn(t.app, 'owner@greyfield.example');
+    const { entries } = (await owner.get(`/api/activity?jobId=${jobId}`).expect(200)).body;
+    const marks = entries
+      .filter((e: { panelId: number; action: string }) => e.panelId === panel.dbId && e.action === 'panel.status-changed')
+      .reverse()
+      .map((e: { details: object; user: { name: string } }) => ({ ...e.details, by: e.user.name }));
+    expect(marks).toEqual([
+      { panel: panel.id, from: 'planned', to: 'drilled', direction: 'forward', by: 'Ada Keel' },
+      { panel: panel.id, from: 'drilled', to: 'checked', direction: 'forward', by: 'Ada Keel' },
+      { panel: panel.id, from: 'checked', to: 'drilled', direction: 'back', by: 'Ada Keel' },
+      { panel: panel.id, from: 'drilled', to: 'checked', direction: 'forward', by: 'Ada Keel' },
+      { panel: panel.id, from: 'checked', to: 'planned', direction: 'back', by: 'Ada Keel' },
+    ]);
   });
 
   it('deletes a panel at its version, with its drilling', async () => {

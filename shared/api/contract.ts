@@ -82,6 +82,12 @@ export const panelRecord = panel.extend({
   dbId: z.number().int(),
   version: z.number().int(),
   updatedAt: z.string(),
+  /**
+   * Who marked the panel its current status and when (ISO 8601). Both null while it is planned; the name
+   * is null too when the status came with an imported document or its member has since been removed.
+   */
+  statusBy: z.string().nullable(),
+  statusAt: z.string().nullable(),
 });
 export type PanelRecord = z.output<typeof panelRecord>;
 

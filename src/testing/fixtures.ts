@@ -35,6 +35,8 @@ export function aPanel(changes: Partial<PanelRecord> = {}): PanelRecord {
     thickness: 18,
     material: 'pb18',
     status: 'planned',
+    statusBy: null,
+    statusAt: null,
     placements: [],
     bores: [],
     ...changes,

@@ -49,7 +49,10 @@ export function describeError(error: unknown): string {
   return 'Something went wrong. Try again.';
 }
 
-/** True when the API refused a change because someone else saved the same record first. */
+/**
+ * True when the API refused a change because someone else saved the same record first; not for the other
+ * 409s (a panel a door hangs on, a status step out of order), whose messages say what to do instead.
+ */
 export function isStaleVersion(error: unknown): boolean {
-  return error instanceof ApiProblem && error.status === 409;
+  return error instanceof ApiProblem && error.status === 409 && error.code === 'stale-version';
 }

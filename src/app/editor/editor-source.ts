@@ -9,7 +9,7 @@ import { describeError } from '../core/api-problem';
 import { jobDocumentUrl, jobUrl } from '../jobs/jobs-api';
 
 /** A panel record without what only the database knows. */
-export function panelOf({ dbId: _dbId, version: _version, updatedAt: _updatedAt, ...panel }: PanelRecord): Panel {
+export function panelOf({ dbId: _dbId, version: _version, updatedAt: _updatedAt, statusBy: _statusBy, statusAt: _statusAt, ...panel }: PanelRecord): Panel {
   return panel;
 }
 
