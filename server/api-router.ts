@@ -11,6 +11,7 @@ import { AppError } from './http/app-error';
 import { healthRoutes } from './http/health.routes';
 import type { RouteContext } from './http/route-context';
 import { jobsRoutes } from './jobs/jobs.routes';
+import { labelsRoutes } from './labels/labels.routes';
 import { mailRoutes } from './mail/outbox.routes';
 import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
@@ -46,7 +47,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, cutListRoutes, attachmentsRoutes, swapRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

@@ -7,6 +7,7 @@ import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
 import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
+import { BENCH_ROUTES } from './role-matrix.bench';
 import { SWAP_ROUTES } from './role-matrix.swap';
 import { TEAM_ROUTES } from './role-matrix.team';
 import { UPLOADS_ROUTES } from './role-matrix.uploads';
@@ -93,6 +94,7 @@ const ROUTES: Record<string, Row> = {
   ...TEAM_ROUTES,
   ...UPLOADS_ROUTES,
   ...SWAP_ROUTES,
+  ...BENCH_ROUTES,
 };
 
 describe('role matrix', () => {
