@@ -9,10 +9,12 @@ import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { PanelRecord } from '../../../shared/api/contract';
+import { labelsPath } from '../../../shared/api/label-contract';
 import { Can } from '../auth/can';
 import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
+import { PanelProgress } from '../ui/panel-progress';
 import { CutListImport } from './cut-list-import';
 import { JobAttachments } from './job-attachments';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
@@ -26,7 +28,7 @@ const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 /** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, MatButtonModule, MatIconModule, MatProgressBarModule, PanelTable, RouterLink],
+  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
   providers: [JobStore],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',
@@ -38,6 +40,7 @@ export class JobPage {
   protected readonly store = inject(JobStore);
 
   protected readonly documentUrl = jobDocumentUrl;
+  protected readonly labelsUrl = (jobId: number) => labelsPath(jobId);
 
   constructor() {
     effect(() => {

@@ -1,3 +1,4 @@
+import { DatePipe } from '@angular/common';
 import { Component, computed, effect, inject, input, output, signal, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -10,6 +11,7 @@ import { MatTooltipModule } from '@angular/material/tooltip';
 import { RouterLink } from '@angular/router';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/model/job-document';
+import { statusStep } from '../../../shared/model/panel-status';
 import { AuthStore } from '../auth/auth-store';
 import { PanelDownloads } from '../packs/panel-downloads';
 import { roleLabels, statusLabels } from './panel-labels';
@@ -35,6 +37,7 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status', 'f
 @Component({
   selector: 'bw-panel-table',
   imports: [
+    DatePipe,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
@@ -91,6 +94,11 @@ export class PanelTable {
     effect(() => (this.rows.data = this.panelRows()));
     effect(() => (this.rows.sort = this.sort() ?? null));
     effect(() => (this.rows.filter = this.filter().trim().toLowerCase()));
+  }
+
+  /** The statuses a panel may go to from its own (shared/model/panel-status.ts); its own stays listed. */
+  protected canSet(from: PanelStatus, to: PanelStatus): boolean {
+    return from === to || statusStep(from, to).ok;
   }
 }
 

@@ -1,0 +1,130 @@
+import { provideHttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import { RouterTestingHarness } from '@angular/router/testing';
+import { PanelRecord, Role } from '../../../shared/api/contract';
+import { accessibleName, aJobDetail, aJobSummary, aPanel, buttonNamed, settle, signInAs } from '../../testing/fixtures';
+import { errorInterceptor } from '../core/error-interceptor';
+import { BenchPage } from './bench-page';
+
+describe('BenchPage', () => {
+  let http: HttpTestingController;
+  let harness: RouterTestingHarness;
+  let page: HTMLElement;
+
+  const side = aPanel();
+  const door = aPanel({ dbId: 102, id: 'b1-door', name: 'Door', role: 'door', material: 'mdf19', status: 'drilled', statusBy: 'Ada Keel', statusAt: '2026-12-01T10:02:00.000Z' });
+  const loose = aPanel({ dbId: 103, id: 'shelf', name: 'Loose shelf', role: 'shelf', carcass: undefined });
+  const findings = {
+    errors: 1,
+    warnings: 0,
+    notes: 0,
+    findings: [{ code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: side.id, bores: [], placements: [] }],
+  };
+
+  async function openAs(role: Role, url: string): Promise<void> {
+    TestBed.configureTestingModule({
+      providers: [provideRouter([{ path: 'bench', component: BenchPage }]), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting()],
+    });
+    http = TestBed.inject(HttpTestingController);
+    await signInAs(role);
+    harness = await RouterTestingHarness.create();
+    await harness.navigateByUrl(url);
+    await settle();
+    TestBed.tick();
+    http.expectOne((r) => r.url === '/api/jobs').flush({ jobs: [aJobSummary()] });
+    http.expectOne('/api/jobs/11').flush(aJobDetail([side, door, loose]));
+    http.expectOne('/api/jobs/11/findings').flush(findings);
+    await stable();
+    page = harness.routeNativeElement!;
+  }
+
+  async function stable(): Promise<void> {
+    await settle();
+    TestBed.tick();
+    await harness.fixture.whenStable();
+  }
+
+  const cardNames = () => [...page.querySelectorAll('bw-bench-panel-card .name')].map((n) => n.textContent!.trim());
+  const progress = () => page.querySelector('bw-panel-progress .bar')!.getAttribute('aria-label');
+  const saved = (panel: PanelRecord, changes: Partial<PanelRecord>) => ({ ...panel, version: panel.version + 1, ...changes });
+
+  afterEach(() => http.verify());
+
+  it('shows the drilling caution, the panels of the chosen carcass still to drill, their findings, progress and labels', async () => {
+    await openAs('bench', '/bench?job=11&carcass=b1');
+
+    expect(page.querySelector('[role="note"]')!.textContent).toContain('check the 100 mm bar on every page before drilling');
+    expect(cardNames()).toEqual(['Left side']);
+    expect(page.textContent).toContain('1 error');
+    expect(page.textContent).toContain('Face A up (inside face)');
+    expect(progress()).toBe('Panels of Base 600: 0 of 2 checked, 1 drilled and waiting to be checked, 1 still to drill.');
+    expect(page.querySelector<HTMLAnchorElement>('a.labels')!.getAttribute('href')).toBe('/api/jobs/11/labels.pdf?carcass=b1');
+  });
+
+  it('lists drilled and checked panels too when asked, saying who marked them', async () => {
+    await openAs('bench', '/bench?job=11&carcass=b1&done=show');
+
+    expect(cardNames()).toEqual(['Left side', 'Door']);
+    expect(page.textContent).toContain('Drilled by Ada Keel');
+  });
+
+  it('marks a panel drilled, keeps it listed, and undoes the mark', async () => {
+    await openAs('bench', '/bench?job=11');
+    expect(cardNames()).toEqual(['Left side', 'Loose shelf']);
+    expect(buttonNamed('Checked: Left side')!.disabled).toBe(true);
+
+    buttonNamed('Drilled: Left side')!.click();
+    const mark = http.expectOne({ method: 'PATCH', url: '/api/panels/101/status' });
+    expect(mark.request.body).toEqual({ status: 'drilled', version: 4 });
+    const drilled = saved(side, { status: 'drilled', statusBy: 'Ada Keel', statusAt: '2026-12-02T08:00:00.000Z' });
+    mark.flush(drilled);
+    await stable();
+
+    expect(cardNames()).toEqual(['Left side', 'Loose shelf']);
+    expect(page.textContent).toContain('Drilled by Ada Keel');
+    expect(buttonNamed('Checked: Left side')!.disabled).toBe(false);
+    expect(buttonNamed('Drilled: Left side')!.getAttribute('aria-pressed')).toBe('true');
+    expect(page.querySelector('.undo-bar')!.textContent).toContain('Marked “Left side” drilled.');
+    expect(progress()).toContain('0 of 3 checked, 2 drilled');
+
+    buttonNamed('Undo')!.click();
+    const undo = http.expectOne({ method: 'PATCH', url: '/api/panels/101/status' });
+    expect(undo.request.body).toEqual({ status: 'planned', version: 5 });
+    undo.flush(saved(drilled, { status: 'planned', statusBy: null, statusAt: null }));
+    await stable();
+
+    expect(page.querySelector('.undo-bar')).toBeNull();
+    expect(page.textContent).toContain('Not drilled yet');
+    expect(progress()).toContain('0 of 3 checked, 1 drilled');
+  });
+
+  it('says why a mark was refused and shows the panel as it is now', async () => {
+    await openAs('bench', '/bench?job=11');
+
+    buttonNamed('Drilled: Left side')!.click();
+    http
+      .expectOne({ method: 'PATCH', url: '/api/panels/101/status' })
+      .flush({ error: { code: 'stale-version', message: 'Someone else changed this panel since you loaded it.' } }, { status: 409, statusText: 'Conflict' });
+    await settle();
+    TestBed.tick();
+    // The page asks for the job again, to show the panel as someone else marked it.
+    http.expectOne('/api/jobs/11').flush(aJobDetail([saved(side, { status: 'drilled', statusBy: 'Tomas Ward', statusAt: '2026-12-02T08:00:00.000Z' }), door, loose]));
+    await stable();
+
+    expect(page.querySelector('[role="alert"]')!.textContent).toContain('“Left side” was not marked: Someone else changed this panel since you loaded it.');
+    expect(page.textContent).toContain('Drilled by Tomas Ward');
+    expect(page.querySelector('.undo-bar')).toBeNull();
+  });
+
+  it('opens one panel with its drilling map, as its label’s QR code asks', async () => {
+    await openAs('viewer', '/bench?job=11&panel=102');
+
+    expect(cardNames()).toEqual(['Door']);
+    expect([...page.querySelectorAll('img')].map((i) => i.getAttribute('src'))).toEqual(['/api/panels/102/drilling-map.svg?face=A']);
+    expect(page.querySelector<HTMLAnchorElement>('a.labels')!.getAttribute('href')).toBe('/api/jobs/11/labels.pdf?panels=102');
+    // A viewer reads; only the roles that mark panels get the buttons.
+    expect([...page.querySelectorAll('button')].map(accessibleName).filter((n) => /^(Drilled|Checked):/.test(n))).toEqual([]);
+  });
+});

@@ -1,0 +1,69 @@
+import { Component, computed, effect, inject } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { MatSelectModule } from '@angular/material/select';
+import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { Title } from '@angular/platform-browser';
+import { CAUTION_DEFERRAL, CAUTIONS } from '../../../shared/export/cautions';
+import { AuthStore } from '../auth/auth-store';
+import { statusLabels } from '../jobs/panel-labels';
+import { PanelProgress } from '../ui/panel-progress';
+import { BenchPanelCard } from './bench-panel-card';
+import { BenchStore } from './bench-store';
+
+/**
+ * The bench (design.md §6): pick a job, see its panels still to drill, by carcass and material, with
+ * their files, and mark each drilled, then checked; the last marks can be undone.
+ */
+@Component({
+  selector: 'bw-bench-page',
+  imports: [
+    BenchPanelCard,
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MatSelectModule,
+    MatSlideToggleModule,
+    PanelProgress,
+  ],
+  providers: [BenchStore],
+  templateUrl: './bench-page.html',
+  styleUrl: './bench-page.scss',
+})
+export class BenchPage {
+  private readonly auth = inject(AuthStore);
+  private readonly title = inject(Title);
+  protected readonly store = inject(BenchStore);
+
+  /** Drilling from printed templates (design.md §8), with what every caution defers to. */
+  protected readonly caution = `${CAUTIONS.drilling} ${CAUTION_DEFERRAL}`;
+  protected readonly statusLabels = statusLabels;
+  protected readonly canMark = computed(() => this.auth.can('markPanels'));
+  protected readonly carcassNames = computed(() => new Map(this.store.carcasses().map((c) => [c.id, c.name])));
+  protected readonly materialNames = computed(() => new Map(this.store.materials().map((m) => [m.id, m.name])));
+  /** What the progress counts, in words. */
+  protected readonly selectionName = computed(() => {
+    const carcass = this.store.carcass();
+    const material = this.store.material();
+    const parts = [carcass !== undefined && (this.carcassNames().get(carcass) ?? carcass), material !== undefined && (this.materialNames().get(material) ?? material)];
+    return parts.filter(Boolean).join(', ') || 'this job';
+  });
+
+  constructor() {
+    effect(() => {
+      const job = this.store.job();
+      this.title.setTitle(job ? `Bench: ${job.name} · Borewright` : 'Bench · Borewright');
+    });
+  }
+
+  protected carcassOf(carcass: string | undefined): string {
+    return carcass === undefined ? 'No carcass' : (this.carcassNames().get(carcass) ?? carcass);
+  }
+
+  protected materialOf(material: string): string {
+    return this.materialNames().get(material) ?? material;
+  }
+}

@@ -1,0 +1,199 @@
+import { httpResource } from '@angular/common/http';
+import { computed, inject, Injectable, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { ActivatedRoute, Params, Router } from '@angular/router';
+import { jobDetail, jobList, PanelRecord } from '../../../shared/api/contract';
+import { labelsPath } from '../../../shared/api/label-contract';
+import { jobFindings } from '../../../shared/api/pack-contract';
+import { PanelStatus } from '../../../shared/model/job-document';
+import { carcassOrder } from '../../../shared/model/panel-order';
+import { ApiProblem, describeError } from '../core/api-problem';
+import { JobsApi, jobsUrl, jobUrl } from '../jobs/jobs-api';
+import { jobFindingsUrl } from '../packs/pack-api';
+
+/** A mark made on this page, kept so that it can be undone. */
+export interface BenchMark {
+  jobId: number;
+  panelDbId: number;
+  name: string;
+  from: PanelStatus;
+  to: PanelStatus;
+}
+
+/** The findings of the checks on one panel, by severity. */
+export interface PanelFindings {
+  errors: number;
+  warnings: number;
+  notes: number;
+}
+
+/** What the bench page's address holds, so that a reload (or a label's QR code) opens the same view. */
+export interface BenchView {
+  job?: number | null;
+  carcass?: string | null;
+  material?: string | null;
+  /** `show` lists drilled and checked panels too. */
+  done?: 'show' | null;
+  /** One panel alone, as a label's QR code opens it. */
+  panel?: number | null;
+}
+
+const positive = (value: string | null) => (value !== null && /^[1-9][0-9]{0,9}$/.test(value) ? Number(value) : undefined);
+
+/**
+ * The bench page: which job and which of its panels are shown (all in the address), the panels with their
+ * findings, and marking them drilled or checked with an undo of the marks made here.
+ */
+@Injectable()
+export class BenchStore {
+  private readonly api = inject(JobsApi);
+  private readonly router = inject(Router);
+  private readonly route = inject(ActivatedRoute);
+  private readonly query = toSignal(this.route.queryParamMap, { requireSync: true });
+
+  readonly jobId = computed(() => positive(this.query().get('job')));
+  readonly carcass = computed(() => this.query().get('carcass') ?? undefined);
+  readonly material = computed(() => this.query().get('material') ?? undefined);
+  readonly showDone = computed(() => this.query().get('done') === 'show');
+  readonly focus = computed(() => positive(this.query().get('panel')));
+
+  private readonly jobList = httpResource(() => ({ url: jobsUrl, params: { archived: false } }), { parse: (raw) => jobList.parse(raw).jobs });
+  private readonly detail = httpResource(
+    () => {
+      const id = this.jobId();
+      return id === undefined ? undefined : jobUrl(id);
+    },
+    { parse: (raw) => jobDetail.parse(raw) },
+  );
+  private readonly findingList = httpResource(
+    () => {
+      const id = this.jobId();
+      return id === undefined ? undefined : jobFindingsUrl(id);
+    },
+    { parse: (raw) => jobFindings.parse(raw).findings },
+  );
+  private readonly loaded = computed(() => (this.detail.hasValue() ? this.detail.value() : undefined));
+
+  private readonly marks = signal<BenchMark[]>([]);
+  /** Panels marked on this page stay listed until the view changes, so a row never jumps away under a finger. */
+  private readonly touched = signal<ReadonlySet<number>>(new Set());
+  private readonly savingIds = signal<ReadonlySet<number>>(new Set());
+
+  readonly jobs = computed(() => (this.jobList.hasValue() ? this.jobList.value() : []));
+  readonly jobsLoading = this.jobList.isLoading;
+  readonly job = computed(() => this.loaded()?.job);
+  readonly loading = this.detail.isLoading;
+  readonly loadError = computed(() => {
+    const error = this.detail.error() ?? this.jobList.error();
+    return error === undefined ? null : describeError(error);
+  });
+  readonly carcasses = computed(() => this.loaded()?.carcasses ?? []);
+  /** The job's materials that its panels use. */
+  readonly materials = computed(() => {
+    const used = new Set(this.panels().map((p) => p.material));
+    return (this.loaded()?.materials ?? []).filter((m) => used.has(m.id));
+  });
+  /** Every panel of the job, carcass by carcass. */
+  readonly panels = computed(() => carcassOrder(this.carcasses(), this.loaded()?.panels ?? []));
+  /** The panels of the chosen carcass and material, whatever their status: what the progress counts. */
+  readonly selection = computed(() => {
+    const carcass = this.carcass();
+    const material = this.material();
+    return this.panels().filter((p) => (carcass === undefined || p.carcass === carcass) && (material === undefined || p.material === material));
+  });
+  /** The panels listed: those still to drill (or all), those marked here, or the one a label opened. */
+  readonly listed = computed(() => {
+    const focus = this.focus();
+    if (focus !== undefined) return this.panels().filter((p) => p.dbId === focus);
+    const touched = this.touched();
+    return this.selection().filter((p) => this.showDone() || p.status === 'planned' || touched.has(p.dbId));
+  });
+  readonly findings = computed(() => {
+    const byPanel = new Map<string, PanelFindings>();
+    for (const f of this.findingList.hasValue() ? this.findingList.value() : []) {
+      const counts = byPanel.get(f.panel) ?? { errors: 0, warnings: 0, notes: 0 };
+      counts[f.severity === 'error' ? 'errors' : f.severity === 'warning' ? 'warnings' : 'notes']++;
+      byPanel.set(f.panel, counts);
+    }
+    return byPanel;
+  });
+  /** The last mark made here on this job, which Undo takes back. */
+  readonly lastMark = computed(() => this.marks().filter((m) => m.jobId === this.jobId()).at(-1));
+  readonly problem = signal<string | null>(null);
+  /** The label sheets of what is shown: the one panel, the chosen carcass, or the panels of the chosen material. */
+  readonly labelsUrl = computed(() => {
+    const jobId = this.jobId();
+    if (jobId === undefined || this.selection().length === 0) return undefined;
+    const focus = this.focus();
+    if (focus !== undefined) return labelsPath(jobId, { panels: [focus] });
+    if (this.material() !== undefined) return labelsPath(jobId, { panels: this.selection().map((p) => p.dbId) });
+    return labelsPath(jobId, { carcass: this.carcass() });
+  });
+
+  isSaving(panel: PanelRecord): boolean {
+    return this.savingIds().has(panel.dbId);
+  }
+
+  /** Changes what the page shows; the address keeps it, so a reload shows the same. */
+  show(view: BenchView): void {
+    // Another job starts unfiltered: its carcasses and materials are not this one's.
+    const changes: Params = view.job !== undefined ? { carcass: null, material: null, panel: null, ...view } : view;
+    this.touched.set(new Set());
+    this.problem.set(null);
+    void this.router.navigate([], { relativeTo: this.route, queryParams: changes, queryParamsHandling: 'merge', replaceUrl: true });
+  }
+
+  /** Marks a panel drilled or checked; the mark can be undone from this page. */
+  async mark(panel: PanelRecord, status: PanelStatus): Promise<void> {
+    const jobId = this.jobId();
+    if (jobId === undefined || !(await this.save(panel, status))) return;
+    this.marks.update((marks) => [...marks, { jobId, panelDbId: panel.dbId, name: panel.name, from: panel.status, to: status }]);
+  }
+
+  /** Takes back the last mark made here: the panel goes back to the status it had (the activity log keeps both). */
+  async undo(): Promise<void> {
+    const mark = this.lastMark();
+    if (!mark) return;
+    const forget = () => this.marks.update((marks) => marks.filter((m) => m !== mark));
+    const panel = this.panels().find((p) => p.dbId === mark.panelDbId);
+    if (panel?.status !== mark.to) {
+      // Someone marked it again since (or deleted it): undoing now would take back their mark too.
+      this.problem.set(`Nothing undone: “${mark.name}” is no longer as this page marked it.`);
+      forget();
+      return;
+    }
+    if (await this.save(panel, mark.from)) forget();
+  }
+
+  reload(): void {
+    this.problem.set(null);
+    this.detail.reload();
+    this.findingList.reload();
+  }
+
+  private async save(panel: PanelRecord, status: PanelStatus): Promise<boolean> {
+    this.savingIds.update((ids) => new Set(ids).add(panel.dbId));
+    this.problem.set(null);
+    try {
+      const saved = await this.api.setPanelStatus(panel, status);
+      this.detail.update((detail) => detail && { ...detail, panels: detail.panels.map((p) => (p.dbId === saved.dbId ? saved : p)) });
+      this.touched.update((ids) => new Set(ids).add(saved.dbId));
+      return true;
+    } catch (error) {
+      // A 409 means the panel is not as this page shows it (someone else marked it): show what it is now.
+      const conflict = error instanceof ApiProblem && error.status === 409;
+      this.problem.set(conflict ? `“${panel.name}” was not marked: ${describeError(error)} The list now shows it as it is.` : describeError(error));
+      if (conflict) {
+        this.touched.update((ids) => new Set(ids).add(panel.dbId));
+        this.detail.reload();
+      }
+      return false;
+    } finally {
+      this.savingIds.update((ids) => {
+        const next = new Set(ids);
+        next.delete(panel.dbId);
+        return next;
+      });
+    }
+  }
+}
