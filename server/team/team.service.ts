@@ -11,9 +11,13 @@ import { invitationMail } from './team-mail';
 
 const toMember = ({ createdAt, ...member }: repo.MemberRow): TeamMember => ({ ...member, createdAt: createdAt.toISOString() });
 
-/** 409 naming the field, for an address that already has an account. */
-export function alreadyMember(email: string): AppError {
-  return new AppError(409, 'already-member', `${email} is already a member of the shop.`, { fields: { email: 'is already a member of the shop' } });
+/** 409 naming the field, for an address that already has an account; a deactivated one is switched back on instead. */
+export function alreadyMember(email: string, active = true): AppError {
+  return active
+    ? new AppError(409, 'already-member', `${email} is already a member of the shop.`, { fields: { email: 'is already a member of the shop' } })
+    : new AppError(409, 'already-member', `${email} belongs to a deactivated member. Switch them back on in the members list instead.`, {
+        fields: { email: 'belongs to a deactivated member: switch them back on instead' },
+      });
 }
 
 /** Everyone with an account, and the invitations not accepted yet, each marked expired or not by the app's clock. */
@@ -43,7 +47,8 @@ export async function inviteMember(context: RouteContext, actor: User, body: z.o
   const expiresAt = new Date(now.getTime() + context.config.mailLinks.invitationMs);
   const { token, tokenHash } = newMailToken();
   const row = await context.db.transaction(async (tx) => {
-    if (await repo.findMemberByEmail(tx, body.email)) throw alreadyMember(body.email);
+    const existing = await repo.findMemberByEmail(tx, body.email);
+    if (existing) throw alreadyMember(body.email, existing.active);
     await repo.deleteOpenTokensFor(tx, 'invite', body.email);
     return repo.insertMailToken(tx, { purpose: 'invite', tokenHash, email: body.email, role: body.role, userId: null, createdBy: actor.id, createdAt: now, expiresAt });
   });

@@ -140,6 +140,13 @@ describe('invitations', () => {
     const res = await owner.post('/api/team/invitations').send({ email: 'Designer@Greyfield.example', role: 'viewer' }).expect(409);
     expect(res.body.error).toMatchObject({ code: 'already-member', fields: { email: 'is already a member of the shop' } });
     expect(await mailsTo(t.database.db, 'designer@greyfield.example')).toEqual([]);
+
+    const { members } = teamAnswer.parse((await owner.get('/api/team').expect(200)).body);
+    const viewer = members.find((m) => m.email === 'viewer@greyfield.example')!;
+    await owner.patch(`/api/team/members/${viewer.id}`).send({ active: false }).expect(200);
+    const inactive = await owner.post('/api/team/invitations').send({ email: 'viewer@greyfield.example', role: 'viewer' }).expect(409);
+    expect(inactive.body.error.fields).toEqual({ email: 'belongs to a deactivated member: switch them back on instead' });
+    await owner.patch(`/api/team/members/${viewer.id}`).send({ active: true }).expect(200);
   });
 
   it('names the fields of a malformed invitation or acceptance, and keeps the link usable', async () => {
