@@ -25,8 +25,8 @@ import type { ApiProblem } from '../core/api-problem';
     </mat-dialog-content>
     <mat-dialog-actions align="end">
       <button mat-button [mat-dialog-close]="undefined" cdkFocusInitial>Cancel</button>
-      <button mat-stroked-button [mat-dialog-close]="'replace'">Replace them</button>
-      <button mat-flat-button [mat-dialog-close]="'keep'">Keep them as they are</button>
+      <button mat-stroked-button [mat-dialog-close]="'replace'">Replace with the new plan</button>
+      <button mat-flat-button [mat-dialog-close]="'keep'">Keep as changed</button>
     </mat-dialog-actions>
   `,
   styles: `
