@@ -6,6 +6,7 @@ import { csrfProtection } from './auth/csrf';
 import { createAuthenticator } from './auth/passport';
 import { sessionMiddleware } from './auth/sessions';
 import { sessionTimeouts } from './auth/session-timeouts';
+import { catalogRoutes } from './catalog/catalog.routes';
 import { cutListRoutes } from './cut-list/cut-list.routes';
 import { AppError } from './http/app-error';
 import { healthRoutes } from './http/health.routes';
@@ -47,7 +48,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, catalogRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

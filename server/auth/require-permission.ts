@@ -7,6 +7,7 @@ const needs: Record<Permission, string> = {
   editJobs: 'change jobs',
   markPanels: 'mark panels',
   manageTeam: 'manage the team',
+  manageCatalog: 'import or delete catalog fittings',
 };
 
 /** 401 when signed out, 403 when the user's role lacks the permission (design.md §1, `permissions` in contract.ts). */

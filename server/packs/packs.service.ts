@@ -1,5 +1,4 @@
 import type { JobFindings } from '../../shared/api/pack-contract';
-import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import { checkJob } from '../../shared/checks/index';
 import { panelDrillingMaps } from '../../shared/export/drilling-map';
 import type { ExportContext } from '../../shared/export/export-context';
@@ -12,6 +11,7 @@ import { panelDxf } from '../../shared/export/panel-dxf';
 import { drawingToSvg } from '../../shared/export/svg-render';
 import { templateSheetsPdf } from '../../shared/export/template-pdf';
 import type { Face } from '../../shared/model/job-document';
+import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument } from '../db/job-mapping';
 import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
@@ -27,14 +27,14 @@ export interface DownloadFile {
 }
 
 /**
- * The export context of a stored job: the job as a document, the built-in catalog, now, and each panel's
- * stored version for the title blocks.
+ * The export context of a stored job: the job as a document, the shop's catalog (the built-in fittings and
+ * the shop's own), now, and each panel's stored version for the title blocks.
  */
 async function jobContext(db: Database, jobId: number, date: Date): Promise<ExportContext> {
   const rows = await loadJobRows(db, jobId);
   if (!rows) throw notFound(`Job ${jobId}`);
   const versions = new Map(rows.panels.map((p) => [p.key, p.version]));
-  return { job: toJobDocument(rows), catalog: builtinCatalog(), date, generator: GENERATOR, panelVersion: (key) => versions.get(key) };
+  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key) };
 }
 
 /** One stored panel with its job's export context and its bores laid out. */

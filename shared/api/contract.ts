@@ -15,6 +15,8 @@ export const permissions = {
   editJobs: ['admin', 'designer'],
   markPanels: ['admin', 'designer', 'bench'],
   manageTeam: ['admin'],
+  /** Import a shop's own fittings into the catalog and delete them (design.md §1: the admin does catalog imports). */
+  manageCatalog: ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof permissions;
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { parseFittingFile } from './parse-catalog';
+import { shopHinge } from '../testing/shop-fitting';
+import { parseFittingFile, parseFittingImport } from './parse-catalog';
 
 const pin = (id: string) => ({
   id,
@@ -58,5 +59,23 @@ describe('parseFittingFile', () => {
     const result = parseFittingFile({ fittings: [{ ...pin('a'), bores: [{ ...pin('a').bores[0], depth: 'deep' }] }] });
     expect(result.ok ? [] : result.errors).toEqual(['fittings[0].bores[0].depth: must be a depth in mm, "system" or "through"']);
     expect(parseFittingFile('nonsense').ok).toBe(false);
+  });
+});
+
+describe('parseFittingImport', () => {
+  it('takes one fitting, with paths led by its own fields', () => {
+    expect(parseFittingImport(shopHinge()).ok).toBe(true);
+    const result = parseFittingImport({ ...shopHinge(), bores: [] });
+    expect(result.ok ? [] : result.errors).toEqual(['bores: a fitting needs at least one bore', 'hinge.cupBore: no face bore with id "cup"']);
+  });
+
+  it('takes a catalog file, with paths led by its place in the file', () => {
+    const result = parseFittingImport({ fittings: [shopHinge('a'), { ...shopHinge('b'), onSystemRow: 'yes' }] });
+    expect(result.ok ? [] : result.errors).toEqual(['fittings[1].onSystemRow: Invalid input: expected boolean, received string']);
+  });
+
+  it('refuses what is neither an object nor a file', () => {
+    for (const input of [null, [shopHinge()], 'hinge'])
+      expect(parseFittingImport(input)).toEqual({ ok: false, errors: ['send one fitting as a JSON object, or a catalog file { "fittings": [...] }'] });
   });
 });

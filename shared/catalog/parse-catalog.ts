@@ -27,3 +27,17 @@ export function parseFittingFile(input: unknown): ParseResult<Fitting[]> {
 export function catalogOf(fittings: readonly Fitting[]): Catalog {
   return new Map(fittings.map((f) => [f.id, f]));
 }
+
+/**
+ * Reads what a shop imports: one fitting, or a catalog file `{ fittings: [...] }`. Problems are led by
+ * their path in what was sent (`bores[0].diameter` for one fitting, `fittings[2].bores[0].diameter` for
+ * a file). Never throws on bad input.
+ */
+export function parseFittingImport(input: unknown): ParseResult<Fitting[]> {
+  if (typeof input !== 'object' || input === null || Array.isArray(input)) {
+    return { ok: false, errors: ['send one fitting as a JSON object, or a catalog file { "fittings": [...] }'] };
+  }
+  if ('fittings' in input) return parseFittingFile(input);
+  const result = fitting.safeParse(input);
+  return result.success ? { ok: true, value: [result.data] } : { ok: false, errors: formatIssues(result.error) };
+}

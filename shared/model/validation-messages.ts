@@ -26,12 +26,15 @@ function flatten(issue: Issue, prefix: readonly PropertyKey[]): { path: Property
   return [{ path, message: issue.message }];
 }
 
+/** Every problem with its path as keys, for a form to put each beside its field. */
+export function listIssues(error: z.ZodError): { path: PropertyKey[]; message: string }[] {
+  return error.issues.flatMap((issue) => flatten(issue, []));
+}
+
 /** One line per problem, each led by the path of the value it concerns: `fittings[3].bores[1].diameter: must be greater than 0`. */
 export function formatIssues(error: z.ZodError): string[] {
-  return error.issues
-    .flatMap((issue) => flatten(issue, []))
-    .map(({ path, message }) => {
-      const where = formatPath(path);
-      return where === '' ? message : `${where}: ${message}`;
-    });
+  return listIssues(error).map(({ path, message }) => {
+    const where = formatPath(path);
+    return where === '' ? message : `${where}: ${message}`;
+  });
 }

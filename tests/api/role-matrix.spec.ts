@@ -7,6 +7,7 @@ import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
 import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
+import { CATALOG_ROUTES } from './role-matrix.catalog';
 import { BENCH_ROUTES } from './role-matrix.bench';
 import { SWAP_ROUTES } from './role-matrix.swap';
 import { TEAM_ROUTES } from './role-matrix.team';
@@ -91,6 +92,7 @@ const ROUTES: Record<string, Row> = {
   'GET /api/outbox': { request: (c) => c.get('/api/outbox'), expect: [401, 200, 403, 403, 403] },
   'GET /api/outbox/:id/attachments/:index': { request: (c) => c.get(`/api/outbox/${caughtMessageId}/attachments/0`), expect: [401, 200, 403, 403, 403] },
   'GET /api/mail/recipients': { request: (c) => c.get('/api/mail/recipients'), expect: [401, 200, 200, 403, 403] },
+  ...CATALOG_ROUTES,
   ...TEAM_ROUTES,
   ...UPLOADS_ROUTES,
   ...SWAP_ROUTES,
