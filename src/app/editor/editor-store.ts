@@ -1,5 +1,4 @@
 import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
-import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
 import { checkPanel } from '../../../shared/checks';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
@@ -15,6 +14,7 @@ import * as history from './document/history';
 import { isEmptySelection, NO_SELECTION, selectionOf, type Selection } from './document/selection';
 import { panelGrid, snapPlacement } from './document/snap-placement';
 import { AuthStore } from '../auth/auth-store';
+import { CatalogStore } from '../catalog/catalog-store';
 import { EditorSource } from './editor-source';
 
 type Command<P> = (panel: Panel, params: P) => Panel;
@@ -36,7 +36,8 @@ function checksWanted(): boolean {
 export class EditorStore {
   private readonly source = inject(EditorSource);
   private readonly auth = inject(AuthStore);
-  readonly catalog = builtinCatalog();
+  /** The shop's catalog (built-in fittings and the shop's own); the built-in one until it has loaded. */
+  readonly catalog = inject(CatalogStore).catalog;
 
   private readonly history = linkedSignal(() => {
     const panel = this.source.panel();
@@ -68,7 +69,7 @@ export class EditorStore {
   readonly layout = computed(() => {
     const job = this.source.job();
     const panel = this.panel();
-    return job && panel ? layoutPanel(panel, this.catalog, job.system) : undefined;
+    return job && panel ? layoutPanel(panel, this.catalog(), job.system) : undefined;
   });
   /** Equal by value, so that an edit that leaves the board alone does not redraw the rows. */
   readonly grid = computed(
@@ -82,7 +83,7 @@ export class EditorStore {
   readonly findings = computed(() => {
     const job = this.job();
     const panel = this.panel();
-    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog) : [];
+    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog()) : [];
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
@@ -111,7 +112,7 @@ export class EditorStore {
   placeFitting(fittingId: string, at: Point, free = false): void {
     const grid = this.grid();
     if (!grid) return;
-    const spot = snapPlacement(at, { rotation: 0, face: this.face() }, this.catalog.get(fittingId), { grid, step: this.step(), free });
+    const spot = snapPlacement(at, { rotation: 0, face: this.face() }, this.catalog().get(fittingId), { grid, step: this.step(), free });
     const before = new Set(this.panel()?.placements.map((p) => p.id));
     this.apply(addPlacement, { fitting: fittingId, x: spot.x, y: spot.y, face: this.face() });
     const added = this.panel()?.placements.find((p) => !before.has(p.id));
@@ -182,7 +183,7 @@ export class EditorStore {
     const lead = h.mark.placements.find((p) => p.id === leadId);
     const start = lead ?? { x: 0, y: 0, rotation: 0 as const, face: this.face() };
     const wanted = { x: start.x + travel.x, y: start.y + travel.y };
-    const spot = snapPlacement(wanted, start, lead && this.catalog.get(lead.fitting), { grid, step: this.step(), free: free || !lead });
+    const spot = snapPlacement(wanted, start, lead && this.catalog().get(lead.fitting), { grid, step: this.step(), free: free || !lead });
     const next = moveItems(h.mark, { selection: this.selection(), dx: spot.x - start.x, dy: spot.y - start.y });
     this.history.set(history.preview(h, next));
   }

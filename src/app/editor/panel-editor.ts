@@ -10,6 +10,7 @@ import { MatTooltipModule } from '@angular/material/tooltip';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
+import { CatalogStore } from '../catalog/catalog-store';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { NO_SELECTION } from './document/selection';
 import { editorAction, type EditorAction } from './editor-keys';
@@ -73,6 +74,8 @@ export class PanelEditor implements LeavesSafely {
   });
 
   constructor() {
+    // The shop's own fittings, so that a panel placing one draws and checks as its pack will.
+    inject(CatalogStore).load();
     const title = inject(Title);
     effect(() => {
       const panel = this.store.panel();

@@ -1,8 +1,8 @@
-import { Component, computed, input } from '@angular/core';
-import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
+import { Component, computed, inject, input } from '@angular/core';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { CarcassPlan } from '../../../shared/planner/plan-carcass';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
+import { CatalogStore } from '../catalog/catalog-store';
 
 interface Rect {
   x: number;
@@ -26,6 +26,7 @@ const GAP = 160;
 })
 export class CarcassDrawing {
   readonly plan = input.required<CarcassPlan>();
+  private readonly catalog = inject(CatalogStore).catalog;
 
   protected readonly styles = PURPOSE_STYLES;
   protected readonly legend = PURPOSE_ORDER.filter((p) => p !== 'loose').map((p) => PURPOSE_STYLES[p]);
@@ -65,7 +66,7 @@ export class CarcassDrawing {
       fronts.push({ x: r / 2, y: r / 2 + i * (drawer.height.value + r), w: drawer.width.value, h: drawer.height.value, kind: 'front' });
     }
     const left = panels.find((p) => p.role === 'side');
-    const bores = left ? layoutPanel(left, builtinCatalog(), input.system).bores.filter((b) => b.kind === 'face') : [];
+    const bores = left ? layoutPanel(left, this.catalog(), input.system).bores.filter((b) => b.kind === 'face') : [];
     const sectionX = W + GAP;
     return {
       viewBox: `-40 -40 ${W + GAP + Math.max(D, 480) + 80} ${H + kick + 110}`,

@@ -13,6 +13,7 @@ import { Router, RouterLink } from '@angular/router';
 import { map } from 'rxjs';
 import { Can } from '../auth/can';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
+import { CatalogStore } from '../catalog/catalog-store';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
@@ -53,6 +54,8 @@ export class CarcassPlanner {
   protected readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
 
   constructor() {
+    // The shop's own fittings, so that the plan shown is the plan the server stores.
+    inject(CatalogStore).load();
     effect(() => this.store.describe(toPlanInput(this.value())));
     // Planning a carcass again starts from the description it was planned from, once, when it arrives.
     effect(() => {

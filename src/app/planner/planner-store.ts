@@ -5,10 +5,10 @@ import { ActivatedRoute } from '@angular/router';
 import { firstValueFrom, map } from 'rxjs';
 import { jobDetail } from '../../../shared/api/contract';
 import { plannedCarcass, type PlannedCarcass } from '../../../shared/api/plan-contract';
-import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
 import { carcassPlanInput, type CarcassPlanInputData } from '../../../shared/planner/carcass-plan-input';
 import { planCarcass } from '../../../shared/planner/plan-carcass';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
+import { CatalogStore } from '../catalog/catalog-store';
 import { jobUrl } from '../jobs/jobs-api';
 
 /**
@@ -19,6 +19,8 @@ import { jobUrl } from '../jobs/jobs-api';
 @Injectable()
 export class PlannerStore {
   private readonly http = inject(HttpClient);
+  /** The shop's catalog, as the server plans with it: a shop's own hinge or lift mechanism can be chosen. */
+  private readonly catalog = inject(CatalogStore).catalog;
 
   private readonly route = inject(ActivatedRoute);
   readonly jobId = toSignal(this.route.paramMap.pipe(map((params) => Number(params.get('jobId')))), { initialValue: 0 });
@@ -41,7 +43,7 @@ export class PlannerStore {
     const input = this.description();
     const settings = this.settings();
     if (!input || !settings) return undefined;
-    return planCarcass({ ...input, materials: settings.materials, system: settings.system, limits: settings.limits }, builtinCatalog());
+    return planCarcass({ ...input, materials: settings.materials, system: settings.system, limits: settings.limits }, this.catalog());
   });
   readonly plan = computed(() => {
     const result = this.result();

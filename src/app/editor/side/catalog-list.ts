@@ -21,7 +21,7 @@ export class CatalogList {
   protected readonly styles = PURPOSE_STYLES;
   protected readonly fittings = computed(() => {
     const words = this.query().trim().toLowerCase().split(/\s+/).filter(Boolean);
-    return [...this.store.catalog.values()].filter((f) => {
+    return [...this.store.catalog().values()].filter((f) => {
       const text = `${f.name} ${PURPOSE_STYLES[f.purpose].label} ${f.id}`.toLowerCase();
       return words.every((w) => text.includes(w));
     });

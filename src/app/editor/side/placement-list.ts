@@ -14,7 +14,7 @@ export class PlacementList {
   protected readonly store = inject(EditorStore);
 
   protected describe(p: Placement): string {
-    const fitting = this.store.catalog.get(p.fitting);
+    const fitting = this.store.catalog().get(p.fitting);
     const name = fitting ? `${PURPOSE_STYLES[fitting.purpose].letter} · ${fitting.name}` : `missing fitting “${p.fitting}”`;
     return `${name} · x ${p.x}, y ${p.y}, face ${p.face}, ${p.rotation}°${p.mirrored ? ', mirrored' : ''}`;
   }

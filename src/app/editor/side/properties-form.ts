@@ -24,7 +24,7 @@ export class PropertiesForm {
   });
   protected readonly fitting = computed(() => {
     const p = this.placement();
-    return p && this.store.catalog.get(p.fitting);
+    return p && this.store.catalog().get(p.fitting);
   });
   protected readonly fields = computed(() => {
     const panel = this.store.panel();
