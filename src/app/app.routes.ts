@@ -29,6 +29,7 @@ export const routes: Routes = [
       { path: 'jobs', loadChildren: () => import('./jobs/jobs.routes') },
       { path: 'jobs/:jobId/panels/:panelId', loadChildren: () => import('./editor/editor.routes') },
       { path: 'outbox', loadChildren: () => import('./outbox/outbox.routes') },
+      { path: 'catalog', loadChildren: () => import('./catalog/catalog.routes') },
       { path: 'bench', loadChildren: () => import('./bench/bench.routes') },
       { path: 'team', loadChildren: () => import('./team/team.routes') },
       { path: 'jobs/:jobId/plan', loadChildren: () => import('./planner/planner.routes') },
