@@ -51,5 +51,7 @@ describe('loadConfig', () => {
       mailLinks: { invitationMs: 14 * 86_400_000, passwordResetMs: 3_600_000 },
     });
     expect(() => loadConfig({ PASSWORD_RESET_MINUTES: '1' })).toThrow('PASSWORD_RESET_MINUTES: must be between 5 and 1440');
+    expect(loadConfig({ PUBLIC_URL: 'https://borewright.shop.example/' }).publicUrl).toBe('https://borewright.shop.example');
+    expect(() => loadConfig({ PUBLIC_URL: 'borewright.shop.example' })).toThrow('PUBLIC_URL: must be a URL starting with http: or https:');
   });
 });

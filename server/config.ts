@@ -25,6 +25,8 @@ const environment = z
     SESSION_SECRET: z.string().min(32, 'must be at least 32 characters long').optional(),
     /** A real mail server; without it, mail goes to the local catcher an admin reads on the Outbox page. */
     SMTP_URL: url(['smtp:', 'smtps:']).optional(),
+    /** The address the shop opens Borewright at; the links in invitation and reset mails start with it. */
+    PUBLIC_URL: url(['http:', 'https:']).optional(),
     /** The address mail is sent from; a real mail server may insist on one of its own domain. */
     MAIL_FROM: z.string().trim().email('must be an e-mail address').default('borewright@localhost'),
     ALLOW_DEMO_IN_PRODUCTION: flag.default(false),
@@ -54,6 +56,8 @@ export type Config = {
   sessionSecret?: string;
   smtpUrl?: string;
   mailFrom: string;
+  /** PUBLIC_URL without a trailing slash: where the links in mail point (http/request-origin.ts). */
+  publicUrl?: string;
   /** A pack up to this size goes attached; a larger one as a link that expires. */
   packAttachLimitBytes: number;
   /** The largest photo or PDF a job attachment may be. */
@@ -93,6 +97,7 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     sessionSecret: env.SESSION_SECRET,
     smtpUrl: env.SMTP_URL,
     mailFrom: env.MAIL_FROM,
+    publicUrl: env.PUBLIC_URL?.replace(/\/+$/, ''),
     packAttachLimitBytes: 10 * 1024 * 1024,
     attachmentLimitBytes: 10 * 1024 * 1024,
     demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,

@@ -3,7 +3,7 @@ import { signInBody } from '../../shared/api/contract';
 import { linkParams, passwordResetBody, passwordResetRequestBody } from '../../shared/api/team-contract';
 import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
-import { requestOrigin } from '../http/request-origin';
+import { linkOrigin } from '../http/request-origin';
 import type { RouteContext } from '../http/route-context';
 import { issueCsrfToken } from './csrf';
 import { authenticateLocal } from './passport';
@@ -43,7 +43,7 @@ export function authRoutes(router: Router, context: RouteContext): void {
   router.post('/auth/password-reset', jsonBody, passwordResetLimits(config.passwordResetLimits), (req, res) => {
     const { email } = passwordResetRequestBody.parse(req.body);
     res.status(202).json({ message: 'If this address belongs to a member of the shop, a link to choose a new password is on its way to it.' });
-    requestPasswordResetLater(context, email, requestOrigin(req), req.log);
+    requestPasswordResetLater(context, email, linkOrigin(config), req.log);
   });
 
   // No sign-in: the link's token is the permission. 404 for an unknown link, 410 used or expired.

@@ -85,6 +85,15 @@ describe('password reset by mail', () => {
     await bench.get('/api/jobs').expect(200);
   });
 
+  it('points the link at the server\'s own address, whatever Host header the request carries', async () => {
+    const browser = await stranger(t);
+    await browser.post('/api/auth/password-reset').set('Host', 'evil.example').send({ email: 'designer@greyfield.example' }).expect(202);
+    const [before] = await mailsTo(t.database.db, 'designer@greyfield.example');
+    const mail = await waitForMail(t.database.db, 'designer@greyfield.example', before?.id);
+    // The test app's configuration: HOST 127.0.0.1, PORT 3000 (config.ts defaults).
+    expect(new URL(mail.link).origin).toBe('http://127.0.0.1:3000');
+  });
+
   it('answers a made-up token as unknown', async () => {
     const browser = await stranger(t);
     expect((await browser.get('/api/auth/password-reset/made-up').expect(404)).body.error).toMatchObject({ code: 'link-unknown', message: expect.stringContaining('not valid') });
@@ -136,6 +145,14 @@ describe('password reset limits and lifetimes', () => {
     await waitForMail(t.database.db, 'designer@greyfield.example');
     // Two for the viewer: the third request was refused before anything was looked up.
     await expect.poll(async () => (await mailsTo(t.database.db, 'viewer@greyfield.example')).length).toBe(2);
+    await t.close();
+  });
+
+  it('points the link at PUBLIC_URL when it is set', async () => {
+    const t = await createTestApp({ config: { publicUrl: 'https://borewright.shop.example' } });
+    await (await stranger(t)).post('/api/auth/password-reset').send({ email: 'viewer@greyfield.example' }).expect(202);
+    const mail = await waitForMail(t.database.db, 'viewer@greyfield.example');
+    expect(mail.link).toMatch(/^https:\/\/borewright\.shop\.example\/reset-password\?token=[\w-]{43}$/);
     await t.close();
   });
 

@@ -3,7 +3,7 @@ import { acceptInvitationBody, linkParams, invitationBody, invitationParams, mem
 import { requirePermission } from '../auth/require-permission';
 import { startSession } from '../auth/start-session';
 import { jsonBody } from '../http/body';
-import { requestOrigin } from '../http/request-origin';
+import { linkOrigin } from '../http/request-origin';
 import type { RouteContext } from '../http/route-context';
 import { acceptInvitation, invitationFor } from './invitations.service';
 import * as team from './team.service';
@@ -18,7 +18,7 @@ export function teamRoutes(router: Router, context: RouteContext): void {
 
   router.post('/team/invitations', requirePermission('manageTeam'), jsonBody, async (req, res) => {
     const body = invitationBody.parse(req.body);
-    res.status(201).json(await team.inviteMember(context, req.user!, body, requestOrigin(req)));
+    res.status(201).json(await team.inviteMember(context, req.user!, body, linkOrigin(context.config, req)));
   });
 
   router.delete('/team/invitations/:invitationId', requirePermission('manageTeam'), async (req, res) => {
