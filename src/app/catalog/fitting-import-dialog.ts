@@ -83,6 +83,11 @@ export class FittingImportDialog {
   protected readonly purposes = PURPOSES.map((purpose) => ({ purpose, ...PURPOSE_STYLES[purpose] }));
   protected readonly overlays = OVERLAYS;
   protected readonly edges = EDGES;
+  protected readonly boreNumbers = [
+    { key: 'x', label: 'x' },
+    { key: 'y', label: 'y' },
+    { key: 'diameter', label: 'Diameter' },
+  ] as const;
 
   protected readonly form = fittingForm(this.fb);
   private readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });

@@ -1,9 +1,10 @@
-import { HttpEvent, HttpEventType } from '@angular/common/http';
+import { HttpEvent } from '@angular/common/http';
 import { computed, inject, Injectable } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { catchError, filter, map, Observable, of, startWith, Subject, switchMap } from 'rxjs';
 import { fittingsImported, type CatalogEntry } from '../../../shared/api/catalog-contract';
 import { ApiProblem, describeError } from '../core/api-problem';
+import { uploadStep } from '../jobs/upload-progress';
 import { CatalogStore } from './catalog-store';
 
 export type UploadState =
@@ -45,15 +46,11 @@ export class FittingUploadStore {
   }
 
   private progressOf(event: HttpEvent<unknown>, fileName: string): UploadState | null {
-    if (event.type === HttpEventType.UploadProgress) {
-      const sent = event.total ? event.loaded / event.total : 0;
-      return { step: 'uploading', fileName, percent: sent >= 1 ? null : Math.round(sent * 100) };
-    }
-    if (event.type === HttpEventType.Response) {
-      this.catalog.reload();
-      return { step: 'done', fittings: fittingsImported.parse(event.body).fittings };
-    }
-    return null;
+    const step = uploadStep(event);
+    if (step === null) return null;
+    if ('percent' in step) return { step: 'uploading', fileName, percent: step.percent };
+    this.catalog.reload();
+    return { step: 'done', fittings: fittingsImported.parse(step.body).fittings };
   }
 }
 
