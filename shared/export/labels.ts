@@ -54,7 +54,7 @@ export function labelOrigin(index: number): { x: number; y: number } {
  * A QR code as filled rectangles, one per run of dark modules along a row, so that it stays a vector
  * drawing at any printer resolution (error correction M: a label can be scuffed and still read).
  */
-export function qrShapes(value: string, x: number, y: number, size: number): RectShape[] {
+function qrShapes(value: string, x: number, y: number, size: number): RectShape[] {
   const { modules } = QRCode.create(value, { errorCorrectionLevel: 'M' });
   const module = size / modules.size;
   const shapes: RectShape[] = [];

@@ -119,7 +119,9 @@ export class BenchStore {
   });
   /** The last mark made here on this job, which Undo takes back. */
   readonly lastMark = computed(() => this.marks().filter((m) => m.jobId === this.jobId()).at(-1));
-  readonly problem = signal<string | null>(null);
+  private readonly problemText = signal<string | null>(null);
+  /** Why the last mark or undo did not go through, in words the user can act on. */
+  readonly problem = this.problemText.asReadonly();
   /** The label sheets of what is shown: the one panel, the chosen carcass, or the panels of the chosen material. */
   readonly labelsUrl = computed(() => {
     const jobId = this.jobId();
@@ -139,7 +141,7 @@ export class BenchStore {
     // Another job starts unfiltered: its carcasses and materials are not this one's.
     const changes: Params = view.job !== undefined ? { carcass: null, material: null, panel: null, ...view } : view;
     this.touched.set(new Set());
-    this.problem.set(null);
+    this.problemText.set(null);
     void this.router.navigate([], { relativeTo: this.route, queryParams: changes, queryParamsHandling: 'merge', replaceUrl: true });
   }
 
@@ -158,22 +160,26 @@ export class BenchStore {
     const panel = this.panels().find((p) => p.dbId === mark.panelDbId);
     if (panel?.status !== mark.to) {
       // Someone marked it again since (or deleted it): undoing now would take back their mark too.
-      this.problem.set(`Nothing undone: “${mark.name}” is no longer as this page marked it.`);
+      this.problemText.set(`Nothing undone: “${mark.name}” is no longer as this page marked it.`);
       forget();
       return;
     }
     if (await this.save(panel, mark.from)) forget();
   }
 
+  dismissProblem(): void {
+    this.problemText.set(null);
+  }
+
   reload(): void {
-    this.problem.set(null);
+    this.problemText.set(null);
     this.detail.reload();
     this.findingList.reload();
   }
 
   private async save(panel: PanelRecord, status: PanelStatus): Promise<boolean> {
     this.savingIds.update((ids) => new Set(ids).add(panel.dbId));
-    this.problem.set(null);
+    this.problemText.set(null);
     try {
       const saved = await this.api.setPanelStatus(panel, status);
       this.detail.update((detail) => detail && { ...detail, panels: detail.panels.map((p) => (p.dbId === saved.dbId ? saved : p)) });
@@ -182,7 +188,7 @@ export class BenchStore {
     } catch (error) {
       // A 409 means the panel is not as this page shows it (someone else marked it): show what it is now.
       const conflict = error instanceof ApiProblem && error.status === 409;
-      this.problem.set(conflict ? `“${panel.name}” was not marked: ${describeError(error)} The list now shows it as it is.` : describeError(error));
+      this.problemText.set(conflict ? `“${panel.name}” was not marked: ${describeError(error)} The list now shows it as it is.` : describeError(error));
       if (conflict) {
         this.touched.update((ids) => new Set(ids).add(panel.dbId));
         this.detail.reload();
