@@ -30,6 +30,7 @@ import {
   showServerProblems,
 } from './fitting-form';
 import { FittingUploadStore } from './fitting-upload-store';
+import { UploadProblem } from '../ui/upload-problem';
 
 /** A catalog file as the upload tab shows it: the smallest fitting there is, a shelf pin. */
 const EXAMPLE = `{
@@ -68,6 +69,7 @@ const EXAMPLE = `{
     MatProgressBarModule,
     MatSelectModule,
     ReactiveFormsModule,
+    UploadProblem,
   ],
   providers: [FittingUploadStore],
   templateUrl: './fitting-import-dialog.html',

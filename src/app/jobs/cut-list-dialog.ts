@@ -8,6 +8,7 @@ import { CUT_LIST_MAX_BYTES, CUT_LIST_MAX_ROWS } from '../../../shared/cut-list/
 import { sizeInWords } from '../../../shared/api/file-size';
 import { CutListStore } from './cut-list-store';
 import { roleLabels } from './panel-labels';
+import { UploadProblem } from '../ui/upload-problem';
 
 export interface CutListRequest {
   jobId: number;
@@ -24,7 +25,7 @@ export interface CutListResult extends CutListImported {
  */
 @Component({
   selector: 'bw-cut-list-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule],
+  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule, UploadProblem],
   providers: [CutListStore],
   templateUrl: './cut-list-dialog.html',
   styleUrl: './cut-list-dialog.scss',

@@ -5,11 +5,12 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { JobSummary } from '../../../shared/api/contract';
 import { JobImportStore } from './job-import-store';
+import { UploadProblem } from '../ui/upload-problem';
 
 /** Uploads a job document (.json) and shows its progress, or every problem the server found in it. */
 @Component({
   selector: 'bw-job-import-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule],
+  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule, UploadProblem],
   providers: [JobImportStore],
   templateUrl: './job-import-dialog.html',
   styleUrl: './job-import-dialog.scss',
