@@ -1,6 +1,6 @@
 import { parseArgs } from 'node:util';
 import { EXIT, type CliIo } from './cli-io';
-import { loadCatalog } from './load-catalog';
+import { catalogOrSay } from './load-catalog';
 
 export const CATALOG_USAGE = `Usage: borewright catalog [--json] [--catalog <fittings.json>]
 
@@ -23,12 +23,9 @@ export async function catalogCommand(args: string[], io: CliIo): Promise<number>
     io.err(`borewright catalog: unexpected ${positionals.join(' ')}\n\n${CATALOG_USAGE}`);
     return EXIT.unusable;
   }
-  const catalog = await loadCatalog(values.catalog);
-  if (!catalog.ok) {
-    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const fittings = [...catalog.value.values()];
+  const catalog = await catalogOrSay(io, values.catalog);
+  if (!catalog) return EXIT.unusable;
+  const fittings = [...catalog.values()];
   if (values.json) {
     io.out(JSON.stringify({ fittings }, null, 2));
     return EXIT.ok;

@@ -1,10 +1,9 @@
 import { parseArgs } from 'node:util';
 import { checkJob } from '../../shared/checks/index';
-import { parseJobDocument } from '../../shared/model/parse-job';
 import { EXIT, type CliIo } from './cli-io';
 import { countFindings, findingsText } from './findings-text';
-import { loadCatalog } from './load-catalog';
-import { readJsonFile } from './read-json';
+import { catalogOrSay } from './load-catalog';
+import { jobOrSay } from './load-job';
 
 export const CHECK_USAGE = `Usage: borewright check <job.json> [--json] [--catalog <fittings.json>]
 
@@ -29,19 +28,11 @@ export async function checkCommand(args: string[], io: CliIo): Promise<number> {
     return EXIT.unusable;
   }
   const [file] = positionals;
-  const read = await readJsonFile(file);
-  const parsed = read.ok ? parseJobDocument(read.value) : read;
-  if (!parsed.ok) {
-    io.err([`${file} is not a job document Borewright can check:`, ...parsed.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const catalog = await loadCatalog(values.catalog);
-  if (!catalog.ok) {
-    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const job = parsed.value;
-  const findings = checkJob(job, catalog.value);
+  const job = await jobOrSay(io, file, 'check');
+  if (!job) return EXIT.unusable;
+  const catalog = await catalogOrSay(io, values.catalog);
+  if (!catalog) return EXIT.unusable;
+  const findings = checkJob(job, catalog);
   const counts = countFindings(findings);
   io.out(values.json ? JSON.stringify({ job: job.name, panels: job.panels.length, ...counts, findings }, null, 2) : findingsText(job, findings));
   return counts.errors > 0 ? EXIT.findings : EXIT.ok;

@@ -3,13 +3,12 @@ import { pipeline } from 'node:stream/promises';
 import { parseArgs } from 'node:util';
 import { planPack } from '../../shared/export/pack';
 import type { PaperName } from '../../shared/export/paper';
-import { parseJobDocument } from '../../shared/model/parse-job';
 import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
 import { packZipStream } from '../export/pack-zip';
 import { EXIT, type CliIo } from './cli-io';
-import { loadCatalog } from './load-catalog';
+import { catalogOrSay } from './load-catalog';
+import { jobOrSay } from './load-job';
 import { progressLine, type ProgressStream } from './progress-line';
-import { readJsonFile } from './read-json';
 
 export const PACK_USAGE = `Usage: borewright pack <job.json> -o <pack.zip> [--paper a4|letter] [--catalog <fittings.json>]
 
@@ -52,17 +51,10 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
   }
   const [file] = positionals;
   const output = values.output as string;
-  const read = await readJsonFile(file);
-  const parsed = read.ok ? parseJobDocument(read.value) : read;
-  if (!parsed.ok) {
-    io.err([`${file} is not a job document Borewright can pack:`, ...parsed.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const catalog = await loadCatalog(values.catalog);
-  if (!catalog.ok) {
-    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
+  const job = await jobOrSay(io, file, 'pack');
+  if (!job) return EXIT.unusable;
+  const catalog = await catalogOrSay(io, values.catalog);
+  if (!catalog) return EXIT.unusable;
 
   // Written beside the target and renamed when whole, so a failed run never leaves half a pack under its
   // name; opened first, so that an output that cannot be written is told before any work is done.
@@ -74,8 +66,7 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
     io.err(`borewright pack: cannot write ${output}: ${whyNot(error)}.`);
     return EXIT.unusable;
   }
-  const job = parsed.value;
-  const ctx = { job, catalog: catalog.value, date: new Date(), generator: GENERATOR };
+  const ctx = { job, catalog, date: new Date(), generator: GENERATOR };
   const progress = progressLine(progressStream);
   const pack = planPack({ ctx, paper, fontBytes: await drawingFont(), svgWindow: await svgWindows(), sha256: sha256Hex, onProgress: progress.update });
   try {

@@ -2,7 +2,7 @@ import { parseArgs } from 'node:util';
 import { planCarcass } from '../../shared/planner/plan-carcass';
 import { planToJob } from '../../shared/planner/plan-job';
 import { EXIT, type CliIo } from './cli-io';
-import { loadCatalog } from './load-catalog';
+import { catalogOrSay } from './load-catalog';
 import { readJsonFile } from './read-json';
 
 export const PLAN_USAGE = `Usage: borewright plan <carcass.json> [--catalog <fittings.json>]
@@ -29,13 +29,10 @@ export async function planCommand(args: string[], io: CliIo): Promise<number> {
     return EXIT.unusable;
   }
   const [file] = positionals;
-  const catalog = await loadCatalog(values.catalog);
-  if (!catalog.ok) {
-    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
+  const catalog = await catalogOrSay(io, values.catalog);
+  if (!catalog) return EXIT.unusable;
   const read = await readJsonFile(file);
-  const result = read.ok ? planCarcass(read.value, catalog.value) : read;
+  const result = read.ok ? planCarcass(read.value, catalog) : read;
   if (!result.ok) {
     io.err([`${file} is not a carcass Borewright can plan:`, ...result.errors.map((e) => `  ${e}`)].join('\n'));
     return EXIT.unusable;

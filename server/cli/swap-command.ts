@@ -1,9 +1,8 @@
 import { parseArgs } from 'node:util';
-import { parseJobDocument } from '../../shared/model/parse-job';
 import { checkSwap } from '../../shared/swap/check-swap';
 import { EXIT, type CliIo } from './cli-io';
-import { loadCatalog } from './load-catalog';
-import { readJsonFile } from './read-json';
+import { catalogOrSay } from './load-catalog';
+import { jobOrSay } from './load-job';
 import { swapText } from './swap-text';
 
 export const SWAP_USAGE = `Usage: borewright swap <job.json> --from <fitting> --to <fitting> [--json] [--catalog <fittings.json>]
@@ -42,19 +41,11 @@ export async function swapCommand(args: string[], io: CliIo): Promise<number> {
     return EXIT.unusable;
   }
   const [file] = positionals;
-  const read = await readJsonFile(file);
-  const parsed = read.ok ? parseJobDocument(read.value) : read;
-  if (!parsed.ok) {
-    io.err([`${file} is not a job document Borewright can check:`, ...parsed.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const catalog = await loadCatalog(values.catalog);
-  if (!catalog.ok) {
-    io.err(['The shop fittings cannot be used:', ...catalog.errors.map((e) => `  ${e}`)].join('\n'));
-    return EXIT.unusable;
-  }
-  const job = parsed.value;
-  const result = checkSwap(job, catalog.value, values.from, values.to);
+  const job = await jobOrSay(io, file, 'check');
+  if (!job) return EXIT.unusable;
+  const catalog = await catalogOrSay(io, values.catalog);
+  if (!catalog) return EXIT.unusable;
+  const result = checkSwap(job, catalog, values.from, values.to);
   if (!result.ok) {
     io.err(`borewright swap: ${result.message}`);
     return EXIT.unusable;
