@@ -1,8 +1,11 @@
 import type { Request } from 'express';
 import type { Config } from '../config';
 
-/** The address the request's browser used to reach the server. */
-export const requestOrigin = (req: Request): string => `${req.protocol}://${req.get('host')}`;
+/**
+ * The address the request's browser used to reach the server. Express's `protocol` and `host` read a
+ * proxy's X-Forwarded-Proto and X-Forwarded-Host only when TRUST_PROXY trusts that proxy.
+ */
+export const requestOrigin = (req: Request): string => `${req.protocol}://${req.host}`;
 
 /**
  * Where the links in our mail point: PUBLIC_URL when it is set. Otherwise, for mail a signed-in member

@@ -9,6 +9,7 @@ import type { RouteContext } from '../http/route-context';
 import { verifyPackLink } from './pack-links';
 import { sendPack } from './pack-send.service';
 import * as packs from './packs.service';
+import { linkOrigin } from '../http/request-origin';
 
 function sendFile(res: Response, file: packs.DownloadFile): void {
   res.attachment(file.name).type(file.type).send(typeof file.bytes === 'string' ? file.bytes : Buffer.from(file.bytes));
@@ -58,8 +59,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
 
   router.post('/jobs/:jobId/pack/send', requirePermission('editJobs'), jsonBody, async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
-    const origin = `${req.protocol}://${req.get('host')}`;
-    res.json(await sendPack(context, req.user!, jobId, packSendBody.parse(req.body), origin));
+    res.json(await sendPack(context, req.user!, jobId, packSendBody.parse(req.body), linkOrigin(context.config, req)));
   });
 
   // No sign-in: the signed token is the permission, for a recipient without an account.
