@@ -16,14 +16,18 @@ const args = [
 
 export const screenshotDir = join(process.cwd(), 'tests/e2e/screenshots');
 
-/** A fresh headless Chromium profile; close() also removes its folder. */
-export async function openBrowser(viewport = { width: 1280, height: 800 }): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
+/** A fresh headless Chromium profile, with a touch screen when asked; close() also removes its folder. */
+export async function openBrowser(
+  viewport = { width: 1280, height: 800 },
+  { touch = false } = {},
+): Promise<{ context: BrowserContext; page: Page; close(): Promise<void> }> {
   const profile = mkdtempSync(join(tmpdir(), 'borewright-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env['CHROME_BIN'] ?? '/usr/bin/chromium',
     headless: true,
     args,
     viewport,
+    hasTouch: touch,
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {

@@ -1,7 +1,8 @@
 import type { Page } from 'playwright-core';
 import { afterEach, describe, expect, inject, it } from 'vitest';
 import { fitView, toScreen, type Point } from '../../src/app/editor/stage/view';
-import { openBrowser, screenshot, signIn } from './browser';
+import { join } from 'node:path';
+import { openBrowser, screenshot, screenshotDir, signIn } from './browser';
 
 const baseUrl = inject('baseUrl');
 
@@ -90,5 +91,34 @@ describe('the panel editor in the browser', () => {
     await page.reload();
     await page.locator('bw-panel-stage canvas').first().waitFor();
     await expect.poll(() => placementRows(page)).toEqual(placed);
+  });
+
+  it('zooms with a two-finger pinch on a touch screen', async () => {
+    const browser = await openBrowser({ width: 1024, height: 768 }, { touch: true });
+    close = browser.close;
+    const { page, context } = browser;
+    await signIn(page, baseUrl, 'designer@greyfield.example');
+    await page.getByRole('link', { name: 'Larch Lane kitchen' }).click();
+    await page.getByRole('link', { name: 'Sink base, left side' }).click();
+    await page.locator('bw-panel-stage canvas').first().waitFor();
+    const zoom = async () => parseInt(await page.locator('.zoom').innerText(), 10);
+    await expect.poll(zoom).toBeGreaterThan(0);
+    const before = await zoom();
+    const box = await page.locator('bw-panel-stage').boundingBox();
+    if (!box) throw new Error('the stage is not on the page');
+    const centre = { x: box.x + box.width / 2, y: box.y + box.height / 2 };
+    // Two fingers spread from 80 px apart to 240 px apart: three times the scale.
+    const cdp = await context.newCDPSession(page);
+    const fingers = (apart: number) => [
+      { x: centre.x - apart / 2, y: centre.y, id: 1 },
+      { x: centre.x + apart / 2, y: centre.y, id: 2 },
+    ];
+    await cdp.send('Input.dispatchTouchEvent', { type: 'touchStart', touchPoints: fingers(80) });
+    for (let apart = 90; apart <= 240; apart += 10) await cdp.send('Input.dispatchTouchEvent', { type: 'touchMove', touchPoints: fingers(apart) });
+    await cdp.send('Input.dispatchTouchEvent', { type: 'touchEnd', touchPoints: [] });
+    await expect.poll(zoom).toBeGreaterThanOrEqual(before * 3 - 2);
+    expect(await zoom()).toBeLessThanOrEqual(before * 3 + 2);
+    // The window as the fingers left it (a full-page shot would resize the stage and fit the panel again).
+    await page.screenshot({ path: join(screenshotDir, 'editor-pinched.png') });
   });
 });
