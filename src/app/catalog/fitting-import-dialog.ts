@@ -31,6 +31,7 @@ import {
 } from './fitting-form';
 import { FittingUploadStore } from './fitting-upload-store';
 import { UploadProblem } from '../ui/upload-problem';
+import { UploadStatus } from '../ui/upload-status';
 
 /** A catalog file as the upload tab shows it: the smallest fitting there is, a shelf pin. */
 const EXAMPLE = `{
@@ -70,6 +71,7 @@ const EXAMPLE = `{
     MatSelectModule,
     ReactiveFormsModule,
     UploadProblem,
+    UploadStatus,
   ],
   providers: [FittingUploadStore],
   templateUrl: './fitting-import-dialog.html',

@@ -2,13 +2,13 @@ import { Component, effect, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { CutListImported } from '../../../shared/api/cut-list-contract';
 import { CUT_LIST_MAX_BYTES, CUT_LIST_MAX_ROWS } from '../../../shared/cut-list/cut-list-rules';
 import { sizeInWords } from '../../../shared/api/file-size';
 import { CutListStore } from './cut-list-store';
 import { roleLabels } from './panel-labels';
 import { UploadProblem } from '../ui/upload-problem';
+import { UploadStatus } from '../ui/upload-status';
 
 export interface CutListRequest {
   jobId: number;
@@ -25,7 +25,7 @@ export interface CutListResult extends CutListImported {
  */
 @Component({
   selector: 'bw-cut-list-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule, UploadProblem],
+  imports: [MatButtonModule, MatDialogModule, MatIconModule, UploadProblem, UploadStatus],
   providers: [CutListStore],
   templateUrl: './cut-list-dialog.html',
   styleUrl: './cut-list-dialog.scss',

@@ -3,7 +3,6 @@ import { Component, effect, inject, input } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { ATTACHMENT_TYPES, AttachmentSummary } from '../../../shared/api/attachment-contract';
@@ -13,11 +12,12 @@ import { describeError } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { attachmentUrl } from './attachments-api';
 import { JobAttachmentsStore } from './job-attachments-store';
+import { UploadStatus } from '../ui/upload-status';
 
 /** The job's photos and PDFs: a list to download from, and for those who change jobs, upload and delete. */
 @Component({
   selector: 'bw-job-attachments',
-  imports: [Can, DatePipe, MatButtonModule, MatIconModule, MatProgressBarModule, MatTooltipModule],
+  imports: [Can, DatePipe, MatButtonModule, MatIconModule, MatTooltipModule, UploadStatus],
   providers: [JobAttachmentsStore],
   templateUrl: './job-attachments.html',
   styleUrl: './job-attachments.scss',

@@ -2,15 +2,15 @@ import { Component, effect, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
-import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { JobSummary } from '../../../shared/api/contract';
 import { JobImportStore } from './job-import-store';
 import { UploadProblem } from '../ui/upload-problem';
+import { UploadStatus } from '../ui/upload-status';
 
 /** Uploads a job document (.json) and shows its progress, or every problem the server found in it. */
 @Component({
   selector: 'bw-job-import-dialog',
-  imports: [MatButtonModule, MatDialogModule, MatIconModule, MatProgressBarModule, UploadProblem],
+  imports: [MatButtonModule, MatDialogModule, MatIconModule, UploadProblem, UploadStatus],
   providers: [JobImportStore],
   templateUrl: './job-import-dialog.html',
   styleUrl: './job-import-dialog.scss',
