@@ -1,10 +1,11 @@
 import { readFileSync } from 'node:fs';
 import jsQR from 'jsqr';
 import { PDFDocument, PrintScaling } from 'pdf-lib';
-import { getDocument, OPS } from 'pdfjs-dist/legacy/build/pdf.mjs';
+import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
 import { makePanel } from '../testing/make-job';
 import { exportContext, exportJob } from '../testing/export-job';
+import { readPdfPage } from '../testing/pdf-page';
 import type { Shape } from './drawing';
 import { LABEL_QR, LABEL_SHEET, labelOrigin, labelSheets, labelsPdf, LABELS_PER_SHEET, QR_QUIET_MODULES, type LabelsInput } from './labels';
 import { PAGE_MARGIN } from './paper';
@@ -25,16 +26,6 @@ const pdf = (input: LabelsInput) => labelsPdf(input, { fontBytes, title: 'Labels
 /** Points per mm: 72 pt per inch, 1 in = 25.4 mm exactly. */
 const PT = 72 / 25.4;
 
-type Matrix = [number, number, number, number, number, number];
-const multiply = (m: Matrix, n: Matrix): Matrix => [
-  m[0] * n[0] + m[2] * n[1],
-  m[1] * n[0] + m[3] * n[1],
-  m[0] * n[2] + m[2] * n[3],
-  m[1] * n[2] + m[3] * n[3],
-  m[0] * n[4] + m[2] * n[5] + m[4],
-  m[1] * n[4] + m[3] * n[5] + m[5],
-];
-
 interface Box {
   x0: number;
   y0: number;
@@ -42,37 +33,10 @@ interface Box {
   y1: number;
 }
 
-/**
- * The boxes of every path a page fills in black, in mm from the page's top left, as pdfjs-dist reads the
- * file (transforms followed), and the page's text.
- */
+/** The boxes of every path a page fills in black, in mm from the page's top left, as pdfjs-dist reads the file, and the page's text. */
 async function blackFills(bytes: Uint8Array, pageNumber: number): Promise<{ boxes: Box[]; text: string }> {
-  const doc = await getDocument({ data: bytes.slice(), disableFontFace: true, useSystemFonts: false }).promise;
-  const page = await doc.getPage(pageNumber);
-  const { fnArray, argsArray } = await page.getOperatorList();
-  const heightPt = page.view[3];
-  const boxes: Box[] = [];
-  let ctm: Matrix = [1, 0, 0, 1, 0, 0];
-  let black = false;
-  const stack: { ctm: Matrix; black: boolean }[] = [];
-  let path: Box | undefined;
-  fnArray.forEach((fn, i) => {
-    const args = argsArray[i];
-    if (fn === OPS.save) stack.push({ ctm, black });
-    if (fn === OPS.restore) ({ ctm, black } = stack.pop()!);
-    if (fn === OPS.transform) ctm = multiply(ctm, args as Matrix);
-    if (fn === OPS.setFillRGBColor) black = [0, 1, 2].every((k) => (args as Record<number, number>)[k] === 0);
-    if (fn === OPS.constructPath) {
-      const [x0, y0, x1, y1] = args[2] as number[];
-      const a = multiply(ctm, [1, 0, 0, 1, x0, y0]);
-      const b = multiply(ctm, [1, 0, 0, 1, x1, y1]);
-      const xs = [a[4], b[4]].map((x) => x / PT);
-      const ys = [a[5], b[5]].map((y) => (heightPt - y) / PT);
-      path = { x0: Math.min(...xs), x1: Math.max(...xs), y0: Math.min(...ys), y1: Math.max(...ys) };
-    }
-    if ((fn === OPS.fill || fn === OPS.eoFill) && path && black) boxes.push(path);
-  });
-  const text = (await page.getTextContent()).items.map((item) => ('str' in item ? item.str : '')).join('\n');
+  const { paths, text, heightPt } = await readPdfPage(bytes, pageNumber);
+  const boxes = paths.filter((p) => p.filledBlack).map((p) => ({ x0: p.x0 / PT, x1: p.x1 / PT, y0: (heightPt - p.y1) / PT, y1: (heightPt - p.y0) / PT }));
   return { boxes, text };
 }
 

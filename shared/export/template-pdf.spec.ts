@@ -1,9 +1,9 @@
 import { readFileSync } from 'node:fs';
 import { PDFDocument, PrintScaling } from 'pdf-lib';
-import { getDocument, OPS } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
 import { panelBores } from '../layout/panel-layout';
 import { exportContext, exportJob } from '../testing/export-job';
+import { readPdfPage } from '../testing/pdf-page';
 import { panelDrillingMaps } from './drilling-map';
 import type { PaperName } from './paper';
 import { templateSheetsPdf } from './template-pdf';
@@ -22,39 +22,10 @@ async function templates(panelIndex: number, paper: PaperName) {
 /** Points per mm: 72 pt per inch, 1 in = 25.4 mm exactly. */
 const PT = 72 / 25.4;
 
-type Matrix = [number, number, number, number, number, number];
-const multiply = (m: Matrix, n: Matrix): Matrix => [
-  m[0] * n[0] + m[2] * n[1],
-  m[1] * n[0] + m[3] * n[1],
-  m[0] * n[2] + m[2] * n[3],
-  m[1] * n[2] + m[3] * n[3],
-  m[0] * n[4] + m[2] * n[5] + m[4],
-  m[1] * n[4] + m[3] * n[5] + m[5],
-];
-
-/** Every path's box on the page, in points, following the transforms and form XObjects as pdfjs-dist reads them. */
+/** Every path's box on the page, in points, as pdfjs-dist reads it, with the page's text and the document's page count. */
 async function pathBoxes(bytes: Uint8Array, pageNumber: number) {
-  const doc = await getDocument({ data: bytes.slice(), disableFontFace: true, useSystemFonts: false }).promise;
-  const page = await doc.getPage(pageNumber);
-  const list = await page.getOperatorList();
-  const boxes: { width: number; height: number }[] = [];
-  let ctm: Matrix = [1, 0, 0, 1, 0, 0];
-  const stack: Matrix[] = [];
-  list.fnArray.forEach((fn, i) => {
-    const args = list.argsArray[i];
-    if (fn === OPS.save || fn === OPS.paintFormXObjectBegin) stack.push(ctm);
-    if (fn === OPS.restore || fn === OPS.paintFormXObjectEnd) ctm = stack.pop()!;
-    if (fn === OPS.transform) ctm = multiply(ctm, args as Matrix);
-    if (fn === OPS.paintFormXObjectBegin && args[0]) ctm = multiply(ctm, args[0] as Matrix);
-    if (fn === OPS.constructPath) {
-      const [x0, y0, x1, y1] = args[2] as number[];
-      const a = multiply(ctm, [1, 0, 0, 1, x0, y0]);
-      const b = multiply(ctm, [1, 0, 0, 1, x1, y1]);
-      boxes.push({ width: Math.abs(b[4] - a[4]), height: Math.abs(b[5] - a[5]) });
-    }
-  });
-  const text = (await page.getTextContent()).items.map((item) => ('str' in item ? item.str : '')).join('\n');
-  return { boxes, text, pages: doc.numPages };
+  const { paths, text, pages } = await readPdfPage(bytes, pageNumber);
+  return { boxes: paths.map((p) => ({ width: p.x1 - p.x0, height: p.y1 - p.y0 })), text, pages };
 }
 
 describe('template sheets', () => {
