@@ -51,7 +51,7 @@ describe('OutboxPage', () => {
     await fixture.whenStable();
     expect(page.textContent).toContain('No mail yet.');
 
-    page.querySelector<HTMLButtonElement>('.head button')!.click();
+    page.querySelector<HTMLButtonElement>('.bw-page-head button')!.click();
     TestBed.tick();
     http.expectOne('/api/outbox').flush({ error: { code: 'forbidden', message: 'The designer role may not manage the team.' } }, { status: 403, statusText: 'Forbidden' });
     await fixture.whenStable();
