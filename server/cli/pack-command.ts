@@ -3,7 +3,7 @@ import { pipeline } from 'node:stream/promises';
 import { parseArgs } from 'node:util';
 import { planPack } from '../../shared/export/pack';
 import type { PaperName } from '../../shared/export/paper';
-import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
+import { GENERATOR, packTools } from '../export/export-platform';
 import { packZipStream } from '../export/pack-zip';
 import { EXIT, type CliIo } from './cli-io';
 import { catalogOrSay } from './load-catalog';
@@ -68,7 +68,7 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
   }
   const ctx = { job, catalog, date: new Date(), generator: GENERATOR };
   const progress = progressLine(progressStream);
-  const pack = planPack({ ctx, paper, fontBytes: await drawingFont(), svgWindow: await svgWindows(), sha256: sha256Hex, onProgress: progress.update });
+  const pack = planPack({ ctx, paper, ...(await packTools()), onProgress: progress.update });
   try {
     await pipeline(packZipStream(pack, ctx.date), target.createWriteStream());
     await rename(partial, output);

@@ -1,16 +1,15 @@
 import JSZip from 'jszip';
-import { createSVGWindow } from 'svgdom';
 import { describe, expect, it } from 'vitest';
 import { planPack } from '../../shared/export/pack';
 import { exportContext } from '../../shared/testing/export-job';
-import { drawingFont, sha256Hex } from './export-platform';
+import { packTools } from './export-platform';
 import { packZipStream } from './pack-zip';
 
 describe('packZipStream', () => {
   it('makes each file only when the zip reaches it, so the pack is never in memory whole', async () => {
     const ctx = exportContext();
     const made: number[] = [];
-    const pack = planPack({ ctx, paper: 'a4', fontBytes: await drawingFont(), svgWindow: () => createSVGWindow(), sha256: sha256Hex, onProgress: (done) => made.push(done) });
+    const pack = planPack({ ctx, paper: 'a4', ...(await packTools()), onProgress: (done) => made.push(done) });
     const chunks: Buffer[] = [];
     let madeAtFirstChunk = -1;
     await new Promise((resolve, reject) => {

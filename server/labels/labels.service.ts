@@ -5,7 +5,7 @@ import { safeSegment } from '../../shared/export/pack-paths';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument } from '../db/job-mapping';
-import { drawingFont, GENERATOR } from '../export/export-platform';
+import { GENERATOR, pdfTools } from '../export/export-platform';
 import { AppError, invalidField, notFound } from '../http/app-error';
 import { loadJobRows } from '../jobs/jobs.repository';
 import type { DownloadFile } from '../packs/packs.service';
@@ -37,7 +37,7 @@ export async function jobLabels(db: Database, jobId: number, filter: LabelsFilte
   const ctx = { job, catalog: await shopCatalog(db), date, generator: GENERATOR };
   const bytes = await labelsPdf(
     { ctx, panels: carcassOrder(job.carcasses, panels), link: (p) => `${origin}${benchPanelPath(jobId, dbIds.get(p.id)!)}` },
-    { fontBytes: await drawingFont(), title: `${job.name}: panel labels`, date, producer: `${GENERATOR.name} ${GENERATOR.version}` },
+    { ...(await pdfTools()), title: `${job.name}: panel labels`, date, producer: `${GENERATOR.name} ${GENERATOR.version}` },
   );
   return { name: `${safeSegment(job.name, 'job')} labels.pdf`, type: 'application/pdf', bytes };
 }

@@ -14,7 +14,7 @@ import type { Face } from '../../shared/model/job-document';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument } from '../db/job-mapping';
-import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
+import { GENERATOR, packTools, pdfTools, svgWindows } from '../export/export-platform';
 import { AppError, notFound } from '../http/app-error';
 import { loadJobRows } from '../jobs/jobs.repository';
 import { findPanel } from '../panels/panels.repository';
@@ -67,7 +67,7 @@ export async function drillingDxf(db: Database, panelId: number, date: Date): Pr
 export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date): Promise<DownloadFile> {
   const { ctx, panel, bores, base } = await panelContext(db, panelId, date);
   const bytes = await templateSheetsPdf(panelDrillingMaps(ctx, panel, bores), paper, {
-    fontBytes: await drawingFont(),
+    ...(await pdfTools()),
     title: `${ctx.job.name}: ${panel.name}, template sheets`,
     date,
     producer: `${GENERATOR.name} ${GENERATOR.version}`,
@@ -78,7 +78,7 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
 /** A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. */
 export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date): Promise<{ pack: Pack; fileName: string; jobName: string }> {
   const ctx = await jobContext(db, jobId, date);
-  const pack = planPack({ ctx, paper, fontBytes: await drawingFont(), svgWindow: await svgWindows(), sha256: sha256Hex });
+  const pack = planPack({ ctx, paper, ...(await packTools()) });
   return { pack, fileName: `${pack.root}.zip`, jobName: ctx.job.name };
 }
 

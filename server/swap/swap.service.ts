@@ -12,7 +12,7 @@ import { recordActivity } from '../activity/activity.repository';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument, type JobRows } from '../db/job-mapping';
-import { drawingFont, GENERATOR, sha256Hex, svgWindows } from '../export/export-platform';
+import { GENERATOR, packTools } from '../export/export-platform';
 import { AppError, notFound } from '../http/app-error';
 import { loadJobRows, touchJob } from '../jobs/jobs.repository';
 import { updatePanelAtVersion } from '../panels/panels.repository';
@@ -55,7 +55,7 @@ export async function retrofitPack(db: Database, jobId: number, from: string, to
   const retrofit = retrofitJob(job, catalog, report);
   const versions = new Map(rows.panels.map((p) => [p.key, p.version]));
   const ctx = { job: retrofit.job, catalog: retrofit.catalog, date, generator: GENERATOR, panelVersion: (key: string) => versions.get(key) };
-  const pack = planPack({ ctx, paper, findings: retrofit.findings, fontBytes: await drawingFont(), svgWindow: await svgWindows(), sha256: sha256Hex });
+  const pack = planPack({ ctx, paper, findings: retrofit.findings, ...(await packTools()) });
   return { pack, fileName: `${pack.root}.zip` };
 }
 

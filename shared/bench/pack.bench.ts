@@ -4,8 +4,7 @@
 import JSZip from 'jszip';
 import { Writable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { createSVGWindow } from 'svgdom';
-import { drawingFont, GENERATOR, sha256Hex } from '../../server/export/export-platform';
+import { GENERATOR, packTools } from '../../server/export/export-platform';
 import { packZipStream } from '../../server/export/pack-zip';
 import { builtinCatalog } from '../catalog/builtin-catalog';
 import { planPack, type Pack } from '../export/pack';
@@ -38,15 +37,15 @@ function counter(): { sink: Writable; bytes: () => number } {
 }
 
 const job = generateJob(100);
-const fontBytes = await drawingFont();
+const tools = await packTools();
 const plan = (): Pack =>
-  planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', fontBytes, svgWindow: () => createSVGWindow(), sha256: sha256Hex });
+  planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', ...tools });
 
 // One small pack first, so that loading and compiling the libraries is not counted.
 {
   const warm = generateJob(1);
   const { sink } = counter();
-  await pipeline(packZipStream(planPack({ ctx: { job: warm, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', fontBytes, svgWindow: () => createSVGWindow(), sha256: sha256Hex }), new Date()), sink);
+  await pipeline(packZipStream(planPack({ ctx: { job: warm, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', ...tools }), new Date()), sink);
 }
 
 const before = process.memoryUsage.rss();

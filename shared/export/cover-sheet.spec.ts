@@ -1,6 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
+import { pdfTools } from '../../server/export/export-platform';
 import { checkJob } from '../checks/index';
 import { panelBores } from '../layout/panel-layout';
 import type { JobDocument } from '../model/job-document';
@@ -10,7 +10,7 @@ import { coverSheet } from './cover-sheet';
 import { hardwareList } from './hardware-list';
 import { drawingsPdf } from './pdf-document';
 
-const fontBytes = new Uint8Array(readFileSync(new URL('./fonts/DejaVuSans.ttf', import.meta.url)));
+const tools = await pdfTools();
 
 /** The cover sheet's text as pdfjs-dist reads it from the PDF, page after page. */
 async function coverText(job: JobDocument): Promise<{ text: string; pages: number }> {
@@ -23,7 +23,7 @@ async function coverText(job: JobDocument): Promise<{ text: string; pages: numbe
     hardware: hardwareList(ctx),
     cautions: cautionsFor(job, ctx.catalog),
   });
-  const bytes = await drawingsPdf(pages, { fontBytes, title: 'cover', date: ctx.date, producer: 'test' });
+  const bytes = await drawingsPdf(pages, { ...tools, title: 'cover', date: ctx.date, producer: 'test' });
   const doc = await getDocument({ data: bytes, disableFontFace: true, useSystemFonts: false }).promise;
   const texts: string[] = [];
   for (let n = 1; n <= doc.numPages; n++) {

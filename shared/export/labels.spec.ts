@@ -1,8 +1,8 @@
-import { readFileSync } from 'node:fs';
 import jsQR from 'jsqr';
 import { PDFDocument, PrintScaling } from 'pdf-lib';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
+import { pdfTools } from '../../server/export/export-platform';
 import { makePanel } from '../testing/make-job';
 import { exportContext, exportJob } from '../testing/export-job';
 import { readPdfPage } from '../testing/pdf-page';
@@ -11,7 +11,7 @@ import { LABEL_QR, LABEL_SHEET, labelOrigin, labelSheets, labelsPdf, LABELS_PER_
 import { PAGE_MARGIN } from './paper';
 import { estimateTextWidth } from './text-width';
 
-const fontBytes = new Uint8Array(readFileSync(new URL('./fonts/DejaVuSans.ttf', import.meta.url)));
+const tools = await pdfTools();
 const link = (panelId: string) => `https://workshop.greyfield.example/bench/panels/${panelId}`;
 
 /** A job of `count` labelled panels: the export job's four, then plain shelves. */
@@ -21,7 +21,7 @@ function labels(count: number): LabelsInput {
   return { ctx, panels: ctx.job.panels.slice(0, count), link: (p) => link(p.id) };
 }
 
-const pdf = (input: LabelsInput) => labelsPdf(input, { fontBytes, title: 'Labels', date: input.ctx.date, producer: 'test' });
+const pdf = (input: LabelsInput) => labelsPdf(input, { ...tools, title: 'Labels', date: input.ctx.date, producer: 'test' });
 
 /** Points per mm: 72 pt per inch, 1 in = 25.4 mm exactly. */
 const PT = 72 / 25.4;

@@ -1,4 +1,4 @@
-import { PDFString } from 'pdf-lib';
+import { PDFName, PDFString } from 'pdf-lib';
 import QRCode from 'qrcode';
 import { panelBores } from '../layout/panel-layout';
 import type { Panel } from '../model/job-document';
@@ -131,16 +131,15 @@ export async function labelsPdf(input: LabelsInput, options: PdfOptions): Promis
   const { doc, drawer } = await startPdf(options);
   const sheets = labelSheets(input);
   for (const [sheet, drawing] of sheets.entries()) {
-    const page = doc.addPage([mmToPt(drawing.width), mmToPt(drawing.height)]);
-    drawer.draw(page, drawing.shapes, { x: 0, y: mmToPt(drawing.height) });
-    input.panels.slice(sheet * LABELS_PER_SHEET, (sheet + 1) * LABELS_PER_SHEET).forEach((panel, i) => {
+    const page = drawer.drawingPage(drawing);
+    const links = input.panels.slice(sheet * LABELS_PER_SHEET, (sheet + 1) * LABELS_PER_SHEET).map((panel, i) => {
       const { x, y } = labelOrigin(i);
       const left = x + LABEL_QR.x;
       const bottom = drawing.height - (y + LABEL_QR.y + LABEL_QR.size);
       const rect = [left, bottom, left + LABEL_QR.size, bottom + LABEL_QR.size].map(mmToPt);
-      const link = doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: rect, Border: [0, 0, 0], A: { Type: 'Action', S: 'URI', URI: PDFString.of(input.link(panel)) } });
-      page.node.addAnnot(doc.context.register(link));
+      return doc.context.register(doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: rect, Border: [0, 0, 0], A: { Type: 'Action', S: 'URI', URI: PDFString.of(input.link(panel)) } }));
     });
+    page.node.set(PDFName.of('Annots'), doc.context.obj(links));
   }
   return finishPdf(doc, options);
 }

@@ -1,16 +1,14 @@
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
-import { createSVGWindow } from 'svgdom';
 import { describe, expect, it } from 'vitest';
+import { packTools } from '../../server/export/export-platform';
 import { clashPanel, exportContext, exportJob } from '../testing/export-job';
 import type { PackManifest } from './manifest';
 import { planPack, type PackInput } from './pack';
 
-const fontBytes = new Uint8Array(readFileSync(new URL('./fonts/DejaVuSans.ttf', import.meta.url)));
-const sha256 = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
+const tools = await packTools();
 
 function input(ctx = exportContext(), onProgress?: PackInput['onProgress']): PackInput {
-  return { ctx, paper: 'a4', fontBytes, svgWindow: () => createSVGWindow(), sha256, ...(onProgress ? { onProgress } : {}) };
+  return { ctx, paper: 'a4', ...tools, ...(onProgress ? { onProgress } : {}) };
 }
 
 /** Makes every file in order, as a zip writer would. */

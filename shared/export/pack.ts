@@ -8,8 +8,9 @@ import { holeScheduleCsv } from './hole-schedule';
 import { PACK_FORMAT, type ManifestFile, type PackManifest } from './manifest';
 import { safeSegment, UniqueNames } from './pack-paths';
 import { jobDrilling } from './panel-drilling';
-import { panelFiles, utf8Bytes, type ExportFile, type PanelFileOptions } from './panel-files';
+import { panelFiles, type ExportFile, type PanelFileOptions } from './panel-files';
 import { drawingsPdf } from './pdf-document';
+import { utf8Bytes } from './utf8';
 
 export interface PackInput extends PanelFileOptions {
   ctx: ExportContext;
@@ -85,7 +86,7 @@ export function planPack(input: PackInput): Pack {
         compress: false,
         produce: () => {
           const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels: drilling.map((d) => ({ panel: d.panel, bores: d.bores.length })) });
-          return drawingsPdf(pages, { fontBytes: input.fontBytes, title: `${job.name}: cover sheet`, date: ctx.date, producer });
+          return drawingsPdf(pages, { fontBytes: input.fontBytes, deflate: input.deflate, title: `${job.name}: cover sheet`, date: ctx.date, producer });
         },
       },
     },

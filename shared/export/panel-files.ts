@@ -5,18 +5,10 @@ import { mapViews } from './map-view';
 import { panelDxf } from './panel-dxf';
 import type { PanelDrilling } from './panel-drilling';
 import { PAPER, type PaperName } from './paper';
+import type { PdfTools } from './pdf-document';
 import { drawingToSvg, type SvgWindow } from './svg-render';
 import { templateSheetsPdf } from './template-pdf';
-
-// TextEncoder belongs to every runtime we run in (browsers, Node, workers) but not to the ECMAScript
-// library that keeps shared/ platform-free, so it is declared here as far as it is used.
-declare const TextEncoder: { new (): { encode(text: string): Uint8Array } };
-const utf8 = new TextEncoder();
-
-/** UTF-8 bytes of a text file. */
-export function utf8Bytes(value: string): Uint8Array {
-  return utf8.encode(value);
-}
+import { utf8Bytes } from './utf8';
 
 /** One file of an export, made when asked for, so that a pack never holds all of its files at once. */
 export interface ExportFile {
@@ -30,10 +22,8 @@ export interface ExportFile {
 }
 
 /** What the files of a panel need besides the job. */
-export interface PanelFileOptions {
+export interface PanelFileOptions extends PdfTools {
   paper: PaperName;
-  /** The TrueType font the PDFs draw text with. */
-  fontBytes: Uint8Array;
   /** A fresh SVG window for each drawing (svgdom's on the server). */
   svgWindow: () => SvgWindow;
 }
@@ -66,7 +56,7 @@ export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: st
         const drawn = drawMaps();
         maps = undefined;
         const title = `${ctx.job.name}: ${panel.name}, template sheets`;
-        return templateSheetsPdf(drawn, options.paper, { fontBytes: options.fontBytes, title, date: ctx.date, producer: `${ctx.generator.name} ${ctx.generator.version}` });
+        return templateSheetsPdf(drawn, options.paper, { fontBytes: options.fontBytes, deflate: options.deflate, title, date: ctx.date, producer: `${ctx.generator.name} ${ctx.generator.version}` });
       },
     },
   ];

@@ -1,99 +1,116 @@
-import { degrees, PDFArray, PDFRef, rgb, type Color, type PDFDocument, type PDFEmbeddedPage, type PDFFont, type PDFPage } from 'pdf-lib';
+import { PDFName, type PDFDict, type PDFDocument, type PDFObject, type PDFPage, type PDFRef } from 'pdf-lib';
+import type { Deflate } from './pdf-document';
 import type { Drawing, Shape, Stroke } from './drawing';
+import { PdfContent, type Paint, type Rgb } from './pdf-content';
+import type { DrawingFont } from './pdf-font';
 import { mmToPt } from './units';
+import { utf8Bytes } from './utf8';
 
-function color(hex: string): Color {
-  const c = (i: number) => parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16) / 255;
-  return rgb(c(0), c(1), c(2));
+const colors = new Map<string, Rgb>();
+
+/** A `#RRGGBB` colour as the content stream writes it, parsed once. */
+function rgb(hex: string): Rgb {
+  let color = colors.get(hex);
+  if (!color) {
+    const c = (i: number) => parseInt(hex.slice(1 + 2 * i, 3 + 2 * i), 16) / 255;
+    colors.set(hex, (color = [c(0), c(1), c(2)]));
+  }
+  return color;
 }
 
-function strokeOptions(stroke: Stroke | undefined) {
-  if (!stroke) return {};
-  return {
-    borderColor: color(stroke.color),
-    borderWidth: mmToPt(stroke.width),
-    ...(stroke.dash ? { borderDashArray: stroke.dash.map(mmToPt) } : {}),
-  };
-}
+/** The name the drawing font goes by in every resource dictionary of the document. */
+const FONT = 'F';
 
 /**
  * Draws drawings into one PDF document as vector graphics at true size. The sheet's millimetres (origin
  * top left, y down) become points (origin bottom left, y up). A drawing can be kept as a form XObject and
- * shown many times; symbols are kept so, once per document.
+ * shown many times; symbols are kept so, once per document. Every page and form shares one resource
+ * dictionary: the font and each kept drawing, named once.
  */
 export class PdfDrawer {
-  private readonly symbols = new Map<string, PDFEmbeddedPage>();
+  private readonly symbols = new Map<string, string>();
+  private readonly xobjects: PDFDict;
+  private readonly resources: PDFRef;
 
   constructor(
     private readonly doc: PDFDocument,
-    private readonly font: PDFFont,
-  ) {}
-
-  /**
-   * Keeps a drawing as a form XObject: drawn once on a scratch page of its size, which is then removed
-   * (page and content stream both) so that nothing of it is left in the file but the XObject.
-   */
-  async keep(drawing: Drawing): Promise<PDFEmbeddedPage> {
-    const scratch = this.doc.addPage([mmToPt(drawing.width), mmToPt(drawing.height)]);
-    await this.prepare(drawing.shapes);
-    this.draw(scratch, drawing.shapes, { x: 0, y: mmToPt(drawing.height) });
-    const kept = await this.doc.embedPage(scratch);
-    await kept.embed();
-    this.doc.removePage(this.doc.getPageCount() - 1);
-    const contents = scratch.node.Contents();
-    for (const ref of contents instanceof PDFArray ? contents.asArray() : []) if (ref instanceof PDFRef) this.doc.context.delete(ref);
-    this.doc.context.delete(scratch.ref);
-    return kept;
+    private readonly font: DrawingFont,
+    private readonly deflate: Deflate,
+  ) {
+    this.xobjects = doc.context.obj({});
+    this.resources = doc.context.register(doc.context.obj({ Font: { [FONT]: font.ref }, XObject: this.xobjects }));
   }
 
-  /** Keeps every symbol among the shapes that is not kept yet: call before `draw`. */
-  async prepare(shapes: readonly Shape[]): Promise<void> {
-    for (const s of shapes) if (s.kind === 'symbol' && !this.symbols.has(s.id)) this.symbols.set(s.id, await this.keep(s.drawing));
+  /** Keeps a drawing as a form XObject of its size and returns the name to show it by. */
+  keep(drawing: Drawing): string {
+    const content = new PdfContent();
+    this.draw(content, drawing.shapes, { x: 0, y: mmToPt(drawing.height) });
+    const name = `K${this.xobjects.keys().length}`;
+    const bbox = [0, 0, mmToPt(drawing.width), mmToPt(drawing.height)];
+    const form = this.stream(content, { Type: 'XObject', Subtype: 'Form', BBox: bbox, Resources: this.resources });
+    this.xobjects.set(PDFName.of(name), this.doc.context.register(form));
+    return name;
   }
 
-  /** Draws shapes onto a page; `origin` is where the sheet's top left corner lies on the page, in points. */
-  draw(page: PDFPage, shapes: readonly Shape[], origin: { x: number; y: number }): void {
+  /** Adds a page `width` × `height` mm whose content `write` writes, and returns it. */
+  page(width: number, height: number, write: (content: PdfContent) => void): PDFPage {
+    const page = this.doc.addPage([mmToPt(width), mmToPt(height)]);
+    const content = new PdfContent();
+    write(content);
+    // Set as they are: pdf-lib's own helpers for these would copy the shared resources into every page.
+    page.node.set(PDFName.of('Contents'), this.doc.context.register(this.stream(content, {})));
+    page.node.set(PDFName.of('Resources'), this.resources);
+    return page;
+  }
+
+  /** Adds a page of a drawing's own size showing it at 1:1. */
+  drawingPage(drawing: Drawing): PDFPage {
+    return this.page(drawing.width, drawing.height, (content) => this.draw(content, drawing.shapes, { x: 0, y: mmToPt(drawing.height) }));
+  }
+
+  /** Draws shapes; `origin` is where the sheet's top left corner lies on the page, in points. */
+  draw(content: PdfContent, shapes: readonly Shape[], origin: { x: number; y: number }): void {
     const X = (x: number) => origin.x + mmToPt(x);
     const Y = (y: number) => origin.y - mmToPt(y);
+    const paint = (fill: string | undefined, stroke: Stroke | undefined): Paint | undefined => {
+      if (fill) content.fillColor(rgb(fill));
+      if (stroke) content.strokeStyle(rgb(stroke.color), mmToPt(stroke.width), stroke.dash?.map(mmToPt));
+      return fill ? (stroke ? 'both' : 'fill') : stroke ? 'stroke' : undefined;
+    };
     for (const s of shapes) {
       switch (s.kind) {
         case 'line':
-          page.drawLine({
-            start: { x: X(s.x1), y: Y(s.y1) },
-            end: { x: X(s.x2), y: Y(s.y2) },
-            thickness: mmToPt(s.stroke.width),
-            color: color(s.stroke.color),
-            ...(s.stroke.dash ? { dashArray: s.stroke.dash.map(mmToPt) } : {}),
-          });
+          paint(undefined, s.stroke);
+          content.line(X(s.x1), Y(s.y1), X(s.x2), Y(s.y2));
           break;
-        case 'rect':
-          page.drawRectangle({
-            x: X(s.x),
-            y: Y(s.y + s.height),
-            width: mmToPt(s.width),
-            height: mmToPt(s.height),
-            ...(s.fill ? { color: color(s.fill) } : {}),
-            ...strokeOptions(s.stroke),
-          });
+        case 'rect': {
+          const how = paint(s.fill, s.stroke);
+          if (how) content.rect(X(s.x), Y(s.y + s.height), mmToPt(s.width), mmToPt(s.height), how);
           break;
-        case 'circle':
-          page.drawCircle({ x: X(s.cx), y: Y(s.cy), size: mmToPt(s.r), ...(s.fill ? { color: color(s.fill) } : {}), ...strokeOptions(s.stroke) });
+        }
+        case 'circle': {
+          const how = paint(s.fill, s.stroke);
+          if (how) content.circle(X(s.cx), Y(s.cy), mmToPt(s.r), how);
           break;
+        }
         case 'text': {
           const size = mmToPt(s.size);
-          const shift = s.anchor === 'start' ? 0 : this.font.widthOfTextAtSize(s.text, size) * (s.anchor === 'middle' ? 0.5 : 1);
-          const x = X(s.x) - (s.upright ? 0 : shift);
-          const y = Y(s.y) - (s.upright ? shift : 0);
-          page.drawText(s.text, { x, y, size, font: this.font, color: color(s.color), ...(s.upright ? { rotate: degrees(90) } : {}) });
+          const shift = s.anchor === 'start' ? 0 : this.font.width(s.text, size) * (s.anchor === 'middle' ? 0.5 : 1);
+          content.fillColor(rgb(s.color));
+          content.text(FONT, size, X(s.x) - (s.upright ? 0 : shift), Y(s.y) - (s.upright ? shift : 0), this.font.encode(s.text), s.upright === true);
           break;
         }
         case 'symbol': {
-          const kept = this.symbols.get(s.id);
-          if (!kept) throw new Error(`Symbol "${s.id}" is not kept yet: call prepare() before draw()`);
-          page.drawPage(kept, { x: X(s.x), y: Y(s.y + s.drawing.height) });
+          let name = this.symbols.get(s.id);
+          if (!name) this.symbols.set(s.id, (name = this.keep(s.drawing)));
+          content.show(name, X(s.x), Y(s.y + s.drawing.height));
           break;
         }
       }
     }
+  }
+
+  private stream(content: PdfContent, dict: Record<string, PDFObject | string | number[]>) {
+    return this.doc.context.stream(this.deflate(utf8Bytes(content.toString())), { ...dict, Filter: 'FlateDecode' });
   }
 }

@@ -1,6 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { PDFDocument, PrintScaling } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
+import { pdfTools } from '../../server/export/export-platform';
 import { panelBores } from '../layout/panel-layout';
 import { exportContext, exportJob } from '../testing/export-job';
 import { readPdfPage } from '../testing/pdf-page';
@@ -9,13 +9,13 @@ import type { PaperName } from './paper';
 import { templateSheetsPdf } from './template-pdf';
 import { planTiles } from './tiles';
 
-const fontBytes = new Uint8Array(readFileSync(new URL('./fonts/DejaVuSans.ttf', import.meta.url)));
+const tools = await pdfTools();
 const ctx = exportContext(exportJob({ name: 'Łódź kitchen — Ø35 cups' }, [{ id: 'big', name: 'Worktop blank', role: 'loose', width: 2800, height: 1200, thickness: 38, material: 'pb18', bores: [{ id: 'h', x: 1400, y: 600, face: 'A', diameter: 35, depth: 13 }] }]));
 
 async function templates(panelIndex: number, paper: PaperName) {
   const panel = ctx.job.panels[panelIndex];
   const maps = panelDrillingMaps(ctx, panel, panelBores(panel, ctx.catalog, ctx.job.system));
-  const bytes = await templateSheetsPdf(maps, paper, { fontBytes, title: panel.name, date: ctx.date, producer: 'test' });
+  const bytes = await templateSheetsPdf(maps, paper, { ...tools, title: panel.name, date: ctx.date, producer: 'test' });
   return { maps, bytes };
 }
 
@@ -81,7 +81,7 @@ describe('template sheets', () => {
     expect(doc.getPageCount()).toBe(tiles);
   });
 
-  it('keep nothing of the scratch pages the maps are drawn on', async () => {
+  it('hold no page objects but the pages printed: the maps are form XObjects', async () => {
     const doc = await PDFDocument.load((await templates(2, 'a4')).bytes);
     const pageObjects = doc.context.enumerateIndirectObjects().filter(([, object]) => object.toString().includes('/Type /Page\n'));
     expect(pageObjects).toHaveLength(doc.getPageCount());

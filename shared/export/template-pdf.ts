@@ -1,4 +1,3 @@
-import { clip, endPath, popGraphicsState, pushGraphicsState, rectangle } from 'pdf-lib';
 import type { Drawing } from './drawing';
 import type { PaperName } from './paper';
 import { finishPdf, startPdf, type PdfOptions } from './pdf-document';
@@ -14,25 +13,23 @@ import { mmToPt } from './units';
  */
 export async function templateSheetsPdf(maps: readonly Drawing[], paper: PaperName, options: PdfOptions): Promise<Uint8Array> {
   const { doc, drawer } = await startPdf(options);
-  const sheets = [];
-  for (const map of maps) sheets.push({ map, plan: planTiles(map.width, map.height, paper), kept: await drawer.keep(map) });
+  const sheets = maps.map((map) => ({ map, plan: planTiles(map.width, map.height, paper), kept: drawer.keep(map) }));
   const pages = sheets.reduce((n, s) => n + s.plan.tiles.length, 0);
   let page = 0;
   for (const { map, plan, kept } of sheets) {
     const { window: w, pageWidth, pageHeight } = plan;
     for (const tile of plan.tiles) {
-      page++;
-      const pdfPage = doc.addPage([mmToPt(pageWidth), mmToPt(pageHeight)]);
-      const top = { x: 0, y: mmToPt(pageHeight) };
-      const furniture = templatePage(plan, tile, map.title, page, pages);
-      await drawer.prepare(furniture.over);
-      drawer.draw(pdfPage, furniture.under, top);
-      const bottom = pageHeight - w.y - w.height;
-      pdfPage.pushOperators(pushGraphicsState(), rectangle(mmToPt(w.x), mmToPt(bottom), mmToPt(w.width), mmToPt(w.height)), clip(), endPath());
-      // The map's top left corner lies `tile.area` before the window's top left.
-      pdfPage.drawPage(kept, { x: mmToPt(w.x - tile.area.x), y: mmToPt(pageHeight - (w.y - tile.area.y + map.height)) });
-      pdfPage.pushOperators(popGraphicsState());
-      drawer.draw(pdfPage, furniture.over, top);
+      const furniture = templatePage(plan, tile, map.title, ++page, pages);
+      drawer.page(pageWidth, pageHeight, (content) => {
+        const top = { x: 0, y: mmToPt(pageHeight) };
+        drawer.draw(content, furniture.under, top);
+        content.save();
+        content.clipRect(mmToPt(w.x), mmToPt(pageHeight - w.y - w.height), mmToPt(w.width), mmToPt(w.height));
+        // The map's top left corner lies `tile.area` before the window's top left.
+        content.show(kept, mmToPt(w.x - tile.area.x), mmToPt(pageHeight - (w.y - tile.area.y + map.height)));
+        content.restore();
+        drawer.draw(content, furniture.over, top);
+      });
     }
   }
   return finishPdf(doc, options);

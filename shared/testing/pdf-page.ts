@@ -12,6 +12,42 @@ const multiply = (m: Matrix, n: Matrix): Matrix => [
   m[1] * n[4] + m[3] * n[5] + m[5],
 ];
 
+/** How many numbers each path operator of pdfjs-dist's `constructPath` takes. */
+const PATH_ARGS = new Map<number, number>([
+  [OPS.moveTo, 2],
+  [OPS.lineTo, 2],
+  [OPS.curveTo, 6],
+  [OPS.curveTo2, 4],
+  [OPS.curveTo3, 4],
+  [OPS.closePath, 0],
+  [OPS.rectangle, 4],
+]);
+
+/**
+ * A path's box [x0 y0 x1 y1] from its points, Bézier control points included: a curve lies within them,
+ * and a circle drawn as four quarter arcs reaches exactly their box. (pdfjs-dist's own box leaves curves out.)
+ */
+function pathBox(ops: readonly number[], coords: readonly number[]): [number, number, number, number] {
+  const xs: number[] = [];
+  const ys: number[] = [];
+  let at = 0;
+  for (const op of ops) {
+    const n = PATH_ARGS.get(op) ?? 0;
+    const a = coords.slice(at, at + n);
+    at += n;
+    if (op === OPS.rectangle) {
+      xs.push(a[0], a[0] + a[2]);
+      ys.push(a[1], a[1] + a[3]);
+    } else {
+      for (let i = 0; i < n; i += 2) {
+        xs.push(a[i]);
+        ys.push(a[i + 1]);
+      }
+    }
+  }
+  return [Math.min(...xs), Math.min(...ys), Math.max(...xs), Math.max(...ys)];
+}
+
 /** A path's bounding box in points, in the page's own space (origin bottom left), and how it was filled. */
 export interface PdfPath {
   x0: number;
@@ -42,7 +78,7 @@ export async function readPdfPage(bytes: Uint8Array, pageNumber: number): Promis
     if (fn === OPS.paintFormXObjectBegin && args[0]) ctm = multiply(ctm, args[0] as Matrix);
     if (fn === OPS.setFillRGBColor) black = [0, 1, 2].every((k) => (args as Record<number, number>)[k] === 0);
     if (fn === OPS.constructPath) {
-      const [x0, y0, x1, y1] = args[2] as number[];
+      const [x0, y0, x1, y1] = pathBox(args[0] as number[], args[1] as number[]);
       const a = multiply(ctm, [1, 0, 0, 1, x0, y0]);
       const b = multiply(ctm, [1, 0, 0, 1, x1, y1]);
       paths.push({ x0: Math.min(a[4], b[4]), y0: Math.min(a[5], b[5]), x1: Math.max(a[4], b[4]), y1: Math.max(a[5], b[5]), filledBlack: false });
