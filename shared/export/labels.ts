@@ -131,7 +131,7 @@ export async function labelsPdf(input: LabelsInput, options: PdfOptions): Promis
   const { doc, drawer } = await startPdf(options);
   const sheets = labelSheets(input);
   for (const [sheet, drawing] of sheets.entries()) {
-    const page = drawer.drawingPage(drawing);
+    const page = await drawer.drawingPage(drawing);
     const links = input.panels.slice(sheet * LABELS_PER_SHEET, (sheet + 1) * LABELS_PER_SHEET).map((panel, i) => {
       const { x, y } = labelOrigin(i);
       const left = x + LABEL_QR.x;

@@ -50,6 +50,6 @@ export async function finishPdf(doc: PDFDocument, options: PdfOptions): Promise<
 /** Drawings as a PDF, each on a page of its own size at 1:1. */
 export async function drawingsPdf(drawings: readonly Drawing[], options: PdfOptions): Promise<Uint8Array> {
   const { doc, drawer } = await startPdf(options);
-  for (const drawing of drawings) drawer.drawingPage(drawing);
+  for (const drawing of drawings) await drawer.drawingPage(drawing);
   return finishPdf(doc, options);
 }

@@ -1,59 +1,104 @@
 import fontkit from '@pdf-lib/fontkit';
-import type { PDFDocument, PDFRef } from 'pdf-lib';
+import { PDFDocument, PDFName, PDFObjectCopier, type PDFDict, type PDFFont, type PDFRef } from 'pdf-lib';
 import { withoutShapingTables } from './font-tables';
 
 type Fontkit = Parameters<PDFDocument['registerFontkit']>[0];
 type ParsedFont = ReturnType<Fontkit['create']>;
 
-/** Each font file as embedded (without its shaping tables), and that file parsed. */
-const prepared = new WeakMap<Uint8Array, { bytes: Uint8Array; parsed: ParsedFont }>();
+const span = (from: number, to: number) => Array.from({ length: to - from + 1 }, (_, i) => String.fromCharCode(from + i)).join('');
 
-function prepare(fontBytes: Uint8Array): { bytes: Uint8Array; parsed: ParsedFont } {
-  let entry = prepared.get(fontBytes);
-  if (!entry) {
-    const bytes = withoutShapingTables(fontBytes);
-    entry = { bytes, parsed: fontkit.create(bytes) };
-    prepared.set(fontBytes, entry);
-  }
-  return entry;
+/**
+ * The characters every PDF carries glyphs for: printable ASCII, the letters of Latin-1 and the signs our
+ * drawings write (× Ø § · – …). Texts of these alone are written in one subset made once per process;
+ * a text with any other character (Ł, ő, Cyrillic) is written in a second subset of its document's own.
+ */
+const REPERTOIRE = span(0x20, 0x7e) + span(0xc0, 0xff) + '§°±²³µ·—–‘’“”•…−√';
+
+/** The drawing font prepared once for all documents. */
+interface PreparedFont {
+  /** The font file without its shaping tables, as the second subsets embed it. */
+  bytes: Uint8Array;
+  parsed: ParsedFont;
+  /** A fontkit that hands out the parsed file again: pdf-lib would parse it for every document. */
+  fontkit: Fontkit;
+  /** The repertoire's subset, embedded in a document of its own, from which each new document copies it. */
+  source: { doc: PDFDocument; ref: PDFRef };
+  /** Each character of the repertoire as that subset encodes it: four hex digits. */
+  codes: Map<string, string>;
+  /** Advance widths by character, in font units. */
+  advances: Map<string, number>;
 }
 
-/** The drawing font as the content writer uses it: its object, and texts encoded and measured. */
+const prepared = new WeakMap<Uint8Array, Promise<PreparedFont>>();
+
+async function prepareFont(fontBytes: Uint8Array): Promise<PreparedFont> {
+  const bytes = withoutShapingTables(fontBytes);
+  const parsed = fontkit.create(bytes);
+  const once: Fontkit = { create: (data, postscriptName) => (data === bytes ? parsed : fontkit.create(data, postscriptName)) };
+  const doc = await PDFDocument.create();
+  doc.registerFontkit(once);
+  const font = await doc.embedFont(bytes, { subset: true });
+  const codes = new Map<string, string>();
+  for (const char of REPERTOIRE) if (parsed.hasGlyphForCodePoint(char.codePointAt(0) as number)) codes.set(char, font.encodeText(char).toString().slice(1, -1));
+  await font.embed();
+  return { bytes, parsed, fontkit: once, source: { doc, ref: font.ref }, codes, advances: new Map() };
+}
+
+/** The drawing font of one document, as the content writer uses it. */
 export interface DrawingFont {
-  ref: PDFRef;
-  /** The text as a PDF string in the font's encoding (`<0041…>`); its glyphs join the subset. */
-  encode(text: string): string;
+  /** The document's font resources: names to fonts, for the resource dictionary. */
+  resources: PDFDict;
+  /** Gets every font ready that these texts need: call before encoding them. */
+  prepare(texts: Iterable<string>): Promise<void>;
+  /** The text as a PDF string (`<0041…>`) and the resource name of the font that encodes it. */
+  encode(text: string): { font: string; hex: string };
   /** Advance width of the text at a size, in the size's unit. */
   width(text: string, size: number): number;
 }
 
 /**
  * Embeds the drawing font (a TrueType file shipped with the product, passed in so that shared/ reads no
- * files) as a subset: the standard PDF fonts cannot write Ø or names beyond Latin-1. The file is prepared
- * and parsed once for all documents: pdf-lib would parse it again for each, and a pack makes one per panel.
- * A parsed font only answers questions (glyphs, widths, subsets), so one serves every document.
- *
- * Texts are remembered once encoded and measured: a template file writes the same labels on every page
- * (`100 mm`, the panel's name), and each encoding lays the text out anew.
+ * files): the standard PDF fonts cannot write Ø or names beyond Latin-1. Subsetting a font for each of a
+ * pack's 300 files took as long as drawing them, so the repertoire's subset is made once and copied in
+ * whole; pdf-lib makes a subset of the document's own only when a text needs more (`prepare`).
  */
 export async function embedDrawingFont(doc: PDFDocument, fontBytes: Uint8Array): Promise<DrawingFont> {
-  const { bytes, parsed } = prepare(fontBytes);
-  const once: Fontkit = { create: (data, postscriptName) => (data === bytes ? parsed : fontkit.create(data, postscriptName)) };
-  doc.registerFontkit(once);
-  const font = await doc.embedFont(bytes, { subset: true });
-  const encoded = new Map<string, string>();
-  const widths = new Map<string, number>();
+  let entry = prepared.get(fontBytes);
+  if (!entry) prepared.set(fontBytes, (entry = prepareFont(fontBytes)));
+  const font = await entry;
+  const { source, codes, advances, parsed } = font;
+  const copied = PDFObjectCopier.for(source.doc.context, doc.context).copy(source.doc.context.lookup(source.ref) as PDFDict);
+  const resources = doc.context.obj({ F: doc.context.register(copied) });
+  let more: PDFFont | undefined;
+  const inRepertoire = (text: string) => {
+    for (const char of text) if (!codes.has(char)) return false;
+    return true;
+  };
   return {
-    ref: font.ref,
+    resources,
+    async prepare(texts) {
+      if (more) return;
+      for (const text of texts) {
+        if (inRepertoire(text)) continue;
+        doc.registerFontkit(font.fontkit);
+        more = await doc.embedFont(font.bytes, { subset: true });
+        resources.set(PDFName.of('G'), more.ref);
+        return;
+      }
+    },
     encode(text) {
-      let hex = encoded.get(text);
-      if (hex === undefined) encoded.set(text, (hex = font.encodeText(text).toString()));
-      return hex;
+      if (inRepertoire(text)) return { font: 'F', hex: `<${Array.from(text, (char) => codes.get(char)).join('')}>` };
+      if (!more) throw new Error(`"${text}" needs characters beyond the font's repertoire: prepare() the texts before drawing them`);
+      return { font: 'G', hex: more.encodeText(text).toString() };
     },
     width(text, size) {
-      let width = widths.get(text);
-      if (width === undefined) widths.set(text, (width = font.widthOfTextAtSize(text, 1000)));
-      return (width * size) / 1000;
+      let units = 0;
+      for (const char of text) {
+        let advance = advances.get(char);
+        if (advance === undefined) advances.set(char, (advance = parsed.glyphForCodePoint(char.codePointAt(0) as number).advanceWidth));
+        units += advance;
+      }
+      return (units * size) / parsed.unitsPerEm;
     },
   };
 }

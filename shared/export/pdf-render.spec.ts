@@ -1,3 +1,4 @@
+import { PDFDict, PDFDocument, PDFName } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
 import { pdfTools } from '../../server/export/export-platform';
 import { readPdfPage } from '../testing/pdf-page';
@@ -36,6 +37,29 @@ describe('PDF drawing', () => {
     expect(find(box(150, 10, 40, 0))).toBeDefined();
     expect(find(box(160, 60, 10, 10))?.filledBlack).toBe(true); // the symbol, through its form XObject
     expect(words).toContain('Ø5 × 12 – Łódź');
+  });
+});
+
+/** The Type0 fonts a PDF embeds, as pdf-lib reads the file back. */
+async function type0Fonts(bytes: Uint8Array): Promise<number> {
+  const doc = await PDFDocument.load(bytes);
+  return doc.context.enumerateIndirectObjects().filter(([, o]) => o instanceof PDFDict && o.get(PDFName.of('Subtype'))?.toString() === '/Type0').length;
+}
+
+describe('PDF text', () => {
+  const pdfOf = (value: string) => drawingsPdf([{ width: 250, height: 30, title: 'text', shapes: [text(5, 15, value, 4, '#000000')] }], { ...tools, title: 'text', date: new Date('2026-01-01'), producer: 'test' });
+
+  it('writes names, numbers and the drawing signs in the one subset every file shares', async () => {
+    const value = 'Base unit, door: Ø35 × 12.5 – 2 pcs · §4 “Müller”';
+    const bytes = await pdfOf(value);
+    expect((await readPdfPage(bytes, 1)).text).toContain(value);
+    expect(await type0Fonts(bytes)).toBe(1);
+  });
+
+  it('adds a subset of the file’s own for a text beyond it, and both read back as written', async () => {
+    const bytes = await pdfOf('Łódź, Ђорђе, Ø35');
+    expect((await readPdfPage(bytes, 1)).text).toContain('Łódź, Ђорђе, Ø35');
+    expect(await type0Fonts(bytes)).toBe(2);
   });
 });
 

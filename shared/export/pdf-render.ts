@@ -18,14 +18,12 @@ function rgb(hex: string): Rgb {
   return color;
 }
 
-/** The name the drawing font goes by in every resource dictionary of the document. */
-const FONT = 'F';
-
 /**
  * Draws drawings into one PDF document as vector graphics at true size. The sheet's millimetres (origin
  * top left, y down) become points (origin bottom left, y up). A drawing can be kept as a form XObject and
  * shown many times; symbols are kept so, once per document. Every page and form shares one resource
- * dictionary: the font and each kept drawing, named once.
+ * dictionary: the fonts and each kept drawing, named once. Shapes are `prepare`d before they are drawn,
+ * so that the font is ready for every text among them.
  */
 export class PdfDrawer {
   private readonly symbols = new Map<string, string>();
@@ -38,11 +36,29 @@ export class PdfDrawer {
     private readonly deflate: Deflate,
   ) {
     this.xobjects = doc.context.obj({});
-    this.resources = doc.context.register(doc.context.obj({ Font: { [FONT]: font.ref }, XObject: this.xobjects }));
+    this.resources = doc.context.register(doc.context.obj({ Font: font.resources, XObject: this.xobjects }));
+  }
+
+  /** Gets the font ready for every text among the shapes, those of symbols included. */
+  async prepare(shapes: readonly Shape[]): Promise<void> {
+    const texts: string[] = [];
+    const collect = (list: readonly Shape[]): void => {
+      for (const s of list) {
+        if (s.kind === 'text') texts.push(s.text);
+        if (s.kind === 'symbol' && !this.symbols.has(s.id)) collect(s.drawing.shapes);
+      }
+    };
+    collect(shapes);
+    await this.font.prepare(texts);
   }
 
   /** Keeps a drawing as a form XObject of its size and returns the name to show it by. */
-  keep(drawing: Drawing): string {
+  async keep(drawing: Drawing): Promise<string> {
+    await this.prepare(drawing.shapes);
+    return this.form(drawing);
+  }
+
+  private form(drawing: Drawing): string {
     const content = new PdfContent();
     this.draw(content, drawing.shapes, { x: 0, y: mmToPt(drawing.height) });
     const name = `K${this.xobjects.keys().length}`;
@@ -52,7 +68,7 @@ export class PdfDrawer {
     return name;
   }
 
-  /** Adds a page `width` × `height` mm whose content `write` writes, and returns it. */
+  /** Adds a page `width` × `height` mm whose content `write` writes (with shapes prepared), and returns it. */
   page(width: number, height: number, write: (content: PdfContent) => void): PDFPage {
     const page = this.doc.addPage([mmToPt(width), mmToPt(height)]);
     const content = new PdfContent();
@@ -64,7 +80,8 @@ export class PdfDrawer {
   }
 
   /** Adds a page of a drawing's own size showing it at 1:1. */
-  drawingPage(drawing: Drawing): PDFPage {
+  async drawingPage(drawing: Drawing): Promise<PDFPage> {
+    await this.prepare(drawing.shapes);
     return this.page(drawing.width, drawing.height, (content) => this.draw(content, drawing.shapes, { x: 0, y: mmToPt(drawing.height) }));
   }
 
@@ -96,13 +113,14 @@ export class PdfDrawer {
         case 'text': {
           const size = mmToPt(s.size);
           const shift = s.anchor === 'start' ? 0 : this.font.width(s.text, size) * (s.anchor === 'middle' ? 0.5 : 1);
+          const { font, hex } = this.font.encode(s.text);
           content.fillColor(rgb(s.color));
-          content.text(FONT, size, X(s.x) - (s.upright ? 0 : shift), Y(s.y) - (s.upright ? shift : 0), this.font.encode(s.text), s.upright === true);
+          content.text(font, size, X(s.x) - (s.upright ? 0 : shift), Y(s.y) - (s.upright ? shift : 0), hex, s.upright === true);
           break;
         }
         case 'symbol': {
           let name = this.symbols.get(s.id);
-          if (!name) this.symbols.set(s.id, (name = this.keep(s.drawing)));
+          if (!name) this.symbols.set(s.id, (name = this.form(s.drawing)));
           content.show(name, X(s.x), Y(s.y + s.drawing.height));
           break;
         }

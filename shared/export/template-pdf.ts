@@ -13,13 +13,15 @@ import { mmToPt } from './units';
  */
 export async function templateSheetsPdf(maps: readonly Drawing[], paper: PaperName, options: PdfOptions): Promise<Uint8Array> {
   const { doc, drawer } = await startPdf(options);
-  const sheets = maps.map((map) => ({ map, plan: planTiles(map.width, map.height, paper), kept: drawer.keep(map) }));
+  const sheets = [];
+  for (const map of maps) sheets.push({ map, plan: planTiles(map.width, map.height, paper), kept: await drawer.keep(map) });
   const pages = sheets.reduce((n, s) => n + s.plan.tiles.length, 0);
   let page = 0;
   for (const { map, plan, kept } of sheets) {
     const { window: w, pageWidth, pageHeight } = plan;
     for (const tile of plan.tiles) {
       const furniture = templatePage(plan, tile, map.title, ++page, pages);
+      await drawer.prepare([...furniture.under, ...furniture.over]);
       drawer.page(pageWidth, pageHeight, (content) => {
         const top = { x: 0, y: mmToPt(pageHeight) };
         drawer.draw(content, furniture.under, top);
