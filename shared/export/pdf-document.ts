@@ -1,13 +1,7 @@
 import { PDFDocument, PrintScaling } from 'pdf-lib';
 import type { Drawing } from './drawing';
 import { embedDrawingFont } from './pdf-font';
-import { PdfDrawer } from './pdf-render';
-
-/**
- * Deflate in the zlib format (RFC 1950), as a PDF's FlateDecode filter reads it: the platform's own
- * (node:zlib on the server). pdf-lib's, written in script, took a quarter of the time of a bench pack.
- */
-export type Deflate = (bytes: Uint8Array) => Uint8Array;
+import { PdfDrawer, type Deflate } from './pdf-render';
 
 /** What a PDF is drawn with: given by the platform, since shared/ reads no files and has no zlib. */
 export interface PdfTools {

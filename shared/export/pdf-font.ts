@@ -69,7 +69,8 @@ export async function embedDrawingFont(doc: PDFDocument, fontBytes: Uint8Array):
   const { source, codes, advances, parsed } = font;
   const copied = PDFObjectCopier.for(source.doc.context, doc.context).copy(source.doc.context.lookup(source.ref) as PDFDict);
   const resources = doc.context.obj({ F: doc.context.register(copied) });
-  let more: PDFFont | undefined;
+  /** The file's own subset, made once a text needs a character beyond the repertoire. */
+  let own: PDFFont | undefined;
   const inRepertoire = (text: string) => {
     for (const char of text) if (!codes.has(char)) return false;
     return true;
@@ -77,19 +78,19 @@ export async function embedDrawingFont(doc: PDFDocument, fontBytes: Uint8Array):
   return {
     resources,
     async prepare(texts) {
-      if (more) return;
+      if (own) return;
       for (const text of texts) {
         if (inRepertoire(text)) continue;
         doc.registerFontkit(font.fontkit);
-        more = await doc.embedFont(font.bytes, { subset: true });
-        resources.set(PDFName.of('G'), more.ref);
+        own = await doc.embedFont(font.bytes, { subset: true });
+        resources.set(PDFName.of('G'), own.ref);
         return;
       }
     },
     encode(text) {
       if (inRepertoire(text)) return { font: 'F', hex: `<${Array.from(text, (char) => codes.get(char)).join('')}>` };
-      if (!more) throw new Error(`"${text}" needs characters beyond the font's repertoire: prepare() the texts before drawing them`);
-      return { font: 'G', hex: more.encodeText(text).toString() };
+      if (!own) throw new Error(`"${text}" needs characters beyond the font's repertoire: prepare() the texts before drawing them`);
+      return { font: 'G', hex: own.encodeText(text).toString() };
     },
     width(text, size) {
       let units = 0;
