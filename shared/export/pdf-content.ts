@@ -1,3 +1,5 @@
+import { roundTo } from './units';
+
 /**
  * A PDF content stream written as text (ISO 32000-1 §8 and §9 operators), in points with the origin at the
  * bottom left. pdf-lib's drawing calls build an object per operator and per number, which a template file
@@ -21,14 +23,12 @@ const KAPPA = (4 * (Math.SQRT2 - 1)) / 3;
 
 /**
  * A number as the content stream writes it: rounded to 0.001 pt (0.35 µm, far below what a printer or a
- * reader's eye can place) and never in exponent form, which PDF numbers do not have.
+ * reader's eye can place), so never in exponent form, which PDF numbers do not have (a sheet's points stay
+ * far below 10^21, where String would write one).
  */
 export function pdfNumber(value: number): string {
   if (!Number.isFinite(value)) throw new Error(`A PDF number must be finite, not ${value}`);
-  const rounded = Math.round(value * 1000) / 1000;
-  if (rounded === 0) return '0';
-  if (Math.abs(rounded) < 1e21) return String(rounded);
-  throw new Error(`A PDF number must be below 10^21, not ${value}`);
+  return String(roundTo(value, 0.001));
 }
 
 const rgbText = ([r, g, b]: Rgb) => `${pdfNumber(r)} ${pdfNumber(g)} ${pdfNumber(b)}`;

@@ -6,13 +6,16 @@ export function mmToPt(mm: number): number {
   return mm * PT_PER_MM;
 }
 
-/** A number rounded to a step (0.0001 for DXF coordinates, 0.001 for SVG), never `-0`. */
+/**
+ * A number rounded to a step that is a power of ten (0.0001 for DXF coordinates, 0.001 for SVG and PDF,
+ * 0.01 for lengths on a drawing), never `-0`. Dividing the whole count of steps by the steps per unit
+ * gives the double nearest that decimal, so 0.1 + 0.2 prints as 0.3. Every drawing file rounds each of
+ * its numbers here, so it does no string work.
+ */
 export function roundTo(value: number, step: number): number {
-  const rounded = Math.round(value / step) * step;
-  // Dividing back by the step's inverse keeps 0.1 + 0.2 from printing as 0.30000000000000004.
-  const decimals = Math.max(0, Math.ceil(-Math.log10(step)));
-  const clean = Number(rounded.toFixed(decimals));
-  return Object.is(clean, -0) ? 0 : clean;
+  const perUnit = Math.round(1 / step);
+  const rounded = Math.round(value * perUnit) / perUnit;
+  return rounded === 0 ? 0 : rounded;
 }
 
 /** A length as printed on a drawing or in a table: up to two decimals, no trailing zeros (`9.5`, `37`, `22.25`). */
