@@ -25,4 +25,13 @@ describe('shopCatalog', () => {
     expect(catalog.has('broken')).toBe(false);
     expect(catalog.size).toBe(builtin.size + 1);
   });
+
+  it('reads a lift mechanism stored before ranges said what they are for as a range for each mechanism', async () => {
+    const light = builtinCatalog().get('lift-light');
+    if (light?.purpose !== 'lift-mechanism') throw new Error('the built-in catalog has no light mechanism');
+    const { rangeFor: _, ...lift } = light.lift;
+    await t.database.db.insert(shopFittings).values([{ fittingId: 'old-lift', fitting: { ...light, id: 'old-lift', lift } as never }]);
+    const stored = (await shopCatalog(t.database.db)).get('old-lift');
+    expect(stored?.purpose === 'lift-mechanism' && stored.lift.rangeFor).toBe('mechanism');
+  });
 });

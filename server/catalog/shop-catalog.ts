@@ -19,11 +19,22 @@ export interface ShopFitting {
 export async function shopFittingsInUse(db: Database): Promise<ShopFitting[]> {
   const rows = await listShopFittings(db);
   const valid = rows.flatMap((r): ShopFitting[] => {
-    const parsed = fitting.safeParse(r.fitting);
+    const parsed = fitting.safeParse(storedFitting(r.fitting));
     return parsed.success ? [{ fitting: parsed.data, importedBy: r.createdBy, importedAt: r.createdAt }] : [];
   });
   const { catalog } = mergeShopFittings(builtinCatalog(), valid.map((v) => v.fitting));
   return valid.filter((v) => catalog.get(v.fitting.id) === v.fitting);
+}
+
+/**
+ * A stored fitting in today's form. Lift mechanisms imported before a range had to say what it is for were
+ * checked for each mechanism, so that is what their range keeps meaning; everything else is as stored.
+ */
+function storedFitting(stored: unknown): unknown {
+  if (typeof stored !== 'object' || stored === null) return stored;
+  const { purpose, lift } = stored as { purpose?: unknown; lift?: unknown };
+  if (purpose !== 'lift-mechanism' || typeof lift !== 'object' || lift === null || 'rangeFor' in lift) return stored;
+  return { ...stored, lift: { ...lift, rangeFor: 'mechanism' } };
 }
 
 /**

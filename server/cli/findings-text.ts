@@ -20,7 +20,9 @@ export function findingsText(job: JobDocument, findings: readonly Finding[]): st
     lines.push('', `Panel ${panel.id} (${panel.name}, ${panel.role})`);
     for (const f of own) {
       lines.push(`  ${f.severity.padEnd(8)}${f.code.padEnd(19)}${f.message}`);
-      if (f.fix) lines.push(`${' '.repeat(2 + 8 + 19)}Fix: ${f.fix.message}`);
+      const indent = ' '.repeat(2 + 8 + 19);
+      for (const fix of f.fixes) lines.push(`${indent}Fix: ${fix.message}`);
+      if (f.advice) lines.push(`${indent}${f.advice}`);
     }
   }
   return lines.join('\n');

@@ -108,7 +108,16 @@ export const fitting = z
       purpose: z.literal('mounting-plate'),
       plate: z.object({ height: z.number().finite().min(0).max(50), source }),
     }),
-    z.object({ ...common, purpose: z.literal('lift-mechanism'), lift: z.object({ powerFactor: range, source }) }),
+    z.object({
+      ...common,
+      purpose: z.literal('lift-mechanism'),
+      lift: z.object({
+        powerFactor: range,
+        /** Makers print a range for each mechanism or for the pair on one flap (trade-reference §8a): the entry must say which. */
+        rangeFor: z.enum(['mechanism', 'pair'], { error: 'must say what the power-factor range is for: "mechanism" (each) or "pair"' }),
+        source,
+      }),
+    }),
     z.object({ ...common, purpose: z.literal('runner'), runner: z.object({ length: size(2000), source }) }),
   ])
   .superRefine((f, ctx) => {

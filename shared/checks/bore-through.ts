@@ -1,9 +1,9 @@
 import type { PanelFaceBore } from '../layout/bore';
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { collect, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, mm } from './wording';
 
-function finding(site: PanelSite, bore: PanelFaceBore): Finding | null {
+function finding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {
   const { thickness } = site.panel;
   const { minFloor } = site.limits;
   const floor = thickness - bore.depth;
@@ -12,16 +12,14 @@ function finding(site: PanelSite, bore: PanelFaceBore): Finding | null {
     floor <= 0
       ? `${capitalize(boreName(bore))} is ${mm(bore.depth)} deep in a ${mm(thickness)} board: it comes out on the other face.`
       : `${capitalize(boreName(bore))} leaves only ${mm(floor)} under it in a ${mm(thickness)} board; keep at least ${mm(minFloor)}.`;
-  const fix = {
-    message: `Drill it at most ${mm(Math.max(thickness - minFloor, 0))} deep, or use a board at least ${mm(bore.depth + minFloor)} thick.`,
-  };
-  return report(site, 'bore-through', 'error', message, [bore], fix);
+  const advice = `Drill it at most ${mm(Math.max(thickness - minFloor, 0))} deep, or use a board at least ${mm(bore.depth + minFloor)} thick.`;
+  return report(site, 'bore-through', 'error', message, [bore], { advice });
 }
 
 /**
  * bore-through: a blind face bore with less than the minimum floor left under it (trade-reference §7: at
  * least 3 mm, so a 13 mm cup needs a 16 mm door). Bores meant to go through are left alone.
  */
-export function checkBoreThrough(site: PanelSite): Finding[] {
+export function checkBoreThrough(site: PanelSite): DraftFinding[] {
   return collect(site.faceBores, (b) => finding(site, b));
 }

@@ -29,7 +29,10 @@ describe('bores-overlap', () => {
 
   it('offers the nearest clear system hole for a stray system-size bore', () => {
     const [finding] = overlaps([hole('dowel', 37, 73, { diameter: 8 }), hole('pin', 37, 80)]);
-    expect(finding.fix).toEqual({ message: 'Move pin to the nearest clear system hole, x 37, y 105.', at: { x: 37, y: 105 } });
+    expect(finding.fixes[0]).toEqual({
+      message: 'Move bore pin to x 37, y 105, the nearest clear system hole.',
+      edits: [{ kind: 'move-bore', panel: 'side', bore: 'pin', x: 37, y: 105 }],
+    });
   });
 
   it('reports two bores in one edge too close, and not their clean twin', () => {

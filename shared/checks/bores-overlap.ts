@@ -1,9 +1,10 @@
 import { isSameHole, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore';
 import { pairKey } from '../layout/panel-layout';
-import { nearestClearHole } from './clear-hole';
-import type { Finding } from './finding';
-import { report, type PanelSite } from './panel-site';
-import { boreName, capitalize, formatNumber, mm } from './wording';
+import { clearHoles } from './clear-hole';
+import type { DraftFinding, Fix } from './finding';
+import { MAX_CANDIDATES, moveBoreTo, moverName } from './fix-moves';
+import { report, type PanelSite, type Remedy } from './panel-site';
+import { boreName, capitalize, mm } from './wording';
 
 type AnyBore = PanelFaceBore | PanelEdgeBore;
 
@@ -17,17 +18,26 @@ function describe(a: AnyBore, b: AnyBore, web: number, minWeb: number, where: st
   return `${capitalize(boreName(a))} and ${boreName(b)} ${where} ${gap}; keep at least ${mm(minWeb)}.`;
 }
 
-/** The fix for two face bores too close: a loose or shelf-pin bore of system size can go to the nearest clear system hole. */
-function fixFor(site: PanelSite, a: PanelFaceBore, b: PanelFaceBore, web: number): Finding['fix'] {
-  const movable = [b, a].find(
-    (x) => (x.purpose === 'loose' || x.purpose === 'shelf-pin') && x.diameter <= site.system.holeDiameter,
-  );
-  const hole = movable && nearestClearHole(site, movable, new Set([movable.id]));
-  if (movable && hole) {
-    const what = movable.placement ? `placement ${movable.placement}` : movable.id;
-    return { message: `Move ${what} to the nearest clear system hole, x ${formatNumber(hole.x)}, y ${formatNumber(hole.y)}.`, at: hole };
+/** A bore's way out: the clear system holes nearest it, or pushed straight away from the other bore far enough. */
+function movesOf(site: PanelSite, mover: PanelFaceBore, other: PanelFaceBore, web: number): Fix[] {
+  if ((mover.purpose === 'loose' || mover.purpose === 'shelf-pin') && mover.diameter <= site.system.holeDiameter) {
+    const holes = clearHoles(site, mover, new Set([mover.id])).slice(0, MAX_CANDIDATES);
+    return holes.map((hole) => moveBoreTo(site, mover, hole, ', the nearest clear system hole'));
   }
-  return { message: `Move one of them ${mm(site.limits.minWeb - web)} further from the other.` };
+  // Half-millimetre steps a bench hand can mark; the distance rounded up so the web is met.
+  const push = Math.ceil((site.limits.minWeb - web) * 2) / 2;
+  const length = Math.hypot(mover.x - other.x, mover.y - other.y);
+  if (length === 0) return [];
+  const to = { x: mover.x + ((mover.x - other.x) / length) * push, y: mover.y + ((mover.y - other.y) / length) * push };
+  return [moveBoreTo(site, mover, to, `, ${mm(push)} further from ${boreName(other)}`)];
+}
+
+/** Either bore may be the one to move; both ways are tried, each checked before it is offered. */
+function remedyFor(site: PanelSite, a: PanelFaceBore, b: PanelFaceBore, web: number): Remedy {
+  return {
+    candidates: [movesOf(site, b, a, web), movesOf(site, a, b, web)],
+    advice: `Move ${moverName(b)} or ${moverName(a)} at least ${mm(site.limits.minWeb - web)} further from the other.`,
+  };
 }
 
 function edgePairs(site: PanelSite, visit: (a: PanelEdgeBore, b: PanelEdgeBore, web: number) => void): void {
@@ -50,21 +60,22 @@ function edgePairs(site: PanelSite, visit: (a: PanelEdgeBore, b: PanelEdgeBore, 
 
 /**
  * bores-overlap: two bores on the same face (or in the same edge) closer than the minimum web
- * (trade-reference §7: at least 3 mm of board between two bores).
+ * (trade-reference §7: at least 3 mm of board between two bores). Two bores that are one hole are no
+ * overlap: one bore is drilled once; whether two fittings may both use it is hole-shared's question.
  */
-export function checkBoresOverlap(site: PanelSite): Finding[] {
+export function checkBoresOverlap(site: PanelSite): DraftFinding[] {
   const { minWeb } = site.limits;
-  const findings: Finding[] = [];
+  const findings: DraftFinding[] = [];
   for (const { a: p, b: q, web } of site.nearPairs) {
     if (p.face !== q.face || isSameHole(p, q) || exempt(site, p, q)) continue;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
-    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `on face ${a.face}`), [a, b], fixFor(site, a, b, web)));
+    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `on face ${a.face}`), [a, b], remedyFor(site, a, b, web)));
   }
   edgePairs(site, (p, q, web) => {
     if (exempt(site, p, q)) return;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
-    const fix = { message: `Move one of them ${mm(minWeb - web)} further from the other along the edge.` };
-    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `in edge ${a.edge}`), [a, b], fix));
+    const advice = `Move one of them ${mm(minWeb - web)} further from the other along the edge.`;
+    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `in edge ${a.edge}`), [a, b], { advice }));
   });
   return findings;
 }

@@ -6,15 +6,23 @@ import type { PanelSite } from './panel-site';
 const SEARCH_PITCHES = 3;
 
 /**
- * The nearest point of the 32 mm grid where this bore would keep the minimum web to every other bore on
- * its face (but those named in `ignore`, and a hole of its size already there, which it can share) and
- * the minimum distance to the edges. Null when none lies within
- * three pitches or the panel has no grid.
+ * Whether a hole already there can take this bore too: only where one of the two is a loose bore, a
+ * line-bored system hole that locates whatever goes into it. Two fittings never share a hole
+ * (trade-reference §8a, common practice).
  */
-export function nearestClearHole(site: PanelSite, bore: PanelFaceBore, ignore: ReadonlySet<string>): Point | null {
+export function canShareHole(a: PanelFaceBore, b: PanelFaceBore): boolean {
+  return a.placement === undefined || b.placement === undefined;
+}
+
+/**
+ * The points of the 32 mm grid within three pitches, nearest first, where this bore would keep the minimum
+ * web to every other bore on its face (but those named in `ignore`, and a line-bored hole of its size it can
+ * share) and the minimum distance to the edges. Empty when the panel has no grid.
+ */
+export function clearHoles(site: PanelSite, bore: PanelFaceBore, ignore: ReadonlySet<string>): Point[] {
   const { grid, limits, panel, faceBores, index } = site;
   const start = nearestGridPoint(grid, bore);
-  if (!start) return null;
+  if (!start) return [];
   const r = bore.diameter / 2;
   const candidates: Point[] = [];
   for (let i = -SEARCH_PITCHES; i <= SEARCH_PITCHES; i++) {
@@ -33,10 +41,11 @@ export function nearestClearHole(site: PanelSite, bore: PanelFaceBore, ignore: R
     let clear = true;
     index.search(p.x - reach, p.y - reach, p.x + reach, p.y + reach, (k) => {
       const other = faceBores[k];
-      if (other.face !== bore.face || ignore.has(other.id) || isSameHole({ ...bore, ...p }, other)) return;
+      if (other.face !== bore.face || ignore.has(other.id)) return;
+      if (isSameHole({ ...bore, ...p }, other) && canShareHole(bore, other)) return;
       if (Math.hypot(other.x - p.x, other.y - p.y) - r - other.diameter / 2 < limits.minWeb) clear = false;
     });
     return clear;
   };
-  return candidates.find(isClear) ?? null;
+  return candidates.filter(isClear);
 }

@@ -1,6 +1,6 @@
 import { planBox, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore';
 import { pairKey } from '../layout/panel-layout';
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
 import { boreName, capitalize, formatNumber, mm } from './wording';
 
@@ -28,9 +28,9 @@ function shortDepth(site: PanelSite, edge: PanelEdgeBore, face: PanelFaceBore): 
  * edge-bore-clash: an edge bore whose cylinder meets a face bore's, except the pairs a fitting is made to
  * join (a cam and its bolt's edge bore).
  */
-export function checkEdgeBoreClash(site: PanelSite): Finding[] {
+export function checkEdgeBoreClash(site: PanelSite): DraftFinding[] {
   const { index, faceBores } = site;
-  const findings: Finding[] = [];
+  const findings: DraftFinding[] = [];
   for (const edge of site.edgeBores) {
     const [minX, minY, maxX, maxY] = planBox(edge, site.panel);
     index.search(minX, minY, maxX, maxY, (k) => {
@@ -40,7 +40,7 @@ export function checkEdgeBoreClash(site: PanelSite): Finding[] {
       const depth = shortDepth(site, edge, face);
       const path = edge.edge === 'x0' || edge.edge === 'x1' ? `y ${formatNumber(minY)} to ${formatNumber(maxY)}` : `x ${formatNumber(minX)} to ${formatNumber(maxX)}`;
       const shorten = depth > 0 ? `, or drill the edge bore at most ${mm(depth)} deep` : '';
-      findings.push(report(site, 'edge-bore-clash', 'error', message, [edge, face], { message: `Move the face bore clear of the edge bore's path (${path})${shorten}.` }));
+      findings.push(report(site, 'edge-bore-clash', 'error', message, [edge, face], { advice: `Move the face bore clear of the edge bore's path (${path})${shorten}.` }));
     });
   }
   return findings;

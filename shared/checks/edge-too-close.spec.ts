@@ -12,7 +12,7 @@ describe('edge-too-close', () => {
   it('reports a bore 2 mm from the reference edge and says where to move it', () => {
     const [finding] = near([hole(4.5)]);
     expect(finding.message).toBe('Bore b (Ø5 × 10) is 2 mm from the reference edge; keep at least 3 mm.');
-    expect(finding.fix?.at).toEqual({ x: 5.5, y: 300 });
+    expect(finding.fixes.map((f) => f.edits)).toEqual([[{ kind: 'move-bore', panel: 'side', bore: 'b', x: 5.5, y: 300 }]]);
   });
 
   it('passes the clean twin 3 mm from the edge', () => {
@@ -22,7 +22,8 @@ describe('edge-too-close', () => {
   it('keeps a dowel at least one radius from the edge, moving its placement', () => {
     const dowel = (x: number) => [{ id: 'd', fitting: 'dowel-8x30-face', x, y: 300, face: 'A' }];
     const [finding] = near([], dowel(7));
-    expect(finding).toMatchObject({ placements: ['d'], fix: { at: { x: 8, y: 300 } } });
+    expect(finding.placements).toEqual(['d']);
+    expect(finding.fixes.map((f) => f.edits)).toEqual([[{ kind: 'move-placement', panel: 'side', placement: 'd', x: 8, y: 300 }]]);
     expect(near([], dowel(8))).toEqual([]);
   });
 

@@ -1,7 +1,8 @@
 import { edgeLength, type PanelBore, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore';
 import { EDGE_NAME, INWARD, edgeClearance, nearestEdge } from './edges';
-import type { Finding } from './finding';
-import { collect, report, type PanelSite } from './panel-site';
+import type { DraftFinding } from './finding';
+import { moveBoreTo } from './fix-moves';
+import { collect, report, type PanelSite, type Remedy } from './panel-site';
 import { boreName, capitalize, formatNumber, mm } from './wording';
 
 /**
@@ -12,26 +13,24 @@ function required(site: PanelSite, bore: PanelBore): number {
   return bore.purpose === 'construction' ? Math.max(site.limits.minEdge, bore.diameter / 2) : site.limits.minEdge;
 }
 
-/** Where the bore (or, for a fitting's bore, its placement's anchor) goes once moved in by `shift`. */
-function movedTo(site: PanelSite, bore: PanelFaceBore, direction: [number, number], shift: number): Finding['fix'] {
-  const placement = site.layout.placed.find((p) => p.placement.id === bore.placement)?.placement;
-  const from = placement ?? bore;
-  const at = { x: from.x + direction[0] * shift, y: from.y + direction[1] * shift };
-  const what = placement ? `placement ${placement.id}` : bore.id;
-  return { message: `Move ${what} ${mm(shift)} further in, to x ${formatNumber(at.x)}, y ${formatNumber(at.y)}.`, at };
+/** The fix that moves the bore (or, for a fitting's bore, its placement) in by `shift`, rounded up to half a millimetre. */
+function movedIn(site: PanelSite, bore: PanelFaceBore, direction: [number, number], shift: number): Remedy {
+  const step = Math.ceil(shift * 2) / 2;
+  const to = { x: bore.x + direction[0] * step, y: bore.y + direction[1] * step };
+  return { candidates: [[moveBoreTo(site, bore, to, `, ${mm(step)} further in`)]], advice: `Move it at least ${mm(shift)} further in.` };
 }
 
-function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): Finding | null {
+function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {
   const need = required(site, bore);
   const clearance = edgeClearance(bore, site.panel);
   // A bore that crosses the edge is outside the panel, which another check reports.
   if (clearance < 0 || clearance >= need) return null;
   const nearest = nearestEdge(bore, site.panel);
   const message = `${capitalize(boreName(bore))} is ${mm(nearest.distance)} from ${EDGE_NAME[nearest.edge]}; keep at least ${mm(need)}.`;
-  return report(site, 'edge-too-close', 'error', message, [bore], movedTo(site, bore, INWARD[nearest.edge], need - nearest.distance));
+  return report(site, 'edge-too-close', 'error', message, [bore], movedIn(site, bore, INWARD[nearest.edge], need - nearest.distance));
 }
 
-function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): Finding | null {
+function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): DraftFinding | null {
   const r = bore.diameter / 2;
   const along = edgeLength(bore.edge, site.panel);
   const [start, end] = bore.edge === 'x0' || bore.edge === 'x1' ? ['the lower edge', 'the upper edge'] : ['the reference edge', 'the far edge'];
@@ -44,10 +43,10 @@ function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): Finding | null {
   const thin = walls.find((w) => w.distance >= 0 && w.distance < w.need);
   if (!thin || walls.some((w) => w.distance < 0)) return null;
   const message = `${capitalize(boreName(bore))} leaves ${mm(thin.distance)} of board to ${thin.name}; keep at least ${mm(thin.need)}.`;
-  return report(site, 'edge-too-close', 'error', message, [bore], { message: `Move it ${mm(thin.need - thin.distance)} away from ${thin.name}.` });
+  return report(site, 'edge-too-close', 'error', message, [bore], { advice: `Move it ${mm(thin.need - thin.distance)} away from ${thin.name}.` });
 }
 
 /** edge-too-close: a bore nearer an edge (or, in an edge, nearer a face) than the shop's minimum. */
-export function checkEdgeTooClose(site: PanelSite): Finding[] {
+export function checkEdgeTooClose(site: PanelSite): DraftFinding[] {
   return [...collect(site.faceBores, (b) => faceBoreFinding(site, b)), ...collect(site.edgeBores, (b) => edgeBoreFinding(site, b))];
 }

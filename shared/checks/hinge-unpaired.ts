@@ -1,59 +1,68 @@
-import type { Placement } from '../model/job-document';
-import type { Finding } from './finding';
+import type { Panel, Placement } from '../model/job-document';
+import type { DraftFinding, Fix } from './finding';
+import { PAIRING_TOLERANCE, withPurpose } from './hinge-pairs';
 import { report, type PanelSite } from './panel-site';
 import { formatNumber, mm } from './wording';
 
-/** A cup and its plate meet when their heights agree this closely (mm). */
-export const PAIRING_TOLERANCE = 0.5;
-
-function withPurpose(site: PanelSite, placements: readonly Placement[], purpose: 'hinge-cup' | 'mounting-plate'): Placement[] {
-  return placements.filter((p) => site.job.catalog.get(p.fitting)?.purpose === purpose);
+/** The nearest of some placements by height, or undefined when there are none. */
+function nearest<T extends { y: number }>(items: readonly T[], y: number): T | undefined {
+  return items.reduce<T | undefined>((best, p) => (best === undefined || Math.abs(p.y - y) < Math.abs(best.y - y) ? p : best), undefined);
 }
 
-/** The nearest of some heights to a height, or undefined when there are none. */
-function nearest(heights: number[], y: number): number | undefined {
-  return heights.reduce<number | undefined>((best, h) => (best === undefined || Math.abs(h - y) < Math.abs(best - y) ? h : best), undefined);
+function move(panel: Panel, placement: Placement, y: number, what: string): Fix {
+  return {
+    message: `Move ${what} ${placement.id} on ${panel.id} to y ${formatNumber(y)}.`,
+    edits: [{ kind: 'move-placement', panel: panel.id, placement: placement.id, x: placement.x, y }],
+  };
 }
 
 /** Each cup on a door or flap that no plate on the panels it hangs on meets at its height plus `hang.dy`. */
-function unpairedCups(site: PanelSite): Finding[] {
+function unpairedCups(site: PanelSite): DraftFinding[] {
   const { panel } = site;
   if (!panel.hang) return [];
   const { on, dy } = panel.hang;
   const plates = on.flatMap((id) => {
     const target = site.job.panels.get(id);
-    return target ? withPurpose(site, target.placements, 'mounting-plate').map((p) => p.y) : [];
+    return target ? withPurpose(site.job, target, 'mounting-plate').map((plate) => ({ y: plate.y, plate, target })) : [];
   });
-  return withPurpose(site, panel.placements, 'hinge-cup').flatMap((cup) => {
+  return withPurpose(site.job, panel, 'hinge-cup').flatMap((cup) => {
     const wanted = cup.y + dy;
     const plate = nearest(plates, wanted);
-    if (plate !== undefined && Math.abs(plate - wanted) <= PAIRING_TOLERANCE) return [];
-    const message = `Hinge ${cup.id} at ${mm(cup.y)} on ${panel.id} meets no mounting plate: with the ${panel.role} ${mm(dy)} up on ${on.join(', ')}, its plate belongs at ${mm(wanted)}${plate === undefined ? ', and there is none' : `, the nearest is at ${mm(plate)}`}.`;
-    const fix =
+    if (plate !== undefined && Math.abs(plate.y - wanted) <= PAIRING_TOLERANCE) return [];
+    const message = `Hinge ${cup.id} at ${mm(cup.y)} on ${panel.id} meets no mounting plate: with the ${panel.role} ${mm(dy)} up on ${on.join(', ')}, its plate belongs at ${mm(wanted)}${plate === undefined ? ', and there is none' : `, the nearest is at ${mm(plate.y)}`}.`;
+    const remedy =
       plate === undefined
-        ? { message: `Put a mounting plate at height ${formatNumber(wanted)} on ${on[0]}.` }
-        : { message: `Move the hinge to y ${formatNumber(plate - dy)}, or its plate to ${formatNumber(wanted)}.`, at: { x: cup.x, y: plate - dy } };
-    return [report(site, 'hinge-unpaired', 'error', message, [], fix, [cup.id])];
+        ? { advice: `Put a mounting plate at height ${formatNumber(wanted)} on ${on[0]}.` }
+        : {
+            candidates: [[move(panel, cup, plate.y - dy, 'hinge')], [move(plate.target, plate.plate, wanted, 'plate')]],
+            advice: `Put a mounting plate at height ${formatNumber(wanted)} on ${on[0]}, or move the hinge to meet a plate no other hinge uses.`,
+          };
+    return [report(site, 'hinge-unpaired', 'error', message, [], remedy, [cup.id])];
   });
 }
 
 /** Each plate on a panel that no cup of the doors and flaps hanging on it meets. */
-function unpairedPlates(site: PanelSite): Finding[] {
+function unpairedPlates(site: PanelSite): DraftFinding[] {
   const { panel } = site;
   const fronts = site.job.hungOn.get(panel.id) ?? [];
-  const cups = fronts.flatMap((front) => withPurpose(site, front.placements, 'hinge-cup').map((c) => c.y + (front.hang?.dy ?? 0)));
-  return withPurpose(site, panel.placements, 'mounting-plate').flatMap((plate) => {
+  const cups = fronts.flatMap((front) => withPurpose(site.job, front, 'hinge-cup').map((cup) => ({ y: cup.y + (front.hang?.dy ?? 0), cup, front })));
+  return withPurpose(site.job, panel, 'mounting-plate').flatMap((plate) => {
     const cup = nearest(cups, plate.y);
-    if (cup !== undefined && Math.abs(cup - plate.y) <= PAIRING_TOLERANCE) return [];
+    if (cup !== undefined && Math.abs(cup.y - plate.y) <= PAIRING_TOLERANCE) return [];
     const message =
       fronts.length === 0
         ? `Mounting plate ${plate.id} at ${mm(plate.y)} on ${panel.id} has no hinge: no door or flap hangs on this panel.`
-        : `Mounting plate ${plate.id} at ${mm(plate.y)} on ${panel.id} meets no hinge of ${fronts.map((f) => f.id).sort().join(', ')}${cup === undefined ? '' : `; the nearest cup comes to ${mm(cup)}`}.`;
-    const fix =
+        : `Mounting plate ${plate.id} at ${mm(plate.y)} on ${panel.id} meets no hinge of ${fronts.map((f) => f.id).sort().join(', ')}${cup === undefined ? '' : `; the nearest cup comes to ${mm(cup.y)}`}.`;
+    const remedy =
       fronts.length === 0
-        ? { message: "Name this panel in the door's or flap's hang.on, or remove the plate." }
-        : { message: cup === undefined ? 'Add the hinge it carries, or remove the plate.' : `Move the plate to y ${formatNumber(cup)}.`, at: cup === undefined ? undefined : { x: plate.x, y: cup } };
-    return [report(site, 'hinge-unpaired', 'error', message, [], fix.at ? fix : { message: fix.message }, [plate.id])];
+        ? { advice: "Name this panel in the door's or flap's hang.on, or remove the plate." }
+        : cup === undefined
+          ? { advice: 'Add the hinge it carries, or remove the plate.' }
+          : {
+              candidates: [[move(panel, plate, cup.y, 'plate')], [move(cup.front, cup.cup, plate.y - (cup.front.hang?.dy ?? 0), 'hinge')]],
+              advice: 'Add the hinge it carries, or remove the plate.',
+            };
+    return [report(site, 'hinge-unpaired', 'error', message, [], remedy, [plate.id])];
   });
 }
 
@@ -62,6 +71,6 @@ function unpairedPlates(site: PanelSite): Finding[] {
  * height plus the front's `hang.dy` (within 0.5 mm), and every mounting plate its cup. A front that names no
  * panel it hangs on is not paired, since nothing says where its plates belong.
  */
-export function checkHingeUnpaired(site: PanelSite): Finding[] {
+export function checkHingeUnpaired(site: PanelSite): DraftFinding[] {
   return [...unpairedCups(site), ...unpairedPlates(site)];
 }

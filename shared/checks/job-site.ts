@@ -16,6 +16,8 @@ export interface JobSite {
   liftsFor: ReadonlyMap<string, number>;
   /** For each carcass id, the thickness of its material: the board that adjoins its sides. */
   carcassBoard: ReadonlyMap<string, number>;
+  /** For each carcass id, its side panels in document order. */
+  sidesOf: ReadonlyMap<string, Panel[]>;
 }
 
 function liftCount(panel: Panel | undefined, catalog: Catalog): number {
@@ -40,5 +42,13 @@ export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
     const thickness = materials.get(c.material)?.thickness;
     if (thickness !== undefined) carcassBoard.set(c.id, thickness);
   }
-  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard };
+  const sidesOf = new Map<string, Panel[]>();
+  for (const p of job.panels) if (p.role === 'side' && p.carcass !== undefined) sidesOf.set(p.carcass, [...(sidesOf.get(p.carcass) ?? []), p]);
+  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard, sidesOf };
+}
+
+/** The other side of a panel's carcass, when the panel is one of exactly two sides. */
+export function otherSide(site: JobSite, panel: Panel): Panel | undefined {
+  const sides = panel.role === 'side' && panel.carcass !== undefined ? site.sidesOf.get(panel.carcass) : undefined;
+  return sides?.length === 2 ? sides.find((s) => s.id !== panel.id) : undefined;
 }

@@ -1,7 +1,7 @@
 import type { PanelKeepOut } from '../layout/keep-out';
 import { pairKey } from '../layout/panel-layout';
 import { indexBoxes } from './box-index';
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
 import { mm, placementName } from './wording';
 
@@ -42,14 +42,14 @@ function overlaps(keepOuts: PanelKeepOut[]): Overlap[] {
  * keepouts-overlap: the bodies of two placed fittings on the same face need the same area
  * (design.md §2: two keep-outs must not overlap). One finding per pair of placements.
  */
-export function checkKeepOutsOverlap(site: PanelSite): Finding[] {
+export function checkKeepOutsOverlap(site: PanelSite): DraftFinding[] {
   const keepOuts: PanelKeepOut[] = [];
   for (const placed of site.layout.placed) for (const k of placed.keepOuts) if (k.box.every(Number.isFinite)) keepOuts.push(k);
   if (keepOuts.length < 2) return [];
   const name = (id: string) => placementName(site.layout.placed.find((p) => p.placement.id === id)!);
   return overlaps(keepOuts).map(({ a, b, face, width, height }) => {
     const message = `The bodies of ${name(a)} and ${name(b)} on face ${face} overlap by ${mm(width)} × ${mm(height)}.`;
-    const fix = { message: `Move one of them ${mm(Math.min(width, height))} away from the other.` };
-    return report(site, 'keepouts-overlap', 'error', message, [], fix, [a, b]);
+    const advice = `Move one of them ${mm(Math.min(width, height))} away from the other.`;
+    return report(site, 'keepouts-overlap', 'error', message, [], { advice }, [a, b]);
   });
 }

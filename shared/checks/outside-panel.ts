@@ -1,6 +1,6 @@
 import { edgeLength, edgeSpan, type PanelBore } from '../layout/bore';
 import { EDGE_NAME, edgeClearance, nearestEdge } from './edges';
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { isMeasurable, report, type PanelSite } from './panel-site';
 import { boreName, capitalize, mm } from './wording';
 
@@ -28,11 +28,11 @@ function outsideBy(site: PanelSite, bore: PanelBore): string | null {
  * loose bore and one per placement, naming all of its bores that stray. A panel without a drillable size
  * gets a single finding, since nothing on it can be placed.
  */
-export function checkOutsidePanel(site: PanelSite): Finding[] {
+export function checkOutsidePanel(site: PanelSite): DraftFinding[] {
   const { panel } = site;
   if (!site.sized) {
     const message = `Panel ${panel.id} has no drillable size (${panel.width} × ${panel.height} × ${panel.thickness} mm); set its width, height and thickness first.`;
-    return [report(site, 'outside-panel', 'error', message, [], undefined, panel.placements.map((p) => p.id))];
+    return [report(site, 'outside-panel', 'error', message, [], {}, panel.placements.map((p) => p.id))];
   }
   const strays = new Map<string, { bore: PanelBore; why: string }[]>();
   for (const bore of site.layout.bores) {
@@ -48,7 +48,7 @@ export function checkOutsidePanel(site: PanelSite): Finding[] {
     const more = list.length > 1 ? ` (and ${list.length - 1} more of its bores)` : '';
     const owner = bore.placement ? `Placement ${bore.placement}: ` : '';
     const message = `${owner}${owner ? boreName(bore) : capitalize(boreName(bore))} ${why}${more}.`;
-    const fix = { message: bore.placement ? 'Move the placement onto the panel.' : 'Move the bore onto the panel or correct its numbers.' };
-    return report(site, 'outside-panel', 'error', message, list.map((s) => s.bore), fix);
+    const advice = bore.placement ? 'Move the placement onto the panel.' : 'Move the bore onto the panel or correct its numbers.';
+    return report(site, 'outside-panel', 'error', message, list.map((s) => s.bore), { advice });
   });
 }

@@ -2,7 +2,7 @@ import { systemGrid, type SystemGrid } from '../grid/system-grid';
 import type { PanelBore, PanelEdgeBore, PanelFaceBore } from '../layout/bore';
 import { layoutPanel, type PanelLayout } from '../layout/panel-layout';
 import type { Panel, ShopLimits, SystemSettings } from '../model/job-document';
-import type { Finding, FindingCode, Severity } from './finding';
+import type { DraftFinding, Fix, FindingCode, Severity } from './finding';
 import { indexBoxes, type BoxIndex } from './box-index';
 import type { JobSite } from './job-site';
 import { sortedIds } from './wording';
@@ -89,13 +89,19 @@ function findNearPairs(bores: PanelFaceBore[], index: BoxIndex, gap: number): Ne
 }
 
 /** The findings a check makes of each item, the items that are fine giving none. */
-export function collect<T>(items: readonly T[], check: (item: T) => Finding | null): Finding[] {
-  const findings: Finding[] = [];
+export function collect<T>(items: readonly T[], check: (item: T) => DraftFinding | null): DraftFinding[] {
+  const findings: DraftFinding[] = [];
   for (const item of items) {
     const finding = check(item);
     if (finding) findings.push(finding);
   }
   return findings;
+}
+
+/** What a check proposes beside its words: groups of candidate fixes (see DraftFinding) and advice. */
+export interface Remedy {
+  candidates?: Fix[][];
+  advice?: string;
 }
 
 /** A finding about these bores (and any further placements), with ids in a fixed order. */
@@ -105,16 +111,17 @@ export function report(
   severity: Severity,
   message: string,
   bores: readonly PanelBore[],
-  fix?: Finding['fix'],
+  remedy: Remedy = {},
   placements: readonly string[] = [],
-): Finding {
-  const finding: Finding = {
+): DraftFinding {
+  const finding: DraftFinding = {
     code,
     severity,
     message,
     panel: site.panel.id,
     bores: sortedIds(...bores.map((b) => b.id)),
     placements: sortedIds(...bores.map((b) => b.placement), ...placements),
+    candidates: (remedy.candidates ?? []).filter((group) => group.length > 0),
   };
-  return fix ? { ...finding, fix } : finding;
+  return remedy.advice ? { ...finding, advice: remedy.advice } : finding;
 }

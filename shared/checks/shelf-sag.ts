@@ -1,5 +1,5 @@
 import { maxShelfSpan, shelfDeflection } from '../compute/shelf-sag';
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
 import { formatNumber, mm } from './wording';
 
@@ -7,7 +7,7 @@ import { formatNumber, mm } from './wording';
  * shelf-sag: a shelf that sags more than span/sagRatio (L/144 by default, AWS) under the AWS general load
  * of 40 lb/ft², resting on its two ends. In a shelf's frame its span is its height and its depth its width.
  */
-export function checkShelfSag(site: PanelSite): Finding[] {
+export function checkShelfSag(site: PanelSite): DraftFinding[] {
   const { panel } = site;
   const material = site.job.materials.get(panel.material);
   if (panel.role !== 'shelf' || !material) return [];
@@ -17,6 +17,6 @@ export function checkShelfSag(site: PanelSite): Finding[] {
   if (sag <= limit) return [];
   const longest = maxShelfSpan({ thickness: panel.thickness, modulus: material.modulus }, ratio);
   const message = `Shelf ${panel.id} (${mm(panel.height)} span, ${mm(panel.thickness)} ${material.name}) sags ${mm(sag)} under 40 lb/ft² (1.9 kPa), more than L/${formatNumber(ratio)} = ${mm(limit)}.`;
-  const fix = { message: `Keep its span under ${mm(Math.floor(longest))}, support it in the middle, or use a thicker or stiffer board.` };
-  return [report(site, 'shelf-sag', 'warning', message, [], fix)];
+  const advice = `Keep its span under ${mm(Math.floor(longest))}, support it in the middle, or use a thicker or stiffer board.`;
+  return [report(site, 'shelf-sag', 'warning', message, [], { advice })];
 }

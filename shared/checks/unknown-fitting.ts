@@ -1,8 +1,8 @@
-import type { Finding } from './finding';
+import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
 
 /** unknown-fitting: a placement whose fitting is not in the catalog; it lays no bores, so nothing of it is checked. */
-export function checkUnknownFitting(site: PanelSite): Finding[] {
+export function checkUnknownFitting(site: PanelSite): DraftFinding[] {
   return site.layout.unknown.map((p) =>
     report(
       site,
@@ -10,7 +10,7 @@ export function checkUnknownFitting(site: PanelSite): Finding[] {
       'error',
       `Placement ${p.id} uses fitting "${p.fitting}", which is not in the catalog: its holes are neither drawn nor checked.`,
       [],
-      { message: `Choose a fitting from the catalog, or import "${p.fitting}" as a shop fitting.` },
+      { advice: `Choose a fitting from the catalog, or import "${p.fitting}" as a shop fitting.` },
       [p.id],
     ),
   );

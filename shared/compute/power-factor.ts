@@ -34,3 +34,21 @@ export function flapMoment(flap: FlapLoad, angleDegrees: number): number {
 export function maxFlapMoment(powerFactorValue: number): number {
   return (powerFactorValue * STANDARD_GRAVITY) / 2000;
 }
+
+/** What a lift mechanism's power-factor range covers: each mechanism, or the pair on one flap. */
+export type RangeFor = 'mechanism' | 'pair';
+
+/**
+ * The power factor to hold against a mechanism's printed range when `count` mechanisms share a flap equally:
+ * a range for each mechanism takes its share, PF / count; a range for a pair takes what two such mechanisms
+ * would carry together, 2 × PF / count (trade-reference §8a, common practice: makers print both ways).
+ */
+export function powerFactorAgainstRange(pf: number, count: number, rangeFor: RangeFor): number {
+  const share = pf / Math.max(count, 1);
+  return rangeFor === 'pair' ? 2 * share : share;
+}
+
+/** How a range reads in a message: "for each mechanism" or "for a pair". */
+export function rangeForWords(rangeFor: RangeFor): string {
+  return rangeFor === 'pair' ? 'for a pair' : 'for each mechanism';
+}

@@ -39,9 +39,17 @@ export function nearestGridPoint(grid: SystemGrid, point: Point): Point | null {
   };
 }
 
+/** Whether an x lies on a column of the 32 mm grid: a whole number of pitches behind the front row (within 0.01 mm). */
+export function isOnGridColumn(grid: SystemGrid, x: number): boolean {
+  return onStep(x, grid.setback, grid.pitch, grid.lastX);
+}
+
+/** Whether a y lies at a hole height of the 32 mm grid (within 0.01 mm). */
+export function isOnGridHeight(grid: SystemGrid, y: number): boolean {
+  return onStep(y, grid.firstY, grid.pitch, grid.lastY);
+}
+
 /** Whether a point lies on the 32 mm grid of the panel (within 0.01 mm). */
 export function isOnGrid(grid: SystemGrid, point: Point): boolean {
-  return (
-    onStep(point.x, grid.setback, grid.pitch, grid.lastX) && onStep(point.y, grid.firstY, grid.pitch, grid.lastY)
-  );
+  return isOnGridColumn(grid, point.x) && isOnGridHeight(grid, point.y);
 }

@@ -94,6 +94,5 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   const spread = Math.max(...cups) - Math.min(...cups);
   // The hinge rule wants the outer hinges further apart than the door is wide (trade-reference §2).
   const sag = spread <= size.width ? [`The outer hinges are ${mm(spread)} apart, no more than the ${mm(size.width)} door width: the door may sag; two narrower doors would not.`] : [];
-  const inset = doors.overlay === 'inset' ? [`The plates sit ${mm(plateX)} from the front edge, the front row plus the ${mm(material.thickness)} door; the grid check knows only the front row and flags them.`] : [];
-  return { panels, parts, plans, notes: [...heights.notes, ...sag, ...inset] };
+  return { panels, parts, plans, notes: sag };
 }

@@ -62,7 +62,8 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
   const joint = jointPlacements(input.construction, columns, input.height - T / 2, box.innerWidth.value, 'top');
   const topSize = { width: box.partDepth.value, height: box.innerWidth.value, thickness: T };
   const clear = clearOfBodies(joint.part, catalog, topSize, input.system, input.limits.minWeb);
-  const heights = hingeHeights(hinging.count.value, size.height, dy, topGrid, choice.hinge, choice.plate, clear);
+  // The top is not line-bored: its plates go where the cups land 76 to 100 mm from the flap's ends.
+  const heights = hingeHeights(hinging.count.value, size.height, dy, topGrid, choice.hinge, choice.plate, clear, 'free');
   if ('error' in heights) return { errors: [heights.error] };
   const top = lift.fitting.keepOuts.reduce((m, k) => Math.max(m, k.y + k.height), 0);
   const bottom = lift.fitting.keepOuts.reduce((m, k) => Math.min(m, k.y), 0);
@@ -91,7 +92,7 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
   return {
     panels: [panel],
     parts,
-    notes: heights.notes,
+    notes: [],
     plans: [
       {
         panel: panel.id,
