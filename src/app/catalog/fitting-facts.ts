@@ -1,4 +1,5 @@
 import type { Fitting, FittingBore } from '../../../shared/catalog/fitting';
+import { rangeForWords } from '../../../shared/compute/power-factor';
 
 const mm = (n: number) => String(Math.round(n * 100) / 100);
 
@@ -31,7 +32,7 @@ export function familyFacts(f: Fitting): string[] {
     case 'mounting-plate':
       return [`Plate height ${mm(f.plate.height)} mm`];
     case 'lift-mechanism':
-      return [`Power factor ${mm(f.lift.powerFactor.min)} to ${mm(f.lift.powerFactor.max)}`];
+      return [`Power factor ${mm(f.lift.powerFactor.min)} to ${mm(f.lift.powerFactor.max)}, ${rangeForWords(f.lift.rangeFor)}`];
     case 'runner':
       return [`Runner length ${mm(f.runner.length)} mm`];
     default:

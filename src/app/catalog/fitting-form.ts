@@ -70,7 +70,8 @@ export function fittingForm(fb: NonNullableFormBuilder) {
       openingAngle: fb.control<Num>(null),
     }),
     plate: fb.group({ height: fb.control<Num>(null) }),
-    lift: fb.group({ powerFactor: range(fb) }),
+    // Left unchosen: makers print both ways, so the one importing must say which (trade-reference §8a).
+    lift: fb.group({ powerFactor: range(fb), rangeFor: fb.control<'mechanism' | 'pair' | null>(null) }),
     runner: fb.group({ length: fb.control<Num>(null) }),
   });
   form.addValidators(schemaValidator());
@@ -99,7 +100,7 @@ export function fittingFromForm(value: FittingFormValue): FittingSketch & Record
     family['hinge'] = { cupBore: h.cupBore, overlay: h.overlay, constant: given(h.constant), boringDistance: r(h.boringDistance), openingAngle: given(h.openingAngle), source };
   }
   if (value.purpose === 'mounting-plate') family['plate'] = { height: given(value.plate.height), source };
-  if (value.purpose === 'lift-mechanism') family['lift'] = { powerFactor: r(value.lift.powerFactor), source };
+  if (value.purpose === 'lift-mechanism') family['lift'] = { powerFactor: r(value.lift.powerFactor), rangeFor: value.lift.rangeFor ?? undefined, source };
   if (value.purpose === 'runner') family['runner'] = { length: given(value.runner.length), source };
   return { id: value.id.trim(), name: value.name, purpose: value.purpose, onSystemRow: value.onSystemRow, bores, keepOuts, ...family } as FittingSketch & Record<string, unknown>;
 }

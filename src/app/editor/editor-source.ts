@@ -13,6 +13,8 @@ export function panelOf({ dbId: _dbId, version: _version, updatedAt: _updatedAt,
   return panel;
 }
 
+const idList = (value: string | null): string[] => (value ? value.split(',').filter(Boolean) : []);
+
 const positiveId = (value: string | null) => {
   const n = Number(value);
   return Number.isInteger(n) && n > 0 ? n : undefined;
@@ -25,6 +27,11 @@ const positiveId = (value: string | null) => {
 @Injectable()
 export class EditorSource {
   private readonly params = toSignal(inject(ActivatedRoute).paramMap.pipe(map((p) => ({ jobId: positiveId(p.get('jobId')), panelId: positiveId(p.get('panelId')) }))));
+  /** What to show on opening: the bores and placements a finding on the job page concerns (`?bores=…&placements=…`). */
+  readonly focus = toSignal(
+    inject(ActivatedRoute).queryParamMap.pipe(map((q) => ({ bores: idList(q.get('bores')), placements: idList(q.get('placements')) }))),
+    { initialValue: { bores: [], placements: [] } },
+  );
   readonly jobId = computed(() => this.params()?.jobId);
   readonly panelDbId = computed(() => this.params()?.panelId);
 

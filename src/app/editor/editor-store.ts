@@ -1,8 +1,10 @@
 import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
 import { checkPanel } from '../../../shared/checks';
+import type { Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
 import { addPlacement } from './document/commands/add-placement';
+import { applyFindingFix } from './document/commands/apply-finding-fix';
 import { deleteItems } from './document/commands/delete-items';
 import { mirrorItems } from './document/commands/mirror-items';
 import { moveItems } from './document/commands/move-items';
@@ -138,6 +140,16 @@ export class EditorStore {
 
   repeatSelection(count: number, step: number): void {
     this.apply(repeatAlongRow, { selection: this.selection(), count, step });
+  }
+
+  /** Applies a finding's fix as one undoable step and selects what it moved. */
+  applyFix(fix: Fix): void {
+    const job = this.job();
+    if (!job) return;
+    this.apply(applyFindingFix, { fix, job, catalog: this.catalog() });
+    const moved = fix.edits.flatMap((e) => (e.kind === 'move-placement' || e.kind === 'set-fitting' ? [e.placement] : []));
+    const bores = fix.edits.flatMap((e) => (e.kind === 'move-bore' ? [e.bore] : []));
+    this.select(selectionOf(moved, bores));
   }
 
   setPlacement(id: string, changes: PlacementChanges): void {

@@ -12,7 +12,8 @@ import { RouterLink } from '@angular/router';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
 import { CatalogStore } from '../catalog/catalog-store';
 import { ConfirmDialog } from '../ui/confirm-dialog';
-import { NO_SELECTION } from './document/selection';
+import { itemsArea } from './document/items-area';
+import { NO_SELECTION, selectionOf } from './document/selection';
 import { editorAction, type EditorAction } from './editor-keys';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
@@ -80,6 +81,24 @@ export class PanelEditor implements LeavesSafely {
     effect(() => {
       const panel = this.store.panel();
       if (panel) title.setTitle(`${panel.name} · Panel editor · Borewright`);
+    });
+    this.showFocusOnOpen();
+  }
+
+  /** Opened from a finding on the job page: select what it concerns and show it, once the panel is drawn. */
+  private showFocusOnOpen(): void {
+    let shown = false;
+    effect(() => {
+      const { bores, placements } = this.source.focus();
+      const panel = this.store.panel();
+      const layout = this.store.layout();
+      const stage = this.stage();
+      if (shown || !panel || !layout || !stage || bores.length + placements.length === 0) return;
+      shown = true;
+      const loose = new Set(panel.bores.map((b) => b.id));
+      this.store.select(selectionOf(placements.filter((id) => panel.placements.some((p) => p.id === id)), bores.filter((id) => loose.has(id))));
+      const area = itemsArea(panel, layout, bores, placements);
+      if (area) stage.zoomTo(area);
     });
   }
 

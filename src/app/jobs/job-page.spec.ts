@@ -103,9 +103,14 @@ describe('JobPage', () => {
   });
 
   it('names the errors and asks before downloading the pack of a job with errors', async () => {
-    const finding = { code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: 'b1-side-left', bores: ['a', 'b'], placements: [] };
+    const finding = { code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: 'b1-side-left', bores: ['a', 'b'], placements: [], fixes: [] };
     await openAs('bench', { errors: 1, warnings: 0, notes: 0, findings: [finding] });
     expect(page.textContent).toContain('The checks found 1 error.');
+    // The finding is listed under the verdict, its panel a link into the editor with the bores it concerns.
+    const link = page.querySelector<HTMLAnchorElement>('bw-job-findings a');
+    expect(link?.textContent).toBe('Left side');
+    expect(link?.getAttribute('href')).toBe('/jobs/11/panels/101?bores=a,b');
+    expect(page.querySelector('bw-panel-table')?.textContent).toContain('1 error');
 
     buttonNamed('Download pack')!.click();
     await settle();

@@ -18,6 +18,8 @@ import { PanelProgress } from '../ui/panel-progress';
 import { CutListImport } from './cut-list-import';
 import { JobAttachments } from './job-attachments';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
+import { JobFindings } from './job-findings';
+import { JobFindingsStore } from './job-findings-store';
 import { JobStore } from './job-store';
 import { jobDocumentUrl, PanelFields } from './jobs-api';
 import { PanelFormDialog, PanelFormRequest, PanelFormResult } from './panel-form-dialog';
@@ -28,8 +30,8 @@ const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 /** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
-  providers: [JobStore],
+  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, JobFindings, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
+  providers: [JobStore, JobFindingsStore],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',
 })

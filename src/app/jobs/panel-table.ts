@@ -14,6 +14,7 @@ import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/mod
 import { statusStep } from '../../../shared/model/panel-status';
 import { AuthStore } from '../auth/auth-store';
 import { PanelDownloads } from '../packs/panel-downloads';
+import { JobFindingsStore } from './job-findings-store';
 import { roleLabels, statusLabels } from './panel-labels';
 
 /** A panel with the words the table shows and sorts by. */
@@ -31,7 +32,7 @@ export interface PanelStatusChange {
   status: PanelStatus;
 }
 
-const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status', 'files'];
+const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'findings', 'status', 'files'];
 
 /** A job's panels: sortable, filterable, with the controls the user's role allows. */
 @Component({
@@ -54,6 +55,10 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'status', 'f
 })
 export class PanelTable {
   private readonly auth = inject(AuthStore);
+  /** Errors and warnings per panel, from the checks of the job on the page. */
+  private readonly jobFindings = inject(JobFindingsStore);
+  protected readonly findings = this.jobFindings.byPanel;
+  protected readonly findingsLoaded = computed(() => this.jobFindings.value() !== undefined);
 
   readonly panels = input.required<readonly PanelRecord[]>();
   readonly carcasses = input.required<readonly Carcass[]>();

@@ -1,5 +1,4 @@
 import { DecimalPipe } from '@angular/common';
-import { httpResource } from '@angular/common/http';
 import { Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -8,11 +7,11 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { firstValueFrom } from 'rxjs';
-import { jobFindings, PackSent } from '../../../shared/api/pack-contract';
+import { PackSent } from '../../../shared/api/pack-contract';
 import { PaperName } from '../../../shared/export/paper';
 import { Can } from '../auth/can';
+import { JobFindingsStore } from '../jobs/job-findings-store';
 import { ConfirmDialog } from '../ui/confirm-dialog';
-import { jobFindingsUrl } from './pack-api';
 import { PackDownloadStore } from './pack-download-store';
 import { PackSendDialog, PackSendRequest } from './pack-send-dialog';
 import { saveBlob } from './save-blob';
@@ -36,16 +35,18 @@ export class BenchPack {
   readonly jobName = input.required<string>();
 
   protected readonly paper = signal<PaperName>('a4');
-  protected readonly findings = httpResource(() => jobFindingsUrl(this.jobId()), { parse: (raw) => jobFindings.parse(raw) });
-  protected readonly errors = computed(() => (this.findings.hasValue() ? this.findings.value().errors : 0));
+  protected readonly findings = inject(JobFindingsStore);
+  protected readonly errors = computed(() => this.findings.value()?.errors ?? 0);
   protected readonly verdictIcon = computed(() => {
-    if (!this.findings.hasValue()) return null;
-    const { errors, warnings } = this.findings.value();
+    const findings = this.findings.value();
+    if (!findings) return null;
+    const { errors, warnings } = findings;
     return errors > 0 ? 'error' : warnings > 0 ? 'warning' : 'check_circle';
   });
   protected readonly verdict = computed(() => {
-    if (!this.findings.hasValue()) return null;
-    const { errors, warnings } = this.findings.value();
+    const findings = this.findings.value();
+    if (!findings) return null;
+    const { errors, warnings } = findings;
     if (errors + warnings === 0) return 'The checks found no errors or warnings.';
     return `The checks found ${[errors > 0 && plural(errors, 'error'), warnings > 0 && plural(warnings, 'warning')].filter(Boolean).join(' and ')}.`;
   });
