@@ -8,7 +8,14 @@ const broken = makeJob([
   makePanel('door', { role: 'door', width: 496, height: 716, placements: [{ id: 'h1', fitting: 'hinge-full-overlay-45', x: 21.5, y: 87, face: 'A' }] }),
   makePanel('shelf', { role: 'shelf', width: 300, height: 564 }),
 ]);
+const pin = (id: string, y: number) => ({ id, fitting: 'shelf-pin-5', x: 37, y, face: 'A' as const });
+// A plate anchored at 105 has its screw holes at 89 and 121 (9 + 32k in an 18 mm carcass).
+const plate = { id: 'plate', fitting: 'plate-0', x: 37, y: 105, face: 'A' as const };
+const sharedHoles = (placements: object[]) => JSON.stringify(makeJob([makePanel('left', { placements: placements as never })]));
 const files = tempFiles({
+  'pin-in-plate.json': sharedHoles([plate, pin('pin', 121)]),
+  'two-pins.json': sharedHoles([pin('a', 329), pin('b', 329)]),
+  'pitch-away.json': sharedHoles([pin('a', 329), pin('b', 361)]),
   'clean.json': JSON.stringify(clean),
   'broken.json': JSON.stringify(broken),
   'garbled.json': '{ "format": "borewright.job/1", ',
@@ -65,5 +72,19 @@ describe('borewright check', () => {
     const { code, stderr } = runCli('check', files['clean.json'], '--catalog', files['shop.json']);
     expect(code).toBe(2);
     expect(stderr).toContain('shop.json: fittings[0].id: "plate-0" is a built-in fitting');
+  });
+
+  it('reports hole-shared for a pin in a plate\'s screw hole and for two pins in one hole, and stays clean a pitch away', () => {
+    // One hole carries one fitting (trade-reference §8a, common practice).
+    for (const file of ['pin-in-plate.json', 'two-pins.json']) {
+      const { code, stdout } = runCli('check', files[file], '--json');
+      expect(code, file).toBe(1);
+      const finding = JSON.parse(stdout).findings.find((f: { code: string }) => f.code === 'hole-shared');
+      expect(finding, file).toMatchObject({ severity: 'error' });
+      expect(finding.fixes.length, file).toBeGreaterThan(0);
+    }
+    const away = runCli('check', files['pitch-away.json'], '--json');
+    expect(away.code).toBe(0);
+    expect(JSON.parse(away.stdout).findings).toEqual([]);
   });
 });

@@ -24,7 +24,7 @@ describe('sides-mismatched', () => {
     const findings = mismatched(side('left', { placements: pins([329]) }), side('right', { placements: pins([361]) }));
     expect(findings.map((f) => f.panel)).toEqual(['left', 'right']);
     expect(findings[0].severity).toBe('warning');
-    expect(findings[0].message).toBe('The sides of carcass c are not mirror images: shelf pins at 329 mm on left against at 361 mm on right.');
+    expect(findings[0].message).toBe('The sides of carcass c are not mirror images: shelf pins at 329 mm on left but at 361 mm on right.');
     // Either side can be the right one: each mirror is offered, each checked to leave the carcass clean.
     expect(findings[0].fixes.map((f) => f.edits)).toEqual([
       [{ kind: 'copy-side', from: 'left', to: 'right', purposes: ['shelf-pin'] }],

@@ -65,7 +65,7 @@ export function checkSidesMismatched(site: PanelSite): DraftFinding[] {
     const there = unmatched(site, other, site.panel, purpose);
     if (here.length === 0 && there.length === 0) return [];
     const at = (list: Placement[], panel: Panel) => (list.length > 0 ? `at ${heights(list)} mm on ${panel.id}` : `none on ${panel.id}`);
-    return [{ purpose, here, text: `${WORDS[purpose]} ${at(here, site.panel)} against ${at(there, other)}` }];
+    return [{ purpose, here, text: `${WORDS[purpose]} ${at(here, site.panel)} but ${at(there, other)}` }];
   });
   if (differences.length === 0) return [];
   const message = `The sides of carcass ${site.panel.carcass} are not mirror images: ${differences.map((d) => d.text).join('; ')}.`;

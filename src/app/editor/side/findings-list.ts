@@ -2,6 +2,7 @@ import { Component, computed, inject, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import type { Finding } from '../../../../shared/checks';
+import { editedPanels } from '../../../../shared/checks/apply-fix';
 import type { Fix } from '../../../../shared/checks/finding';
 import type { Box } from '../../../../shared/layout/bore';
 import { fixStaysOnPanel } from '../document/commands/apply-finding-fix';
@@ -36,6 +37,12 @@ export class FindingsList {
   protected staysOnPanel(fix: Fix): boolean {
     const panel = this.store.panel();
     return panel !== undefined && fixStaysOnPanel(fix, panel.id);
+  }
+
+  /** The other panels a fix edits, as the job names them. */
+  protected otherPanels(fix: Fix): string {
+    const here = this.store.panel()?.id;
+    return [...new Set(editedPanels(fix))].filter((id) => id !== here).join(', ');
   }
 
   protected showFinding(finding: Finding): void {
