@@ -2,6 +2,7 @@
 // bores, and one 5,000-bore panel against a naive all-pairs check. Run with `npm run bench`.
 import { builtinCatalog } from '../catalog/builtin-catalog';
 import { checkJob, checkPanel } from '../checks/index';
+import { TRIALS_PER_PANEL } from '../checks/settle-fixes';
 import { panelBores } from '../layout/panel-layout';
 import type { JobDocument } from '../model/job-document';
 import { generateJob, perforatedJob } from './generate-job';
@@ -69,19 +70,31 @@ const catalog = builtinCatalog();
 const job = generateJob(100);
 const boreCount = job.panels.reduce((n, p) => n + panelBores(p, catalog, job.system).length, 0);
 const findings = checkJob(job, catalog).length;
-const jobTimes = race({ check: () => checkJob(job, catalog), plain: () => readBores(job), bare: () => readDocument(job) });
-console.log(`Job: ${job.panels.length} panels, ${boreCount} bores, ${findings} findings (medians of ${RUNS} rounds after ${WARM_UP} warm-up)`);
-console.log(`  checkJob                          ${f(jobTimes.check)}`);
+const offered = checkJob(job, catalog).reduce((n, x) => n + x.fixes.length, 0);
+const jobTimes = race({
+  check: () => checkJob(job, catalog, { fixes: false }),
+  fixes: () => checkJob(job, catalog),
+  plain: () => readBores(job),
+  bare: () => readDocument(job),
+});
+console.log(`Job: ${job.panels.length} panels, ${boreCount} bores, ${findings} findings, ${offered} checked fixes (medians of ${RUNS} rounds after ${WARM_UP} warm-up)`);
+console.log(`  checkJob, findings only           ${f(jobTimes.check)}`);
 console.log(`  plain pass (lay out, read bores)  ${f(jobTimes.plain)}   checkJob takes ${(jobTimes.check / jobTimes.plain).toFixed(1)}x`);
 console.log(`  bare read of the document         ${f(jobTimes.bare)}   checkJob takes ${(jobTimes.check / jobTimes.bare).toFixed(0)}x`);
+console.log(`  checkJob with every fix tried     ${f(jobTimes.fixes)}   ${(jobTimes.fixes / jobTimes.check).toFixed(1)}x the findings alone`);
 
 const perforated = perforatedJob();
 const panel = perforated.panels[0];
 const overlapping = checkPanel(perforated, panel, catalog).filter((x) => x.code === 'bores-overlap').length;
-const panelTimes = race({ indexed: () => checkPanel(perforated, panel, catalog), naive: () => allPairs(perforated) });
+const panelTimes = race({
+  indexed: () => checkPanel(perforated, panel, catalog, { fixes: false }),
+  fixes: () => checkPanel(perforated, panel, catalog),
+  naive: () => allPairs(perforated),
+});
 console.log(`Perforated panel: ${panel.bores.length} bores, ${overlapping} bores-overlap findings (all-pairs counts ${allPairs(perforated)})`);
 console.log(`  checkPanel, every check           ${f(panelTimes.indexed)}`);
 console.log(`  all-pairs bores-overlap alone     ${f(panelTimes.naive)}   ${(panelTimes.naive / panelTimes.indexed).toFixed(1)}x slower`);
+console.log(`  checkPanel with every fix tried   ${f(panelTimes.fixes)}   ${(panelTimes.fixes / panelTimes.indexed).toFixed(1)}x the findings alone (at most ${TRIALS_PER_PANEL} full trials a panel)`);
 
 // How fast this machine is, to read the figures above by: a tight loop of 10^8 additions.
 const loop = race({ loop: () => { let s = 0; for (let i = 0; i < 1e8; i++) s += i; return s; } });

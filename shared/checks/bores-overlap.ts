@@ -35,7 +35,7 @@ function movesOf(site: PanelSite, mover: PanelFaceBore, other: PanelFaceBore, we
 /** Either bore may be the one to move; both ways are tried, each checked before it is offered. */
 function remedyFor(site: PanelSite, a: PanelFaceBore, b: PanelFaceBore, web: number): Remedy {
   return {
-    candidates: [movesOf(site, b, a, web), movesOf(site, a, b, web)],
+    candidates: () => [movesOf(site, b, a, web), movesOf(site, a, b, web)],
     advice: `Move ${moverName(b)} or ${moverName(a)} at least ${mm(site.limits.minWeb - web)} further from the other.`,
   };
 }

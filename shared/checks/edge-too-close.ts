@@ -17,7 +17,7 @@ function required(site: PanelSite, bore: PanelBore): number {
 function movedIn(site: PanelSite, bore: PanelFaceBore, direction: [number, number], shift: number): Remedy {
   const step = Math.ceil(shift * 2) / 2;
   const to = { x: bore.x + direction[0] * step, y: bore.y + direction[1] * step };
-  return { candidates: [[moveBoreTo(site, bore, to, `, ${mm(step)} further in`)]], advice: `Move it at least ${mm(shift)} further in.` };
+  return { candidates: () => [[moveBoreTo(site, bore, to, `, ${mm(step)} further in`)]], advice: `Move it at least ${mm(shift)} further in.` };
 }
 
 function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {

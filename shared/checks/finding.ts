@@ -70,9 +70,10 @@ export type Finding = z.output<typeof finding>;
  * A finding as a check first makes it: the fixes it proposes, in groups of alternatives (move the hinge;
  * move the plate), each group's candidates in order of preference (the nearest clear hole, the next …).
  * The checks' runner keeps the first candidate of each group that passes, and the advice when none does.
+ * Candidates are made only when asked for: the checks of a fix's trial run never need their own.
  */
 export interface DraftFinding extends Omit<Finding, 'fixes'> {
-  candidates: Fix[][];
+  candidates: () => Fix[][];
 }
 
 const SEVERITY_RANK: Record<Severity, number> = { error: 0, warning: 1, note: 2 };

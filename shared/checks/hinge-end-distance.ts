@@ -53,7 +53,7 @@ function finding(site: PanelSite, cup: Cup, end: End): DraftFinding | null {
   const id = cup.placed.placement.id;
   const message = `Hinge ${id}'s cup is ${mm(distance)} from ${where} of ${panel.role} ${panel.id}; the outer cups sit 76 to 100 mm from the ends.`;
   const remedy = {
-    candidates: [moves(site, cup, fromEnd, end)],
+    candidates: () => [moves(site, cup, fromEnd, end)],
     advice: `Move the hinge and its plate together so the cup sits 76 to 100 mm from ${where}.`,
   };
   return report(site, 'hinge-end-distance', 'warning', message, [], remedy, [id]);

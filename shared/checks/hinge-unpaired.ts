@@ -34,7 +34,7 @@ function unpairedCups(site: PanelSite): DraftFinding[] {
       plate === undefined
         ? { advice: `Put a mounting plate at height ${formatNumber(wanted)} on ${on[0]}.` }
         : {
-            candidates: [[move(panel, cup, plate.y - dy, 'hinge')], [move(plate.target, plate.plate, wanted, 'plate')]],
+            candidates: () => [[move(panel, cup, plate.y - dy, 'hinge')], [move(plate.target, plate.plate, wanted, 'plate')]],
             advice: `Put a mounting plate at height ${formatNumber(wanted)} on ${on[0]}, or move the hinge to meet a plate no other hinge uses.`,
           };
     return [report(site, 'hinge-unpaired', 'error', message, [], remedy, [cup.id])];
@@ -59,7 +59,7 @@ function unpairedPlates(site: PanelSite): DraftFinding[] {
         : cup === undefined
           ? { advice: 'Add the hinge it carries, or remove the plate.' }
           : {
-              candidates: [[move(panel, plate, cup.y, 'plate')], [move(cup.front, cup.cup, plate.y - (cup.front.hang?.dy ?? 0), 'hinge')]],
+              candidates: () => [[move(panel, plate, cup.y, 'plate')], [move(cup.front, cup.cup, plate.y - (cup.front.hang?.dy ?? 0), 'hinge')]],
               advice: 'Add the hinge it carries, or remove the plate.',
             };
     return [report(site, 'hinge-unpaired', 'error', message, [], remedy, [plate.id])];

@@ -32,7 +32,7 @@ function finding(site: PanelSite, bores: PanelFaceBore[]): DraftFinding {
   const message = `The hole at x ${formatNumber(hole.x)}, y ${formatNumber(hole.y)} on face ${hole.face} (Ø${formatNumber(hole.diameter)}) is needed by ${names.join(' and ')}: one hole carries one fitting.`;
   const movers = [...bores].sort((a, b) => rank(a) - rank(b) || (a.placement! < b.placement! ? -1 : 1)).slice(0, 2);
   return report(site, 'hole-shared', 'error', message, bores, {
-    candidates: movers.map((b) => pitchMoves(site, b)),
+    candidates: () => movers.map((b) => pitchMoves(site, b)),
     advice: `Decide which fitting keeps the hole and move the other to a hole of its own.`,
   });
 }

@@ -54,7 +54,7 @@ function finding(site: PanelSite, placed: PlacedFitting & { fitting: Lift }): Dr
   const effect = asked < range.min ? 'too strong: it can throw the flap open' : 'too weak: the flap can drop';
   const message = `Lift mechanism ${id} covers power factors ${range.min} to ${range.max} ${rangeForWords(rangeFor)}, but flap ${flap.id} asks for ${formatNumber(pf)}${shared}${against}: it is ${effect}.`;
   const advice = 'No mechanism in the catalog covers it: change the flap or ask the mechanism maker.';
-  const remedy = { candidates: [replacements(site, flap, pf, sharing)], advice };
+  const remedy = { candidates: () => [replacements(site, flap, pf, sharing)], advice };
   return report(site, 'lift-out-of-range', 'error', message, [], remedy, [id]);
 }
 

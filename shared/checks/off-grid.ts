@@ -83,7 +83,7 @@ function finding(site: PanelSite, placed: PlacedFitting): DraftFinding | null {
   const distance = Math.hypot(target.x - first.x, target.y - first.y);
   const message = `${capitalize(name)} is off the 32 mm grid: ${boreName(first)} sits at x ${formatNumber(first.x)}, y ${formatNumber(first.y)}, ${mm(distance)} from the nearest system hole.`;
   return report(site, 'off-grid', 'warning', message, off, {
-    candidates: [shifts(site, placed, first, target)],
+    candidates: () => [shifts(site, placed, first, target)],
     advice: `Move it so its holes fall on system holes, ${mm(site.grid.pitch)} apart from x ${formatNumber(site.grid.setback)}, y ${formatNumber(site.grid.firstY)}, and move what it meets with it.`,
   });
 }

@@ -49,6 +49,7 @@ export interface PanelDrafts {
   /** Whether every hole of the panel could be checked: a drillable size and no fitting missing from the catalog. */
   checkable: boolean;
   drafts: DraftFinding[];
+  site: PanelSite;
 }
 
 /** Runs every check on one panel of a job. */
@@ -56,5 +57,5 @@ export function draftPanel(job: JobSite, panel: Panel): PanelDrafts {
   const site = panelSite(job, panel);
   const drafts: DraftFinding[] = [];
   for (const check of site.sized ? PANEL_CHECKS : UNSIZED_CHECKS) drafts.push(...check(site));
-  return { checkable: site.sized && site.layout.unknown.length === 0, drafts: drafts.sort(compareFindings) };
+  return { checkable: site.sized && site.layout.unknown.length === 0, drafts: drafts.sort(compareFindings), site };
 }

@@ -98,9 +98,9 @@ export function collect<T>(items: readonly T[], check: (item: T) => DraftFinding
   return findings;
 }
 
-/** What a check proposes beside its words: groups of candidate fixes (see DraftFinding) and advice. */
+/** What a check proposes beside its words: groups of candidate fixes, made when asked for (see DraftFinding), and advice. */
 export interface Remedy {
-  candidates?: Fix[][];
+  candidates?: () => Fix[][];
   advice?: string;
 }
 
@@ -121,7 +121,7 @@ export function report(
     panel: site.panel.id,
     bores: sortedIds(...bores.map((b) => b.id)),
     placements: sortedIds(...bores.map((b) => b.placement), ...placements),
-    candidates: (remedy.candidates ?? []).filter((group) => group.length > 0),
+    candidates: () => (remedy.candidates?.() ?? []).filter((group) => group.length > 0),
   };
   return remedy.advice ? { ...finding, advice: remedy.advice } : finding;
 }

@@ -73,7 +73,7 @@ export function checkSidesMismatched(site: PanelSite): DraftFinding[] {
   const placements = differences.flatMap((d) => d.here.map((p) => p.id));
   return [
     report(site, 'sides-mismatched', 'warning', message, [], {
-      candidates: [[copyFix(site.panel, other, mismatched)], [copyFix(other, site.panel, mismatched)]],
+      candidates: () => [[copyFix(site.panel, other, mismatched)], [copyFix(other, site.panel, mismatched)]],
       advice: 'Decide which side is right and drill the other as its mirror image.',
     }, placements),
   ];

@@ -1,5 +1,5 @@
 import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
-import { checkPanel } from '../../../shared/checks';
+import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
 import type { Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
@@ -85,7 +85,8 @@ export class EditorStore {
   readonly findings = computed(() => {
     const job = this.job();
     const panel = this.panel();
-    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog()) : [];
+    // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor).
+    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false }) : [];
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
@@ -140,6 +141,13 @@ export class EditorStore {
 
   repeatSelection(count: number, step: number): void {
     this.apply(repeatAlongRow, { selection: this.selection(), count, step });
+  }
+
+  /** A finding of this panel with its fixes tried on a copy of the job; undefined once the panel no longer has it. */
+  fixesFor(finding: Finding): Finding | undefined {
+    const job = this.job();
+    const panel = this.panel();
+    return job && panel ? fixesFor(job, panel, this.catalog(), finding) : undefined;
   }
 
   /** Applies a finding's fix as one undoable step and selects what it moved. */

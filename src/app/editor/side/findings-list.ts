@@ -1,9 +1,9 @@
-import { Component, computed, inject, output } from '@angular/core';
+import { Component, computed, inject, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import type { Finding } from '../../../../shared/checks';
 import { editedPanels } from '../../../../shared/checks/apply-fix';
-import type { Fix } from '../../../../shared/checks/finding';
+import { findingKey, type Fix } from '../../../../shared/checks/finding';
 import type { Box } from '../../../../shared/layout/bore';
 import { fixStaysOnPanel } from '../document/commands/apply-finding-fix';
 import { itemsArea } from '../document/items-area';
@@ -14,8 +14,9 @@ import { EditorStore } from '../editor-store';
 const ICONS = { error: 'error', warning: 'warning', note: 'info' } as const;
 
 /**
- * The shared checks' findings on this panel, worst first; a click selects what they concern and shows it.
- * Each fix the checks offer (already tried on a copy of the job) applies as one undoable step.
+ * The shared checks' findings on this panel, worst first; a click selects what they concern, shows it and
+ * opens the finding: its fixes are then tried on a copy of the job, and each that passes applies as one
+ * undoable step.
  */
 @Component({
   selector: 'bw-findings-list',
@@ -29,6 +30,17 @@ export class FindingsList {
   readonly showArea = output<Box>();
 
   protected readonly icons = ICONS;
+  /** The finding the user opened (by what it is about), whose fixes are tried. */
+  private readonly opened = signal<string | null>(null);
+  protected readonly openedFinding = computed(() => {
+    const key = this.opened();
+    const finding = key === null ? undefined : this.store.findings().find((f) => findingKey(f) === key);
+    return finding && this.store.fixesFor(finding);
+  });
+
+  protected isOpen(finding: Finding): boolean {
+    return this.opened() === findingKey(finding);
+  }
   protected readonly counts = computed(() => {
     const findings = this.store.findings();
     return { error: findings.filter((f) => f.severity === 'error').length, warning: findings.filter((f) => f.severity === 'warning').length };
@@ -49,6 +61,7 @@ export class FindingsList {
     const panel = this.store.panel();
     const layout = this.store.layout();
     if (!panel || !layout) return;
+    this.opened.set(findingKey(finding));
     const loose = new Set(panel.bores.map((b) => b.id));
     this.store.select(selectionOf(finding.placements, finding.bores.filter((id) => loose.has(id))));
     const area = itemsArea(panel, layout, finding.bores, finding.placements);
