@@ -139,6 +139,29 @@ describe('planCarcass: inset doors', () => {
       [56, 601.5],
     ]);
   });
+
+  it('checks with no off-grid finding: the plates are on their own row, 37 mm plus the 19 mm door', () => {
+    // Mounting plates for inset doors: 37 mm + door thickness (trade-reference §2, Popular Woodworking no. 155, published).
+    const findings = checkJob(planToJob(plan), builtinCatalog());
+    expect(findings.filter((f) => f.code === 'off-grid')).toEqual([]);
+  });
+});
+
+describe('planCarcass: a flap hung from the top', () => {
+  it('puts the flap\'s cups 76 to 100 mm from its ends on a 900 mm wide carcass, plates where the cups land', () => {
+    // Outer cup centres 76 to 100 mm from the front's ends (trade-reference §2, common practice). The top is not
+    // line-bored, so its plates follow the cups rather than a system hole counted from the top's end.
+    const plan = planned({ width: 900, fronts: { type: 'flap', reveal: 3 } });
+    const flap = plan.panels.find((p) => p.role === 'flap')!;
+    const cups = flap.placements.map((p) => p.y).sort((a, b) => a - b);
+    const fromEnds = [cups[0], flap.height - cups[cups.length - 1]];
+    for (const d of fromEnds) {
+      expect(d).toBeGreaterThanOrEqual(76);
+      expect(d).toBeLessThanOrEqual(100);
+    }
+    const findings = checkJob(planToJob(plan), builtinCatalog());
+    expect(findings.filter((f) => ['hinge-end-distance', 'hinge-unpaired', 'off-grid', 'hole-shared', 'sides-mismatched'].includes(f.code))).toEqual([]);
+  });
 });
 
 describe('planCarcass: bad input', () => {
