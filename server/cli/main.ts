@@ -1,11 +1,4 @@
-import { adminCommand } from './admin-command';
-import { catalogCommand } from './catalog-command';
-import { checkCommand } from './check-command';
 import { EXIT, processIo, type CliIo } from './cli-io';
-import { packCommand } from './pack-command';
-import { planCommand } from './plan-command';
-import { schemaCommand } from './schema-command';
-import { swapCommand } from './swap-command';
 
 export const USAGE = `Usage: borewright <command> [options]
 
@@ -25,7 +18,19 @@ Exit code: 0 all clear, 1 a check found an error, 2 the command could not run.`;
 
 type Command = (args: string[], io: CliIo) => number | Promise<number>;
 
-const COMMANDS: Record<string, Command> = { admin: (args, io) => adminCommand(args, io), check: checkCommand, pack: packCommand, plan: planCommand, swap: swapCommand, catalog: catalogCommand, schema: schemaCommand };
+/**
+ * Each command loads only what it needs when it runs: a check need not load the PDF, font and database
+ * packages that pack and admin use, which would cost a command more than its work.
+ */
+const COMMANDS: Record<string, () => Promise<Command>> = {
+  admin: async () => (await import('./admin-command')).adminCommand,
+  check: async () => (await import('./check-command')).checkCommand,
+  pack: async () => (await import('./pack-command')).packCommand,
+  plan: async () => (await import('./plan-command')).planCommand,
+  swap: async () => (await import('./swap-command')).swapCommand,
+  catalog: async () => (await import('./catalog-command')).catalogCommand,
+  schema: async () => (await import('./schema-command')).schemaCommand,
+};
 
 /** Runs the command line and returns the exit code. Never throws on bad arguments or files. */
 export async function main(argv: string[], io: CliIo = processIo): Promise<number> {
@@ -34,7 +39,7 @@ export async function main(argv: string[], io: CliIo = processIo): Promise<numbe
     io.out(USAGE);
     return EXIT.ok;
   }
-  const command = Object.hasOwn(COMMANDS, name) ? COMMANDS[name] : undefined;
+  const command = Object.hasOwn(COMMANDS, name) ? await COMMANDS[name]() : undefined;
   if (!command) {
     io.err(`borewright: no command "${name}".\n\n${USAGE}`);
     return EXIT.unusable;

@@ -28,5 +28,8 @@ export default async function setup(project: TestProject): Promise<() => void> {
   writeFileSync(demo, await handle.dumpDataDir!());
   await handle.close();
   project.provide('dbTemplates', { empty, demo });
+  // The command line's specs spawn bin/borewright.mjs in parallel: its bundle is built once, here, before them.
+  const { freshBundle } = await import('../../scripts/server-bundle.mjs');
+  await freshBundle('cli');
   return () => rmSync(dir, { recursive: true, force: true });
 }
