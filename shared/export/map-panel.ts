@@ -1,8 +1,8 @@
-import { planBox, type PanelEdgeBore } from '../layout/bore';
+import { planBox } from '../layout/bore';
 import type { Edge } from '../model/job-document';
 import { boreMark, tint } from './bore-marks';
 import { line, text, type Shape } from './drawing';
-import { viewPoint, type MapView } from './map-view';
+import { viewPoint, type EdgeHole, type MapView } from './map-view';
 import { INK, MUTED, PURPOSE_STYLES } from './palette';
 
 /** Room between the outline and an edge strip, mm. */
@@ -37,7 +37,7 @@ function sheetSide(view: MapView, edge: Edge): keyof Reach {
  * side next to the panel, each bore a circle of its diameter at its position along the edge and its height
  * from face A, so the strip can be laid against the edge like the face template.
  */
-function edgeStrip(view: MapView, edge: Edge, bores: PanelEdgeBore[]): Shape[] {
+function edgeStrip(view: MapView, edge: Edge, bores: EdgeHole[]): Shape[] {
   const { width: W, height: H, thickness: T } = view.panel;
   const side = sheetSide(view, edge);
   const shapes: Shape[] = [];
@@ -56,7 +56,7 @@ function edgeStrip(view: MapView, edge: Edge, bores: PanelEdgeBore[]): Shape[] {
 }
 
 /** An edge bore's path through the board, seen through face A: a light dashed outline of how far it runs. */
-function hiddenPath(view: MapView, bore: PanelEdgeBore): Shape {
+function hiddenPath(view: MapView, bore: EdgeHole): Shape {
   const [x0, y0, x1, y1] = planBox(bore, view.panel);
   const p = viewPoint(view, x0, y0);
   const q = viewPoint(view, x1, y1);
