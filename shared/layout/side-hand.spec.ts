@@ -51,7 +51,7 @@ describe('sideHands', () => {
     );
     const hands = sideHands(job);
     expect(hands.size).toBe(0);
-    expect(handText(job.panels[0], undefined)).toBe('Side not told left or right: mark it before drilling');
+    expect(handText(job.panels[0], undefined)).toBe('side not told left or right: mark it');
     expect(handText(job.panels[2], undefined)).toBeUndefined();
   });
 });

@@ -60,8 +60,8 @@ export function sideHands(job: JobDocument): Map<string, SideHand> {
   return hands;
 }
 
-/** A side's hand as the bench reads it: `LEFT side (as seen from the front)`, or a word to mark it when unknown. */
+/** A side's hand as the bench reads it: `LEFT side (seen from the front)`, or a word to mark it when unknown; nothing for other panels. */
 export function handText(panel: Panel, hand: SideHand | undefined): string | undefined {
   if (panel.role !== 'side') return undefined;
-  return hand ? `${hand.hand.toUpperCase()} side (as seen from the front)` : 'Side not told left or right: mark it before drilling';
+  return hand ? `${hand.hand.toUpperCase()} side (seen from the front)` : 'side not told left or right: mark it';
 }
