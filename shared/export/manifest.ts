@@ -26,7 +26,7 @@ export interface PackManifest {
   /** Every finding of the checks the pack was made with (a pack for a job with errors is still made). */
   findingList: { severity: Severity; code: FindingCode; panel: string; message: string }[];
   /** The files at the top of the pack, by what they are. */
-  sheets: { cover: string; labels: string; readme: string; holeSchedule: string; hardwareList: string };
+  sheets: { cover: string; labels?: string; readme: string; holeSchedule: string; hardwareList: string };
   /** How the DXF files name their layers, and the layers this pack's files use. */
   dxfLayers: typeof DXF_LAYER_SCHEME & { used: string[] };
   /** Each panel's files; `hasErrors` when its files say "has errors"; `side` for a carcass side whose hand the job tells. */

@@ -109,9 +109,14 @@ export function planPack(input: PackInput): Pack {
       const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels, files: FIXED });
       return drawingsPdf(pages, pdfOptions('cover sheet'));
     }),
-    fixed(FIXED.labels, 'panel labels', false, () =>
-      labelsPdf({ ctx, panels: carcassOrder(job.carcasses, job.panels), paper: input.paper, ...(input.labelLink ? { link: input.labelLink } : {}) }, pdfOptions('panel labels')),
-    ),
+    // A pack of no panels (a retrofit that needs none) has nothing to label.
+    ...(job.panels.length === 0
+      ? []
+      : [
+          fixed(FIXED.labels, 'panel labels', false, () =>
+            labelsPdf({ ctx, panels: carcassOrder(job.carcasses, job.panels), paper: input.paper, ...(input.labelLink ? { link: input.labelLink } : {}) }, pdfOptions('panel labels')),
+          ),
+        ]),
     fixed(FIXED.readme, 'README', true, async () => utf8Bytes(packReadme(ctx, input.paper, FIXED, tally('error')))),
     fixed(FIXED.schedule, 'hole schedule', true, async () => utf8Bytes(holeScheduleCsv(ctx, drilling))),
     fixed(FIXED.hardware, 'hardware list', true, async () => utf8Bytes(hardwareListCsv(hardware))),
@@ -144,7 +149,7 @@ export function planPack(input: PackInput): Pack {
         paper: input.paper,
         findings: { error: tally('error'), warning: tally('warning'), note: tally('note') },
         findingList: findings.map(({ severity, code, panel, message }) => ({ severity, code, panel, message })),
-        sheets: { cover: FIXED.cover, labels: FIXED.labels, readme: FIXED.readme, holeSchedule: FIXED.schedule, hardwareList: FIXED.hardware },
+        sheets: { cover: FIXED.cover, ...(job.panels.length > 0 ? { labels: FIXED.labels } : {}), readme: FIXED.readme, holeSchedule: FIXED.schedule, hardwareList: FIXED.hardware },
         dxfLayers: { ...DXF_LAYER_SCHEME, used: [...new Set(drilling.flatMap((d) => d.holes.map(layerOf)))].sort() },
         panels: drilling.map(({ panel, holes, errors, hand }) => ({
           id: panel.id,
