@@ -3,9 +3,9 @@ import { checkBarBlock } from './check-bar';
 import { text, translate, type Drawing, type Shape } from './drawing';
 import { faceText, fittingNameOf, type ExportContext } from './export-context';
 import { boreGroups, boreTable, type BoreGroup } from './map-bore-table';
-import { ordinateDimensions } from './map-dimensions';
+import { ordinateDimensions, ordinateReach } from './map-dimensions';
 import { legend } from './map-legend';
-import { panelFigure } from './map-panel';
+import { figureReach, panelFigure } from './map-panel';
 import { mapViews, referenceSide, type MapView } from './map-view';
 import { INK } from './palette';
 import type { PanelDrilling } from './panel-drilling';
@@ -69,16 +69,16 @@ function flow(blocks: readonly Block[], width: number): Block {
  * The panel of a map at full size with its holes, edge strips and ordinate dimensions, from the top left of
  * all it reaches: what the template sheets tile, and nothing else.
  */
-export function mapFigure(view: MapView): Block & { outline: { x: number; y: number } } {
+export function mapFigure(view: MapView): Block {
   const figure = panelFigure(view);
   const dims = ordinateDimensions(view, figure.reach);
-  const { reach } = dims;
-  return {
-    shapes: translate([...figure.shapes, ...dims.shapes], reach.left, reach.top),
-    width: reach.left + view.panel.width + reach.right,
-    height: reach.top + view.panel.height + reach.bottom,
-    outline: { x: reach.left, y: reach.top },
-  };
+  return { shapes: translate([...figure.shapes, ...dims.shapes], dims.reach.left, dims.reach.top), ...mapFigureSize(view) };
+}
+
+/** The size of a map's figure, worked out without drawing it: what the cover sheet counts template pages by. */
+export function mapFigureSize(view: MapView): { width: number; height: number } {
+  const reach = ordinateReach(view, figureReach(view));
+  return { width: reach.left + view.panel.width + reach.right, height: reach.top + view.panel.height + reach.bottom };
 }
 
 /** What goes beside the figure: the title block, the bore table's groups, the legend, a 100 mm check bar and the notes. */

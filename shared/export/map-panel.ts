@@ -77,7 +77,7 @@ function hiddenPath(view: MapView, bore: EdgeHole): Shape {
  * face the map is for.
  */
 export function panelFigure(view: MapView): PanelFigure {
-  const { width: W, height: H, thickness: T } = view.panel;
+  const { width: W, height: H } = view.panel;
   const shapes: Shape[] = [{ kind: 'rect', x: 0, y: 0, width: W, height: H, stroke: { color: INK, width: 0.5 } }];
   const refX = view.face === 'A' ? 0 : W;
   shapes.push(line(refX, 0, refX, H, { color: INK, width: 1.2 }));
@@ -89,12 +89,16 @@ export function panelFigure(view: MapView): PanelFigure {
     const at = viewPoint(view, bore.x, bore.y);
     shapes.push(boreMark(bore, at.x, at.y));
   }
-  const reach: Reach = { left: 0, right: 0, top: 0, bottom: 0 };
   for (const edge of EDGES) {
     const bores = view.edgeBores.filter((b) => b.edge === edge);
-    if (bores.length === 0) continue;
-    shapes.push(...edgeStrip(view, edge, bores));
-    reach[sheetSide(view, edge)] = STRIP_GAP + T;
+    if (bores.length > 0) shapes.push(...edgeStrip(view, edge, bores));
   }
-  return { shapes, reach };
+  return { shapes, reach: figureReach(view) };
+}
+
+/** How far a map's figure reaches beyond the outline: an edge strip on each side whose edge has holes. */
+export function figureReach(view: MapView): Reach {
+  const reach: Reach = { left: 0, right: 0, top: 0, bottom: 0 };
+  for (const edge of EDGES) if (view.edgeBores.some((b) => b.edge === edge)) reach[sheetSide(view, edge)] = STRIP_GAP + view.panel.thickness;
+  return reach;
 }

@@ -16,7 +16,7 @@ import { jobDrilling } from './panel-drilling';
 import { layerOf } from './panel-dxf';
 import { panelFiles, type ExportFile, type PanelFileOptions } from './panel-files';
 import { drawingsPdf } from './pdf-document';
-import { panelTemplates, templatePageCount } from './template-pdf';
+import { templateSheetCount } from './template-pdf';
 import { utf8Bytes } from './utf8';
 
 export interface PackInput extends PanelFileOptions {
@@ -104,8 +104,8 @@ export function planPack(input: PackInput): Pack {
   const fixed = (name: string, label: string, compress: boolean, produce: () => Promise<Uint8Array>) => ({ path: name, file: { name, label, compress, produce } });
   const entries: { path: string; file: ExportFile }[] = [
     fixed(FIXED.cover, 'cover sheet', false, () => {
-      // The sheets to print are counted as the template files will lay them out.
-      const panels = drilling.map((d) => ({ drilling: d, sheets: templatePageCount(panelTemplates(ctx, d, input.paper)) }));
+      // The sheets to print, counted as the template files lay them out.
+      const panels = drilling.map((d) => ({ drilling: d, sheets: templateSheetCount(ctx, d, input.paper) }));
       const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels, files: FIXED });
       return drawingsPdf(pages, pdfOptions('cover sheet'));
     }),

@@ -11,7 +11,7 @@ import { planned } from '../testing/planned-carcass';
 import type { ExportContext } from './export-context';
 import { jobDrilling } from './panel-drilling';
 import { templateWindow, type PaperName } from './paper';
-import { panelTemplates, templateSheetsPdf } from './template-pdf';
+import { panelTemplates, templateSheetCount, templateSheetsPdf } from './template-pdf';
 import type { Shape, TextShape } from './drawing';
 import { estimateTextWidth } from './text-width';
 import { TILE_OVERLAP } from './tiles';
@@ -134,6 +134,8 @@ describe('template sheets', () => {
     const doc = await PDFDocument.load(bytes);
     expect(plans[0].plan.tiles.length).toBeGreaterThan(20);
     expect(doc.getPageCount()).toBe(plans[0].info.pageCount + plans[0].plan.tiles.length);
+    // The cover sheet's count, made without drawing the figure, is the file's.
+    expect(templateSheetCount(ctx, jobDrilling(ctx.job, ctx.catalog, [])[4], 'a4')).toBe(doc.getPageCount());
   });
 
   it('hold no page objects but the pages printed: the figures are form XObjects', async () => {
@@ -171,6 +173,7 @@ describe('a 320 × 723 mm wall-unit side on A4', () => {
     expect(plans).toHaveLength(1);
     expect(face.info.pageCount).toBe(1);
     expect((await PDFDocument.load(bytes)).getPageCount()).toBe(9);
+    expect(templateSheetCount(wall, jobDrilling(job, wall.catalog, [])[index], 'a4')).toBe(9);
   });
 
   it('cuts no text at a sheet edge: the information sheet and every page label lie wholly on their page, every text of the panel wholly on some page', async () => {

@@ -1,7 +1,7 @@
 import { translate, type Drawing } from './drawing';
-import { mapFigure, mapTitle, orientationText } from './drilling-map';
+import { mapFigure, mapFigureSize, mapTitle, orientationText } from './drilling-map';
 import type { ExportContext } from './export-context';
-import { mapViews } from './map-view';
+import { mapViews, type MapView } from './map-view';
 import type { PageFlow } from './page-flow';
 import type { PanelDrilling } from './panel-drilling';
 import type { PaperName } from './paper';
@@ -24,25 +24,41 @@ export interface MapTemplate {
   plan: TilePlan;
 }
 
-/** Lays out the templates of each map of a panel on the paper: what the PDF prints and what the cover sheet counts. */
+/** The pages a map's figure is tiled onto, planned from its size alone. */
+function tilePlan(view: MapView, paper: PaperName): TilePlan {
+  const { width, height } = mapFigureSize(view);
+  return planTiles(width + 2 * FIGURE_MARGIN, height + 2 * FIGURE_MARGIN, paper);
+}
+
+/** Lays out the templates of each map of a panel on the paper: what the PDF prints. */
 export function panelTemplates(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): MapTemplate[] {
   return mapViews(drilling.panel, drilling.holes).map((view) => {
     const figure = mapFigure(view);
+    const plan = tilePlan(view, paper);
     const drawing: Drawing = {
       width: figure.width + 2 * FIGURE_MARGIN,
       height: figure.height + 2 * FIGURE_MARGIN,
       title: mapTitle(ctx, view),
       shapes: translate(figure.shapes, FIGURE_MARGIN, FIGURE_MARGIN),
     };
-    const plan = planTiles(drawing.width, drawing.height, paper);
     const facts: PageFacts = { title: drawing.title, orientation: orientationText(drilling, view), ...(drilling.errors > 0 ? { errors: checksText(drilling) } : {}) };
     return { facts, info: templateInfo(ctx, drilling, view, plan, paper), figure: drawing, plan };
   });
 }
 
 /** How many pages a panel's template file has: each map's information sheets and its tiles. */
-export function templatePageCount(templates: readonly MapTemplate[]): number {
+export function templatePageCount(templates: readonly Pick<MapTemplate, 'info' | 'plan'>[]): number {
   return templates.reduce((n, t) => n + t.info.pageCount + t.plan.tiles.length, 0);
+}
+
+/** How many pages a panel's template file will have, counted without drawing its figures: for the cover sheet. */
+export function templateSheetCount(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): number {
+  return templatePageCount(
+    mapViews(drilling.panel, drilling.holes).map((view) => {
+      const plan = tilePlan(view, paper);
+      return { plan, info: templateInfo(ctx, drilling, view, plan, paper) };
+    }),
+  );
 }
 
 /**
