@@ -17,8 +17,11 @@ function holeKey(bore: PanelBore): string {
   return bore.kind === 'face' ? `${bore.face}:${n(bore.x)}:${n(bore.y)}:${n(bore.diameter)}` : `${bore.edge}:${n(bore.at)}:${n(bore.z)}:${n(bore.diameter)}`;
 }
 
-/** A bucket of face holes 0.01 mm wide, so that `isSameHole`'s tolerance needs only the neighbouring buckets. */
-const bucket = (face: string, i: number, j: number) => `${face} ${i} ${j}`;
+/**
+ * A bucket of face holes 0.01 mm wide, so that `isSameHole`'s tolerance needs only the neighbouring buckets,
+ * as one number: a panel's coordinates stay within ±6000 mm, 1.2 million steps each way.
+ */
+const bucket = (face: string, i: number, j: number) => ((face === 'A' ? 0 : 1) * 2_000_000 + i + 1_000_000) * 2_000_000 + j + 1_000_000;
 
 /**
  * A panel's holes, each drilled once whoever needs it: face bores that are one hole by the checks' rule
@@ -28,7 +31,7 @@ const bucket = (face: string, i: number, j: number) => `${face} ${i} ${j}`;
  */
 export function panelHoles(bores: readonly PanelBore[]): PanelHole[] {
   const holes: PanelHole[] = [];
-  const buckets = new Map<string, number[]>();
+  const buckets = new Map<number, number[]>();
   const keys = new Map<string, number>();
   const keyOf = (bore: PanelBore) => {
     const key = holeKey(bore);
@@ -52,7 +55,9 @@ export function panelHoles(bores: readonly PanelBore[]): PanelHole[] {
     }
     if (same < 0) {
       const at = bucket(bore.face, i, j);
-      buckets.set(at, [...(buckets.get(at) ?? []), holes.length]);
+      const inBucket = buckets.get(at);
+      if (inBucket) inBucket.push(holes.length);
+      else buckets.set(at, [holes.length]);
       holes.push({ ...bore, key: keyOf(bore), bores: [bore.id] });
       continue;
     }
