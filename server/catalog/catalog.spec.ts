@@ -122,11 +122,13 @@ describe('the catalog API', () => {
       .split(/\r?\n/)
       .filter((line) => line.includes('hinge/'))
       .map((line) => line.split(',').slice(3, 9));
+    // Each hole by its key (face, x, y, diameter); the last column names the bore it drills.
     expect(rows).toEqual([
-      ['hinge/cup', 'A', '21.5', '100', '', '35'],
-      ['hinge/fix-1', 'A', '27', '74', '', '8'],
-      ['hinge/fix-2', 'A', '27', '126', '', '8'],
+      ['A:21.5:100:35', 'A', '21.5', '100', '', '35'],
+      ['A:27:74:8', 'A', '27', '74', '', '8'],
+      ['A:27:126:8', 'A', '27', '126', '', '8'],
     ]);
+    expect(csv).toContain('hinge/fix-2');
     expect(csv).toContain('Cup hinge, full overlay, 52/5.5');
   }, 60_000);
 

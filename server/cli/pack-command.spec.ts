@@ -38,7 +38,7 @@ describe('borewright pack', () => {
     const { zip, root, manifest } = await readPack(out);
     expect(manifest.format).toBe('borewright.pack/1');
     expect(manifest.job.name).toBe('Shelf unit');
-    expect(manifest.files.map((f) => f.path)).toEqual(['cover sheet.pdf', 'hole schedule.csv', 'hardware list.csv', 'no carcass/Left side face A.svg', 'no carcass/Left side.dxf', 'no carcass/Left side templates A4.pdf']);
+    expect(manifest.files.map((f) => f.path)).toEqual(['cover sheet.pdf', 'panel labels.pdf', 'README.txt', 'hole schedule.csv', 'hardware list.csv', 'no carcass/Left side face A.svg', 'no carcass/Left side.dxf', 'no carcass/Left side templates A4.pdf']);
     for (const entry of manifest.files) {
       const bytes = await zip.file(`${root}/${entry.path}`)!.async('uint8array');
       // node:crypto recomputes each hash from the bytes the zip gives back.

@@ -13,8 +13,9 @@ import { progressLine, type ProgressStream } from './progress-line';
 export const PACK_USAGE = `Usage: borewright pack <job.json> -o <pack.zip> [--paper a4|letter] [--catalog <fittings.json>]
 
 Writes the bench pack of a job document: per panel its drilling maps (SVG), a DXF file and template
-sheets to print at 100 % (PDF), in a folder per carcass; a cover sheet, the hole schedule, the hardware
-list and a manifest with the SHA-256 of every file.
+sheets to print at 100 % (PDF), in a folder per carcass, all drawn from one list of the panel's holes;
+a cover sheet (the order of work, what the pack holds), panel labels, a README sheet (the files and the
+DXF layer names), the hole schedule, the hardware list and a manifest with the SHA-256 of every file.
   -o, --output <file>    the zip to write
   --paper a4|letter      the paper the template sheets are tiled onto (default a4)
   --catalog <file>       add a shop's own fittings to the built-in catalog

@@ -16,9 +16,9 @@ function sendFile(res: Response, file: packs.DownloadFile): void {
 }
 
 /** Streams a job's pack as a zip; each file is made when the zip reaches it, so no length is known up front. */
-async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter'): Promise<void> {
+async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string): Promise<void> {
   const date = context.clock();
-  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date);
+  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date, origin);
   res.attachment(fileName).type('application/zip');
   // Once the first bytes are out, a failure can only cut the download short; the error handler then
   // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
@@ -54,7 +54,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/jobs/:jobId/pack.zip', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
     const { paper } = paperQuery.parse(req.query);
-    await streamPack(res, context, jobId, paper);
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req));
   });
 
   router.post('/jobs/:jobId/pack/send', requirePermission('editJobs'), jsonBody, async (req, res) => {
@@ -65,6 +65,6 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   // No sign-in: the signed token is the permission, for a recipient without an account.
   router.get('/pack-links/:token', async (req, res) => {
     const { jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
-    await streamPack(res, context, jobId, paper);
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config));
   });
 }

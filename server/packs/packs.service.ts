@@ -1,15 +1,16 @@
+import { benchPanelPath } from '../../shared/api/label-contract';
 import type { JobFindings } from '../../shared/api/pack-contract';
-import { checkJob } from '../../shared/checks/index';
+import { checkJob, checkPanel } from '../../shared/checks/index';
 import { panelDrillingMaps } from '../../shared/export/drilling-map';
 import type { ExportContext } from '../../shared/export/export-context';
 import { mapViews } from '../../shared/export/map-view';
 import { planPack, type Pack } from '../../shared/export/pack';
 import { safeSegment } from '../../shared/export/pack-paths';
-import { panelBores } from '../../shared/layout/panel-layout';
 import type { PaperName } from '../../shared/export/paper';
+import { panelDrilling } from '../../shared/export/panel-drilling';
 import { panelDxf } from '../../shared/export/panel-dxf';
 import { drawingToSvg } from '../../shared/export/svg-render';
-import { templateSheetsPdf } from '../../shared/export/template-pdf';
+import { panelTemplates, templateSheetsPdf } from '../../shared/export/template-pdf';
 import type { Face } from '../../shared/model/job-document';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
@@ -28,45 +29,50 @@ export interface DownloadFile {
 
 /**
  * The export context of a stored job: the job as a document, the shop's catalog (the built-in fittings and
- * the shop's own), now, and each panel's stored version for the title blocks.
+ * the shop's own), now, and each panel's stored version for the title blocks; with each panel's database id.
  */
-async function jobContext(db: Database, jobId: number, date: Date): Promise<ExportContext> {
+async function jobContext(db: Database, jobId: number, date: Date): Promise<ExportContext & { panelIds: ReadonlyMap<string, number> }> {
   const rows = await loadJobRows(db, jobId);
   if (!rows) throw notFound(`Job ${jobId}`);
   const versions = new Map(rows.panels.map((p) => [p.key, p.version]));
-  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key) };
+  const panelIds = new Map(rows.panels.map((p) => [p.key, p.id]));
+  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key), panelIds };
 }
 
-/** One stored panel with its job's export context and its bores laid out. */
+/**
+ * One stored panel with its job's export context and its holes laid out, with the errors the checks find
+ * on it (its files then say "has errors") and, for a side, its hand.
+ */
 async function panelContext(db: Database, panelId: number, date: Date) {
   const row = await findPanel(db, panelId);
   if (!row) throw notFound(`Panel ${panelId}`);
   const ctx = await jobContext(db, row.jobId, date);
   const panel = ctx.job.panels.find((p) => p.id === row.key);
   if (!panel) throw notFound(`Panel ${panelId}`);
-  return { ctx, panel, bores: panelBores(panel, ctx.catalog, ctx.job.system), base: safeSegment(panel.name, panel.id) };
+  const drilling = panelDrilling(ctx.job, ctx.catalog, panel, checkPanel(ctx.job, panel, ctx.catalog));
+  return { ctx, panel, drilling, base: safeSegment(panel.name, panel.id) };
 }
 
-/** A panel's drilling map of one face as SVG, full size; face B only when the panel has face B bores. */
+/** A panel's drilling map of one face as SVG, full size; face B only when the panel has face B holes. */
 export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, bores, base } = await panelContext(db, panelId, date);
-  const index = mapViews(panel, bores).findIndex((view) => view.face === face);
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+  const index = mapViews(panel, drilling.holes).findIndex((view) => view.face === face);
   if (index < 0) throw new AppError(404, 'no-such-map', `Panel ${panelId} has no bores on face ${face}, so it has no drilling map of that face.`);
   const newWindow = await svgWindows();
-  const svg = drawingToSvg(panelDrillingMaps(ctx, panel, bores)[index], newWindow());
+  const svg = drawingToSvg(panelDrillingMaps(ctx, drilling)[index], newWindow());
   return { name: `${base} face ${face}.svg`, type: 'image/svg+xml', bytes: svg };
 }
 
 /** A panel's DXF file, in millimetres. */
 export async function drillingDxf(db: Database, panelId: number, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, bores, base } = await panelContext(db, panelId, date);
-  return { name: `${base}.dxf`, type: 'application/dxf', bytes: panelDxf(ctx, panel, bores) };
+  const { ctx, drilling, base } = await panelContext(db, panelId, date);
+  return { name: `${base}.dxf`, type: 'application/dxf', bytes: panelDxf(ctx, drilling) };
 }
 
 /** A panel's template sheets, to print at 100 % on the paper asked for. */
 export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, bores, base } = await panelContext(db, panelId, date);
-  const bytes = await templateSheetsPdf(panelDrillingMaps(ctx, panel, bores), paper, {
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+  const bytes = await templateSheetsPdf(panelTemplates(ctx, drilling, paper), {
     ...(await pdfTools()),
     title: `${ctx.job.name}: ${panel.name}, template sheets`,
     date,
@@ -75,10 +81,14 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
   return { name: `${base} templates ${paper === 'a4' ? 'A4' : 'US Letter'}.pdf`, type: 'application/pdf', bytes };
 }
 
-/** A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. */
-export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date): Promise<{ pack: Pack; fileName: string; jobName: string }> {
+/**
+ * A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. Its panel
+ * labels' codes open the bench page on each panel at `origin`.
+ */
+export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<{ pack: Pack; fileName: string; jobName: string }> {
   const ctx = await jobContext(db, jobId, date);
-  const pack = planPack({ ctx, paper, ...(await packTools()) });
+  const labelLink = (panel: { id: string }) => `${origin}${benchPanelPath(jobId, ctx.panelIds.get(panel.id)!)}`;
+  const pack = planPack({ ctx, paper, labelLink, ...(await packTools()) });
   return { pack, fileName: `${pack.root}.zip`, jobName: ctx.job.name };
 }
 

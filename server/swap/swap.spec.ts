@@ -115,7 +115,7 @@ describe('swap check API', () => {
       // Three runners a side at y 41, 265 and 521; the 400 runner's rear screws 160 and 320 behind the
       // front one on the 37 mm row (trade-reference §6, common practice): x = 197 and 357. Nothing else.
       const schedule = Papa.parse<Record<string, string>>((await zip.file(`${root}/hole schedule.csv`)!.async('string')).trim(), { header: true }).data;
-      const holes = schedule.map((row) => [row['panel'], row['bore'], row['x'], row['y']]);
+      const holes = schedule.map((row) => [row['panel'], row['bores'], row['x'], row['y']]);
       const expected = ['drawer-base-left', 'drawer-base-right'].flatMap((side) =>
         ['runner-1', 'runner-2', 'runner-3'].flatMap((runner, i) =>
           [['rear-1', '197'], ['rear-2', '357']].map(([hole, x]) => [side, `${runner}/${hole}`, x, String([41, 265, 521][i])]),

@@ -1,4 +1,5 @@
 import type { PanelBore } from '../layout/bore';
+import type { PanelHole } from './panel-holes';
 import type { Shape, Stroke, SymbolShape } from './drawing';
 import { line, text } from './drawing';
 import { INK, PURPOSE_STYLES } from './palette';
@@ -30,9 +31,10 @@ function boreLabel(bore: PanelBore): string {
 /**
  * A bore drawn centred on (cx, cy): its circle at full size in its purpose's colour (dashed on face B,
  * tinted when through), a centre cross to prick through the paper, and its letter and depth beside it.
- * A symbol, since a panel repeats the same few marks many times (a side's system holes).
+ * A symbol, since a panel repeats the same few marks many times (a side's system holes), named by the
+ * hole's key so that a reader of the file can tell which hole of the pack it is.
  */
-export function boreMark(bore: PanelBore, cx: number, cy: number): SymbolShape {
+export function boreMark(bore: PanelHole, cx: number, cy: number): SymbolShape {
   const { color } = PURPOSE_STYLES[bore.purpose];
   const r = bore.diameter / 2;
   const faceB = bore.kind === 'face' && bore.face === 'B';
@@ -54,5 +56,5 @@ export function boreMark(bore: PanelBore, cx: number, cy: number): SymbolShape {
     text(left + diagonal + 0.4, top - diagonal - 0.4, label, LABEL_SIZE, color),
   ];
   const id = ['bore', bore.diameter, faceB ? 'B' : 'A', through ? 'through' : 'blind', color, label].join(' ');
-  return { kind: 'symbol', id, x: cx - left, y: cy - top, drawing: { width, height, title: label, shapes } };
+  return { kind: 'symbol', id, hole: bore.key, x: cx - left, y: cy - top, drawing: { width, height, title: label, shapes } };
 }

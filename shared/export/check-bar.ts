@@ -53,8 +53,14 @@ const CHECK_BAR_NOTE: readonly string[] = [
   'Not exactly 100 mm? The print is not to scale: do not drill from it.',
 ];
 
-/** A check bar with its note beneath, drawn from its top left, as a block of a drawing. */
+let block: { shapes: Shape[]; width: number; height: number } | undefined;
+
+/** A check bar with its note beneath, drawn from its top left, as a block of a drawing: the same everywhere, laid out once. */
 export function checkBarBlock(): { shapes: Shape[]; width: number; height: number } {
+  return (block ??= drawCheckBarBlock());
+}
+
+function drawCheckBarBlock(): { shapes: Shape[]; width: number; height: number } {
   const shapes = [...checkBar(0, 2, true), ...CHECK_BAR_NOTE.map((note, i) => text(0, 13 + 4.2 * i, note, 2.8, INK))];
   const width = Math.max(CHECK_BAR_LENGTH + 6, ...CHECK_BAR_NOTE.map((note) => estimateTextWidth(note, 2.8)));
   return { shapes, width, height: 13 + 4.2 * (CHECK_BAR_NOTE.length - 1) + 2 };

@@ -2,12 +2,12 @@ import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
 import { describe, expect, it } from 'vitest';
 import { pdfTools } from '../../server/export/export-platform';
 import { checkJob } from '../checks/index';
-import { panelBores } from '../layout/panel-layout';
 import type { JobDocument } from '../model/job-document';
 import { clashPanel, exportContext, exportJob } from '../testing/export-job';
 import { CAUTION_DEFERRAL, cautionsFor } from './cautions';
 import { coverSheet } from './cover-sheet';
 import { hardwareList } from './hardware-list';
+import { jobDrilling } from './panel-drilling';
 import { drawingsPdf } from './pdf-document';
 
 const tools = await pdfTools();
@@ -15,13 +15,16 @@ const tools = await pdfTools();
 /** The cover sheet's text as pdfjs-dist reads it from the PDF, page after page. */
 async function coverText(job: JobDocument): Promise<{ text: string; pages: number }> {
   const ctx = exportContext(job);
+  const findings = checkJob(job, ctx.catalog);
+  const drilling = jobDrilling(job, ctx.catalog, findings);
   const pages = coverSheet({
     ctx,
     paper: 'a4',
-    findings: checkJob(job, ctx.catalog),
-    panels: job.panels.map((panel) => ({ panel, bores: panelBores(panel, ctx.catalog, job.system).length })),
-    hardware: hardwareList(ctx),
+    findings,
+    panels: drilling.map((d, i) => ({ drilling: d, sheets: i + 1 })),
+    hardware: hardwareList(ctx, drilling),
     cautions: cautionsFor(job, ctx.catalog),
+    files: { labels: 'panel labels.pdf', readme: 'README.txt', schedule: 'hole schedule.csv', hardware: 'hardware list.csv', manifest: 'manifest.json' },
   });
   const bytes = await drawingsPdf(pages, { ...tools, title: 'cover', date: ctx.date, producer: 'test' });
   const doc = await getDocument({ data: bytes, disableFontFace: true, useSystemFonts: false }).promise;
@@ -64,6 +67,23 @@ describe('cover sheet', () => {
     for (const panel of job.panels) expect(text).toContain(panel.id);
     expect(text).toContain('drilled');
     expect(text).toContain('Cup hinge, full overlay, 45/9.5');
+  });
+
+  it('starts with the order of work and says, carcass by carcass, what the pack holds', async () => {
+    const { text } = await coverText(exportJob());
+    const flat = text.replace(/\s+/g, ' ');
+    expect(flat.indexOf('Read me first: the order of work')).toBeLessThan(flat.indexOf('Safety: read before drilling and fitting'));
+    expect(flat).toContain('1. Read the safety notes and the findings below.');
+    expect(flat).toContain('Print "panel labels.pdf" and stick each label on its panel');
+    // Base unit: the side, the bottom and the door, with the sheets given them here (1 + 2 + 3).
+    expect(flat).toContain('Carcass: Base unit');
+    expect(flat).toContain('3 panels, 6 template sheets to print on A4.');
+    // Two hinge cups (Ø35) with their four fixing holes (Ø8), one cam (Ø15) and its bolt hole, the side's face B hole and two edge dowels (Ø8), one through hole (Ø7), and
+    // 44 system holes with the plate, pin and runner screws in them drilled once, the runner's own and the edge pilot (Ø5).
+    expect(flat).toContain('Holes by diameter: Ø35: 2, Ø15: 1, Ø8: 8, Ø7: 1, Ø5: 47.');
+    expect(flat).toContain('Hardware to fetch: Cam connector, Ø15 cam: 1; Cup hinge, full overlay, 45/9.5: 2; Mounting plate, 0 mm: 2;');
+    expect(flat).toContain('Sides: Base unit, left side: LEFT side (seen from the front).');
+    expect(flat).toContain('Panels in no carcass 1 panel, 4 template sheets to print on A4. Holes by diameter: Ø8: 1. Hardware to fetch: none.');
   });
 
   it('runs onto as many pages as a long job needs, each numbered', async () => {

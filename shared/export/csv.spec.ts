@@ -1,6 +1,5 @@
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { panelBores } from '../layout/panel-layout';
 import { exportContext, exportJob } from '../testing/export-job';
 import { hardwareList, hardwareListCsv } from './hardware-list';
 import { holeScheduleCsv } from './hole-schedule';
@@ -19,8 +18,10 @@ function read(csv: string): string[][] {
   return result.data;
 }
 
+const drilling = jobDrilling(ctx.job, ctx.catalog, []);
+
 describe('hole schedule', () => {
-  const csv = holeScheduleCsv(ctx, jobDrilling(ctx.job, ctx.catalog));
+  const csv = holeScheduleCsv(ctx, drilling);
   const [header, ...rows] = read(csv);
 
   it('opens with a BOM so that spreadsheet programs read UTF-8', () => {
@@ -28,13 +29,17 @@ describe('hole schedule', () => {
     expect(csv).toContain('\r\n');
   });
 
-  it('has a row per bore of every panel with where, size, fitting and purpose', () => {
-    expect(header).toEqual(['carcass', 'panel', 'panel name', 'bore', 'face or edge', 'x', 'y', 'z from face A', 'diameter', 'depth', 'through', 'fitting', 'purpose']);
-    const total = ctx.job.panels.reduce((n, p) => n + panelBores(p, ctx.catalog, ctx.job.system).length, 0);
-    expect(rows).toHaveLength(total);
-    const cup = rows.find((r) => r[1] === 'door' && r[3] === 'hinge-low/cup')!;
-    expect(cup.slice(4)).toEqual(['A', '21.5', '87', '', '35', '13', 'no', 'Cup hinge, full overlay, 45/9.5', 'hinge cup']);
-    const pilot = rows.find((r) => r[3] === 'pilot-x1')!;
+  it('has a row per hole of every panel, each drilled once, with its key, where, size, fitting, purpose and the bores it drills', () => {
+    expect(header).toEqual(['carcass', 'panel', 'panel name', 'hole', 'face or edge', 'x', 'y', 'z from face A', 'diameter', 'depth', 'through', 'fitting', 'purpose', 'bores']);
+    expect(rows).toHaveLength(drilling.reduce((n, d) => n + d.holes.length, 0));
+    const cup = rows.find((r) => r[1] === 'door' && r[3] === 'A:21.5:87:35')!;
+    expect(cup.slice(4)).toEqual(['A', '21.5', '87', '', '35', '13', 'no', 'Cup hinge, full overlay, 45/9.5', 'hinge cup', 'hinge-low/cup']);
+    // A plate screw in a line-bored system hole is one hole, the plate's: one row naming both bores.
+    const shared = rows.filter((r) => r[1] === 'side-l' && r[5] === '37' && r[6] === '73');
+    expect(shared).toHaveLength(1);
+    expect(shared[0][12]).toBe('mounting plate');
+    expect(shared[0][13].split(' ').sort()).toEqual(['plate-low/hole-1', 'r37-2']);
+    const pilot = rows.find((r) => r[13] === 'pilot-x1')!;
     // An edge bore enters its edge (x1 at x = width) at its position along it, z from face A.
     expect(pilot.slice(4, 11)).toEqual(['edge x1', '560', '345', '9', '5', '50', 'no']);
   });
@@ -47,19 +52,25 @@ describe('hole schedule', () => {
 });
 
 describe('hardware list', () => {
-  const list = hardwareList(ctx);
+  const list = hardwareList(ctx, drilling);
 
-  it('counts each fitting per carcass and in total, a placement once', () => {
+  it('counts each fitting per carcass and in total, a placement once, with the holes drilled for it apart', () => {
     const [header, ...rows] = read(hardwareListCsv(list));
-    expect(header).toEqual(['fitting', 'name', 'purpose', `'=HYPERLINK("x")`, 'no carcass', 'total']);
-    expect(rows.find((r) => r[0] === 'hinge-full-overlay-45')).toEqual(['hinge-full-overlay-45', 'Cup hinge, full overlay, 45/9.5', 'hinge cup', '2', '0', '2']);
-    expect(rows.find((r) => r[0] === 'shelf-pin-5')).toEqual(['shelf-pin-5', 'Shelf pin, Ø5', 'shelf pin', '1', '1', '2']);
+    expect(header).toEqual(['fitting', 'name', 'purpose', `'=HYPERLINK("x")`, 'no carcass', 'total to buy', 'counted as', 'holes drilled', 'note']);
+    // A cup hinge drills its cup and two fixing holes: 2 hinges, 6 holes.
+    expect(rows.find((r) => r[0] === 'hinge-full-overlay-45')).toEqual(['hinge-full-overlay-45', 'Cup hinge, full overlay, 45/9.5', 'hinge cup', '2', '0', '2', 'one per placement', '6', '6 holes drilled']);
     expect(rows.map((r) => r[2])).toEqual(['construction', 'hinge cup', 'mounting plate', 'shelf pin', 'runner']);
+  });
+
+  it('buys no shelf pins by the hole: this job has no adjustable shelf, and says so', () => {
+    const [, ...rows] = read(hardwareListCsv(list));
+    expect(rows.find((r) => r[0] === 'shelf-pin-5')).toEqual(['shelf-pin-5', 'Shelf pin, Ø5', 'shelf pin', '0', '0', '0', '4 per adjustable shelf', '2', '2 holes drilled for pins; 0 pins for 0 shelves']);
   });
 
   it('names a fitting the catalog does not know', () => {
     const job = exportJob({}, [{ id: 'odd', name: 'Odd', role: 'loose', width: 100, height: 100, thickness: 18, material: 'pb18', placements: [{ id: 'p', fitting: 'gone-fitting', x: 1, y: 1, face: 'A', rotation: 0 }] }]);
-    const line = hardwareList(exportContext(job)).lines.at(-1)!;
+    const odd = exportContext(job);
+    const line = hardwareList(odd, jobDrilling(job, odd.catalog, [])).lines.at(-1)!;
     expect(line).toMatchObject({ fitting: 'gone-fitting', name: 'gone-fitting (not in the catalog)', total: 1 });
     expect(line.purpose).toBeUndefined();
   });

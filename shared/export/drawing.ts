@@ -66,6 +66,8 @@ export interface SymbolShape {
   x: number;
   y: number;
   drawing: Drawing;
+  /** The key of the hole this mark stands for (panel-holes.ts), written into the SVG as `data-hole`. */
+  hole?: string;
 }
 
 export type Shape = LineShape | RectShape | CircleShape | TextShape | SymbolShape;

@@ -7,7 +7,7 @@ import { makePanel } from '../testing/make-job';
 import { exportContext, exportJob } from '../testing/export-job';
 import { readPdfPage } from '../testing/pdf-page';
 import type { Shape } from './drawing';
-import { LABEL_QR, LABEL_SHEET, labelOrigin, labelSheets, labelsPdf, LABELS_PER_SHEET, QR_QUIET_MODULES, type LabelsInput } from './labels';
+import { LABEL_SHEETS, labelOrigin, labelQr, labelSheets, labelsPdf, LABELS_PER_SHEET, QR_QUIET_MODULES, type LabelsInput } from './labels';
 import { PAGE_MARGIN } from './paper';
 import { estimateTextWidth } from './text-width';
 
@@ -21,6 +21,8 @@ function labels(count: number): LabelsInput {
   return { ctx, panels: ctx.job.panels.slice(0, count), link: (p) => link(p.id) };
 }
 
+const LABEL_SHEET = LABEL_SHEETS.a4;
+const LABEL_QR = labelQr(LABEL_SHEET);
 const pdf = (input: LabelsInput) => labelsPdf(input, { ...tools, title: 'Labels', date: input.ctx.date, producer: 'test' });
 
 /** Points per mm: 72 pt per inch, 1 in = 25.4 mm exactly. */
@@ -107,6 +109,40 @@ describe('panel labels', () => {
     }
   });
 
+  it('fill the common 2 × 7 sheet of 4 × 1⅓ in labels on US Letter, within the printers’ margin', () => {
+    // ANSI/ASME Y14.1 (published, from memory): Letter is 8.5 × 11 in = 215.9 × 279.4 mm; the 14-up sheet of
+    // 4 × 1⅓ in labels is the common Letter equivalent of the A4 one (common practice, from memory).
+    const letter = LABEL_SHEETS.letter;
+    expect(2 * letter.left + 2 * letter.width + letter.columnGap).toBeCloseTo(215.9, 9);
+    expect(2 * letter.top + 7 * letter.height).toBeCloseTo(279.4, 9);
+    const [sheet] = labelSheets({ ...labels(14), paper: 'letter' });
+    expect([sheet.width, sheet.height]).toEqual([215.9, 279.4]);
+    for (const s of sheet.shapes) {
+      if (s.kind === 'rect' && s.stroke) continue;
+      const [x, y] = s.kind === 'rect' ? [s.x + s.width, s.y + s.height] : s.kind === 'text' ? [s.x, s.y] : [NaN, NaN];
+      expect(x).toBeGreaterThanOrEqual(PAGE_MARGIN);
+      expect(x).toBeLessThanOrEqual(215.9 - PAGE_MARGIN);
+      expect(y).toBeGreaterThanOrEqual(PAGE_MARGIN);
+      expect(y).toBeLessThanOrEqual(279.4 - PAGE_MARGIN);
+    }
+    // Each label's last line stays on its own label.
+    const origin = labelOrigin(13, letter);
+    const lowest = Math.max(...sheet.shapes.filter((s) => s.kind === 'text' && s.y > origin.y && s.y < origin.y + letter.height + 5).map((s) => (s as { y: number }).y));
+    expect(lowest).toBeLessThan(origin.y + letter.height);
+  });
+
+  it('name a side left or right as seen from the front, in place of the material', async () => {
+    const { text } = await blackFills(await pdf(labels(4)), 1);
+    expect(text).toContain('LEFT side (seen from the front)');
+    expect(text).toContain('side-l · side · Particleboard 18');
+  });
+
+  it('leave the code off when there is no link to give it', async () => {
+    const [sheet] = labelSheets({ ...labels(2), link: undefined });
+    expect(sheet.shapes.some((s) => s.kind === 'rect' && s.fill === '#000000')).toBe(false);
+    expect(sheet.shapes.some((s) => s.kind === 'text' && s.text === 'Scan: drilling map')).toBe(false);
+  });
+
   it('say job, carcass, panel, size, material and which face is up', async () => {
     const { text } = await blackFills(await pdf(labels(4)), 1);
     for (const words of [
@@ -117,6 +153,7 @@ describe('panel labels', () => {
       'Face A up (inside face) · then B', // the side has a face B bore
       'Face A up (back face)\n', // the door's cups are all on face A
       'side-l · side',
+      'Particleboard 18', // the door's material
       'No carcass', // the loose back
       'Scan: drilling map',
     ]) {

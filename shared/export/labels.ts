@@ -1,30 +1,49 @@
 import { PDFName, PDFString } from 'pdf-lib';
 import QRCode from 'qrcode';
 import { panelBores } from '../layout/panel-layout';
+import { handText, sideHands } from '../layout/side-hand';
 import type { Panel } from '../model/job-document';
 import { text, translate, type Drawing, type RectShape, type Shape } from './drawing';
 import { carcassName, dateText, faceName, materialName, type ExportContext } from './export-context';
-import { mapViews } from './map-view';
 import { INK, MUTED } from './palette';
-import { PAGE_MARGIN, PAPER } from './paper';
+import { PAGE_MARGIN, PAPER, type PaperName } from './paper';
 import { finishPdf, startPdf, type PdfOptions } from './pdf-document';
 import { estimateTextWidth, fitText } from './text-width';
 import { lengthText, mmToPt } from './units';
 
+/** A sheet of self-adhesive labels: columns by rows of labels of one size, with their margins and gap, mm. */
+export interface LabelSheet {
+  columns: number;
+  rows: number;
+  width: number;
+  height: number;
+  left: number;
+  top: number;
+  columnGap: number;
+}
+
 /**
- * The common A4 sheet of 14 self-adhesive labels, 2 columns by 7 rows of 99.1 × 38.1 mm: 4.65 mm at the
- * sides, 15.15 mm at top and bottom, 2.5 mm between the columns (4.65 · 2 + 99.1 · 2 + 2.5 = 210 and
- * 15.15 · 2 + 38.1 · 7 = 297, ISO 216 A4). Printed on plain paper, the outlines are the cutting lines.
+ * The common sheets of 14 labels, 2 columns by 7 rows, as each paper has it. A4: 99.1 × 38.1 mm labels,
+ * 4.65 mm at the sides, 15.15 mm at top and bottom, 2.5 mm between the columns (4.65 · 2 + 99.1 · 2 + 2.5
+ * = 210 and 15.15 · 2 + 38.1 · 7 = 297, ISO 216 A4). US Letter: 4 × 1⅓ in labels, 5/32 in at the sides,
+ * ⅚ in at top and bottom, 3/16 in between the columns (2 · 4 + 3/16 + 2 · 5/32 = 8.5 in and 7 · 4/3 + 2 · 5/6
+ * = 11 in; common practice, from memory; 1 in = 25.4 mm exactly). Printed on plain paper, the outlines are
+ * the cutting lines.
  */
-export const LABEL_SHEET = { columns: 2, rows: 7, width: 99.1, height: 38.1, left: 4.65, top: 15.15, columnGap: 2.5 } as const;
-export const LABELS_PER_SHEET = LABEL_SHEET.columns * LABEL_SHEET.rows;
+export const LABEL_SHEETS: Readonly<Record<PaperName, LabelSheet>> = {
+  a4: { columns: 2, rows: 7, width: 99.1, height: 38.1, left: 4.65, top: 15.15, columnGap: 2.5 },
+  letter: { columns: 2, rows: 7, width: 4 * 25.4, height: (4 / 3) * 25.4, left: (5 / 32) * 25.4, top: (5 / 6) * 25.4, columnGap: (3 / 16) * 25.4 },
+};
+export const LABELS_PER_SHEET = 14;
 
 /**
  * The text and code keep this far inside each label, so that they stay within the PAGE_MARGIN that office
- * printers print (4.65 + 4 ≥ 8 mm) and a label cut or stuck slightly off loses nothing.
+ * printers print (4.65 + 4 ≥ 8 mm on A4; on Letter 3.97 + 4.03) and a label cut or stuck slightly off loses nothing.
  */
-const INSET = 4;
-/** The QR symbol's side without its quiet zone; about 0.7 to 0.8 mm a module for a link of 40 to 70 characters. */
+const insetOf = (sheet: LabelSheet) => Math.max(4, PAGE_MARGIN - sheet.left);
+/** The layout is drawn for the A4 label's 38.1 mm height and set closer on a lower label. */
+const DESIGN_HEIGHT = 38.1;
+/** The QR symbol's side without its quiet zone on the A4 label; about 0.7 to 0.8 mm a module for a link of 40 to 70 characters. */
 const QR_SIZE = 24;
 const QR_TOP = 3.5;
 /** The quiet zone a reader needs around a symbol, in modules (ISO/IEC 18004:2015 §6.3.8, published, from memory). */
@@ -36,18 +55,24 @@ export interface LabelsInput {
   ctx: ExportContext;
   /** The panels to label, one label each, in the order they are printed. */
   panels: readonly Panel[];
-  /** The absolute address each panel's QR code opens, as a phone's camera reads it. */
-  link: (panel: Panel) => string;
+  /** The absolute address each panel's QR code opens, as a phone's camera reads it; without it a label has no code. */
+  link?: (panel: Panel) => string;
+  /** The label sheet's paper: A4 by default. */
+  paper?: PaperName;
 }
 
 /** Where a label's QR symbol lies on its label, in mm from the label's top left. */
-export const LABEL_QR = { x: LABEL_SHEET.width - INSET - QR_SIZE, y: QR_TOP, size: QR_SIZE } as const;
+export function labelQr(sheet: LabelSheet): { x: number; y: number; size: number } {
+  const k = sheet.height / DESIGN_HEIGHT;
+  const size = QR_SIZE * k;
+  return { x: sheet.width - insetOf(sheet) - size, y: QR_TOP * k, size };
+}
 
 /** The top left corner of the label at this place on a sheet (0 is top left, filled row by row). */
-export function labelOrigin(index: number): { x: number; y: number } {
-  const column = index % LABEL_SHEET.columns;
-  const row = Math.floor(index / LABEL_SHEET.columns) % LABEL_SHEET.rows;
-  return { x: LABEL_SHEET.left + column * (LABEL_SHEET.width + LABEL_SHEET.columnGap), y: LABEL_SHEET.top + row * LABEL_SHEET.height };
+export function labelOrigin(index: number, sheet: LabelSheet = LABEL_SHEETS.a4): { x: number; y: number } {
+  const column = index % sheet.columns;
+  const row = Math.floor(index / sheet.columns) % sheet.rows;
+  return { x: sheet.left + column * (sheet.width + sheet.columnGap), y: sheet.top + row * sheet.height };
 }
 
 /**
@@ -72,72 +97,81 @@ function qrShapes(value: string, x: number, y: number, size: number): RectShape[
   return shapes;
 }
 
-/** Which face the bench drills first: face A (design.md §2 and §3's frames), and face B after turning over when it has bores. */
+/** Which face the bench drills first: face A (design.md §2 and §3's frames), and face B after turning over when it has holes. */
 function faceUpText(ctx: ExportContext, panel: Panel): string {
-  const both = mapViews(panel, panelBores(panel, ctx.catalog, ctx.job.system)).length > 1;
+  const both = panelBores(panel, ctx.catalog, ctx.job.system).some((b) => b.kind === 'face' && b.face === 'B');
   const which = faceName(panel.role, 'A');
   return `Face A up${which ? ` (${which})` : ''}${both ? ' · then B' : ''}`;
 }
 
-/** One label's shapes, laid out from its own top left corner. */
-function label(ctx: ExportContext, panel: Panel, link: string): Shape[] {
-  const { width, height } = LABEL_SHEET;
-  const measure = LABEL_QR.x - 3.5 - INSET;
-  const line = (y: number, value: string, size: number, color = INK) => text(INSET, y, fitText(value, size, measure), size, color);
+/** One label's shapes, laid out from its own top left corner: the lines set for the label's height, the code at the right when there is a link. */
+function label(ctx: ExportContext, sheet: LabelSheet, panel: Panel, hand: string | undefined, link: string | undefined): Shape[] {
+  const { width, height } = sheet;
+  const k = height / DESIGN_HEIGHT;
+  const inset = insetOf(sheet);
+  const qr = labelQr(sheet);
+  const measure = (link === undefined ? width - inset : qr.x - 3.5) - inset;
+  const line = (y: number, value: string, size: number, color = INK) => text(inset, y * k, fitText(value, size, measure), size, color);
   const carcass = panel.carcass === undefined ? 'No carcass' : carcassName(ctx, panel);
   const size = `${[panel.width, panel.height, panel.thickness].map(lengthText).join(' × ')} mm`;
-  return [
+  const shapes: Shape[] = [
     { kind: 'rect', x: 0, y: 0, width, height, stroke: CUT_LINE },
     line(6.4, ctx.job.name, 2.5, MUTED),
     line(11, carcass, 3),
     line(16.8, panel.name, estimateTextWidth(panel.name, 4.4) <= measure ? 4.4 : 3.5),
     line(21.8, `${size} (W × H × T)`, 3.1),
-    line(26.2, materialName(ctx, panel), 2.8, MUTED),
+    line(26.2, hand ?? materialName(ctx, panel), hand ? 3.1 : 2.8, hand ? INK : MUTED),
     line(31.2, faceUpText(ctx, panel), 3.1),
-    line(35.2, `${panel.id} · ${panel.role}`, 2.2, MUTED),
-    ...qrShapes(link, LABEL_QR.x, LABEL_QR.y, LABEL_QR.size),
-    text(LABEL_QR.x + LABEL_QR.size / 2, 34.2, 'Scan: drilling map', 2.1, MUTED, 'middle'),
+    line(35.2, `${panel.id} · ${panel.role}${hand ? ` · ${materialName(ctx, panel)}` : ''}`, 2.2, MUTED),
   ];
+  if (link !== undefined) shapes.push(...qrShapes(link, qr.x, qr.y, qr.size), text(qr.x + qr.size / 2, 34.2 * k, 'Scan: drilling map', 2.1, MUTED, 'middle'));
+  return shapes;
 }
 
 /**
- * Panel labels on A4 sheets of 14: each with the job, the carcass, the panel's name, its size W × H × T,
- * its material, which face lies up for drilling, its document id and a QR code that opens its drilling
- * map. One sheet per 14 panels; the last one is filled as far as it goes.
+ * Panel labels on sheets of 14 (A4, or US Letter): each with the job, the carcass, the panel's name, its
+ * size W × H × T, on a side which side of its carcass it is (left or right, seen from the front) in place of
+ * the material, which face lies up for drilling, its document id and, given a link, a QR code that opens its
+ * drilling map. One sheet per 14 panels; the last one is filled as far as it goes.
  */
-export function labelSheets({ ctx, panels, link }: LabelsInput): Drawing[] {
+export function labelSheets({ ctx, panels, link, paper = 'a4' }: LabelsInput): Drawing[] {
   if (panels.length === 0) throw new Error('No panels to label: pass at least one panel');
-  const { width, height } = PAPER.a4;
+  const { width, height } = PAPER[paper];
+  const sheet = LABEL_SHEETS[paper];
+  const hands = sideHands(ctx.job);
   const sheets = Math.ceil(panels.length / LABELS_PER_SHEET);
   const drawings: Drawing[] = [];
-  for (let sheet = 0; sheet < sheets; sheet++) {
-    const onSheet = panels.slice(sheet * LABELS_PER_SHEET, (sheet + 1) * LABELS_PER_SHEET);
-    const heading = `${ctx.job.name} · panel labels · sheet ${sheet + 1} of ${sheets} · ${dateText(ctx.date)}`;
+  for (let n = 0; n < sheets; n++) {
+    const onSheet = panels.slice(n * LABELS_PER_SHEET, (n + 1) * LABELS_PER_SHEET);
+    const heading = `${ctx.job.name} · panel labels · sheet ${n + 1} of ${sheets} · ${dateText(ctx.date)}`;
     const shapes: Shape[] = [text(PAGE_MARGIN + 1, 10.5, fitText(heading, 2.4, width - 2 * PAGE_MARGIN), 2.4, MUTED)];
     onSheet.forEach((panel, i) => {
-      const { x, y } = labelOrigin(i);
-      shapes.push(...translate(label(ctx, panel, link(panel)), x, y));
+      const { x, y } = labelOrigin(i, sheet);
+      shapes.push(...translate(label(ctx, sheet, panel, handText(panel, hands.get(panel.id)), link?.(panel)), x, y));
     });
-    drawings.push({ width, height, title: `${ctx.job.name}: panel labels, sheet ${sheet + 1} of ${sheets}`, shapes });
+    drawings.push({ width, height, title: `${ctx.job.name}: panel labels, sheet ${n + 1} of ${sheets}`, shapes });
   }
   return drawings;
 }
 
 /**
- * The label sheets as a PDF of A4 pages at 1:1, marked not to be scaled when printed. Each QR code is also
- * a link, for whoever opens the file on a screen.
+ * The label sheets as a PDF of pages at 1:1, marked not to be scaled when printed. Each QR code is also a
+ * link, for whoever opens the file on a screen.
  */
 export async function labelsPdf(input: LabelsInput, options: PdfOptions): Promise<Uint8Array> {
   const { doc, drawer } = await startPdf(options);
-  const sheets = labelSheets(input);
-  for (const [sheet, drawing] of sheets.entries()) {
+  const sheet = LABEL_SHEETS[input.paper ?? 'a4'];
+  const qr = labelQr(sheet);
+  for (const [n, drawing] of labelSheets(input).entries()) {
     const page = await drawer.drawingPage(drawing);
-    const links = input.panels.slice(sheet * LABELS_PER_SHEET, (sheet + 1) * LABELS_PER_SHEET).map((panel, i) => {
-      const { x, y } = labelOrigin(i);
-      const left = x + LABEL_QR.x;
-      const bottom = drawing.height - (y + LABEL_QR.y + LABEL_QR.size);
-      const rect = [left, bottom, left + LABEL_QR.size, bottom + LABEL_QR.size].map(mmToPt);
-      return doc.context.register(doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: rect, Border: [0, 0, 0], A: { Type: 'Action', S: 'URI', URI: PDFString.of(input.link(panel)) } }));
+    const { link } = input;
+    if (link === undefined) continue;
+    const links = input.panels.slice(n * LABELS_PER_SHEET, (n + 1) * LABELS_PER_SHEET).map((panel, i) => {
+      const { x, y } = labelOrigin(i, sheet);
+      const left = x + qr.x;
+      const bottom = drawing.height - (y + qr.y + qr.size);
+      const rect = [left, bottom, left + qr.size, bottom + qr.size].map(mmToPt);
+      return doc.context.register(doc.context.obj({ Type: 'Annot', Subtype: 'Link', Rect: rect, Border: [0, 0, 0], A: { Type: 'Action', S: 'URI', URI: PDFString.of(link(panel)) } }));
     });
     page.node.set(PDFName.of('Annots'), doc.context.obj(links));
   }

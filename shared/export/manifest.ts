@@ -1,4 +1,5 @@
-import type { Severity } from '../checks/finding';
+import type { FindingCode, Severity } from '../checks/finding';
+import type { DXF_LAYER_SCHEME } from './dxf-layers';
 import type { Generator } from './export-context';
 import type { PaperName } from './paper';
 
@@ -22,6 +23,13 @@ export interface PackManifest {
   generator: Generator;
   paper: PaperName;
   findings: Record<Severity, number>;
-  panels: { id: string; name: string; carcass?: string; status: string; files: string[] }[];
+  /** Every finding of the checks the pack was made with (a pack for a job with errors is still made). */
+  findingList: { severity: Severity; code: FindingCode; panel: string; message: string }[];
+  /** The files at the top of the pack, by what they are. */
+  sheets: { cover: string; labels?: string; readme: string; holeSchedule: string; hardwareList: string };
+  /** How the DXF files name their layers, and the layers this pack's files use. */
+  dxfLayers: typeof DXF_LAYER_SCHEME & { used: string[] };
+  /** Each panel's files; `hasErrors` when its files say "has errors"; `side` for a carcass side whose hand the job tells. */
+  panels: { id: string; name: string; carcass?: string; status: string; hasErrors: boolean; side?: 'left' | 'right'; holes: number; files: string[] }[];
   files: ManifestFile[];
 }

@@ -28,7 +28,7 @@ interface Column {
  * Ordinate labels with leaders: a straight stub from each position, a jog to where the label has room,
  * and the value. Returns the shapes and how far the column reaches from `start`.
  */
-function ordinateColumn(column: Column): { shapes: Shape[]; depth: number } {
+function ordinateColumn(column: Column): Shape[] {
   const marks = [...column.marks].sort((p, q) => p.at - q.at);
   const placed = spreadLabels(
     marks.map((m) => m.at),
@@ -38,10 +38,8 @@ function ordinateColumn(column: Column): { shapes: Shape[]; depth: number } {
   const v1 = start + outward * STRAIGHT;
   const v2 = v1 + outward * JOG;
   const shapes: Shape[] = [];
-  let longest = 0;
   marks.forEach((mark, i) => {
     const label = lengthText(mark.value);
-    longest = Math.max(longest, estimateTextWidth(label, SIZE));
     const u = placed[i];
     const at = (along: number, across: number): [number, number] => (column.along === 'x' ? [along, across] : [across, along]);
     shapes.push(line(...at(mark.at, start), ...at(mark.at, v1), LEAD));
@@ -51,7 +49,34 @@ function ordinateColumn(column: Column): { shapes: Shape[]; depth: number } {
     if (column.along === 'x') shapes.push(text(u + SIZE * 0.35, v3, label, SIZE, MUTED, outward > 0 ? 'end' : 'start', true));
     else shapes.push(text(v3, u + SIZE * 0.35, label, SIZE, MUTED, outward > 0 ? 'start' : 'end'));
   });
-  return { shapes, depth: STRAIGHT + JOG + 1 + longest };
+  return shapes;
+}
+
+/** How far a column of ordinate labels of these values reaches from where its leaders begin. */
+function columnDepth(values: readonly number[]): number {
+  return STRAIGHT + JOG + 1 + Math.max(0, ...values.map((v) => estimateTextWidth(lengthText(v), SIZE)));
+}
+
+/** The distinct x and y values a map dimensions: the panel's own size and every hole's position. */
+function ordinateValues(view: MapView): { xs: number[]; ys: number[] } {
+  const { width: W, height: H } = view.panel;
+  const xs = distinctValues([0, W, ...view.faceBores.map((b) => b.x), ...view.edgeBores.filter((b) => b.edge === 'y0' || b.edge === 'y1').map((b) => b.at)]);
+  const ys = distinctValues([0, H, ...view.faceBores.map((b) => b.y), ...view.edgeBores.filter((b) => b.edge === 'x0' || b.edge === 'x1').map((b) => b.at)]);
+  return { xs, ys };
+}
+
+/**
+ * How far a map reaches beyond the outline once its ordinate dimensions are drawn, from the figure's own
+ * reach: what a template's tiles are planned from, without drawing the labels.
+ */
+export function ordinateReach(view: MapView, figure: Reach): Reach {
+  const { xs, ys } = ordinateValues(view);
+  const reach = { ...figure };
+  reach.bottom += 1 + columnDepth(xs) + 5;
+  if (view.face === 'A') reach.left += 1 + columnDepth(ys);
+  else reach.right += 1 + columnDepth(ys);
+  reach.top += 5;
+  return reach;
 }
 
 /**
@@ -61,18 +86,7 @@ function ordinateColumn(column: Column): { shapes: Shape[]; depth: number } {
  */
 export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shape[]; reach: Reach } {
   const { width: W, height: H } = view.panel;
-  const xs = distinctValues([
-    0,
-    W,
-    ...view.faceBores.map((b) => b.x),
-    ...view.edgeBores.filter((b) => b.edge === 'y0' || b.edge === 'y1').map((b) => b.at),
-  ]);
-  const ys = distinctValues([
-    0,
-    H,
-    ...view.faceBores.map((b) => b.y),
-    ...view.edgeBores.filter((b) => b.edge === 'x0' || b.edge === 'x1').map((b) => b.at),
-  ]);
+  const { xs, ys } = ordinateValues(view);
   const below = ordinateColumn({
     marks: xs.map((value) => ({ value, at: viewPoint(view, value, 0).x })),
     start: H + figure.bottom + 1,
@@ -86,15 +100,10 @@ export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shap
     outward: onLeft ? -1 : 1,
     along: 'y',
   });
-  const reach = { ...figure };
-  reach.bottom += 1 + below.depth;
-  if (onLeft) reach.left += 1 + beside.depth;
-  else reach.right += 1 + beside.depth;
+  const reach = ordinateReach(view, figure);
   const captions = [
-    text(onLeft ? -reach.left : W + reach.right, H + reach.bottom + 4, 'x: mm from the reference edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
+    text(onLeft ? -reach.left : W + reach.right, H + reach.bottom - 1, 'x: mm from the reference edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
     text(onLeft ? -reach.left : W + reach.right, -figure.top - 3, 'y: mm from the lower edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
   ];
-  reach.bottom += 5;
-  reach.top += 5;
-  return { shapes: [...below.shapes, ...beside.shapes, ...captions], reach };
+  return { shapes: [...below, ...beside, ...captions], reach };
 }

@@ -6,11 +6,19 @@ import { INK, MUTED, PURPOSE_ORDER, PURPOSE_STYLES } from './palette';
 const ROW = 5;
 const SIZE = 2.8;
 
+type Block = { shapes: Shape[]; width: number; height: number };
+let drawn: Block | undefined;
+
 /**
  * The legend of every drawing: each purpose with its colour and its letter, then how faces, through
- * bores, labels, centres and edge strips are drawn. Drawn from its top left; returns its height.
+ * bores, labels, centres and edge strips are drawn. Drawn from its top left; returns its height. The same
+ * on every drawing, so laid out once per process.
  */
-export function legend(): { shapes: Shape[]; width: number; height: number } {
+export function legend(): Block {
+  return (drawn ??= drawLegend());
+}
+
+function drawLegend(): Block {
   const shapes: Shape[] = [text(0, 4, 'Legend', 3.5, INK)];
   let y = 7;
   let width = 0;

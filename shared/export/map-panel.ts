@@ -1,8 +1,8 @@
-import { planBox, type PanelEdgeBore } from '../layout/bore';
+import { planBox } from '../layout/bore';
 import type { Edge } from '../model/job-document';
 import { boreMark, tint } from './bore-marks';
 import { line, text, type Shape } from './drawing';
-import { viewPoint, type MapView } from './map-view';
+import { viewPoint, type EdgeHole, type MapView } from './map-view';
 import { INK, MUTED, PURPOSE_STYLES } from './palette';
 
 /** Room between the outline and an edge strip, mm. */
@@ -37,7 +37,7 @@ function sheetSide(view: MapView, edge: Edge): keyof Reach {
  * side next to the panel, each bore a circle of its diameter at its position along the edge and its height
  * from face A, so the strip can be laid against the edge like the face template.
  */
-function edgeStrip(view: MapView, edge: Edge, bores: PanelEdgeBore[]): Shape[] {
+function edgeStrip(view: MapView, edge: Edge, bores: EdgeHole[]): Shape[] {
   const { width: W, height: H, thickness: T } = view.panel;
   const side = sheetSide(view, edge);
   const shapes: Shape[] = [];
@@ -56,7 +56,7 @@ function edgeStrip(view: MapView, edge: Edge, bores: PanelEdgeBore[]): Shape[] {
 }
 
 /** An edge bore's path through the board, seen through face A: a light dashed outline of how far it runs. */
-function hiddenPath(view: MapView, bore: PanelEdgeBore): Shape {
+function hiddenPath(view: MapView, bore: EdgeHole): Shape {
   const [x0, y0, x1, y1] = planBox(bore, view.panel);
   const p = viewPoint(view, x0, y0);
   const q = viewPoint(view, x1, y1);
@@ -77,7 +77,7 @@ function hiddenPath(view: MapView, bore: PanelEdgeBore): Shape {
  * face the map is for.
  */
 export function panelFigure(view: MapView): PanelFigure {
-  const { width: W, height: H, thickness: T } = view.panel;
+  const { width: W, height: H } = view.panel;
   const shapes: Shape[] = [{ kind: 'rect', x: 0, y: 0, width: W, height: H, stroke: { color: INK, width: 0.5 } }];
   const refX = view.face === 'A' ? 0 : W;
   shapes.push(line(refX, 0, refX, H, { color: INK, width: 1.2 }));
@@ -89,12 +89,16 @@ export function panelFigure(view: MapView): PanelFigure {
     const at = viewPoint(view, bore.x, bore.y);
     shapes.push(boreMark(bore, at.x, at.y));
   }
-  const reach: Reach = { left: 0, right: 0, top: 0, bottom: 0 };
   for (const edge of EDGES) {
     const bores = view.edgeBores.filter((b) => b.edge === edge);
-    if (bores.length === 0) continue;
-    shapes.push(...edgeStrip(view, edge, bores));
-    reach[sheetSide(view, edge)] = STRIP_GAP + T;
+    if (bores.length > 0) shapes.push(...edgeStrip(view, edge, bores));
   }
-  return { shapes, reach };
+  return { shapes, reach: figureReach(view) };
+}
+
+/** How far a map's figure reaches beyond the outline: an edge strip on each side whose edge has holes. */
+export function figureReach(view: MapView): Reach {
+  const reach: Reach = { left: 0, right: 0, top: 0, bottom: 0 };
+  for (const edge of EDGES) if (view.edgeBores.some((b) => b.edge === edge)) reach[sheetSide(view, edge)] = STRIP_GAP + view.panel.thickness;
+  return reach;
 }

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { describe, expect, it } from 'vitest';
 import { packTools } from '../../server/export/export-platform';
 import { clashPanel, exportContext, exportJob } from '../testing/export-job';
+import { readPdfPage } from '../testing/pdf-page';
 import type { PackManifest } from './manifest';
 import { planPack, type PackInput } from './pack';
 
@@ -23,7 +24,7 @@ describe('planPack', () => {
     const { root, files } = planPack(input());
     expect(root).toBe('Larch Lane kitchen bench pack');
     const paths = files.map((f) => f.path.slice(root.length + 1));
-    expect(paths.slice(0, 3)).toEqual(['cover sheet.pdf', 'hole schedule.csv', 'hardware list.csv']);
+    expect(paths.slice(0, 5)).toEqual(['cover sheet.pdf', 'panel labels.pdf', 'README.txt', 'hole schedule.csv', 'hardware list.csv']);
     expect(paths.at(-1)).toBe('manifest.json');
     expect(paths).toEqual(
       expect.arrayContaining([
@@ -102,6 +103,49 @@ describe('planPack', () => {
     const { files } = planPack(input());
     await expect(files.at(-1)!.bytes()).rejects.toThrow(/manifest.json is written last/);
   });
+
+  it('lists the labels, the README sheet and our DXF layer scheme in the manifest, and every panel with its holes and side', async () => {
+    const { root, files } = planPack(input());
+    const made = await makeAll(files);
+    const manifest = JSON.parse(new TextDecoder().decode(made.get(`${root}/manifest.json`))) as PackManifest;
+    expect(manifest.sheets).toEqual({ cover: 'cover sheet.pdf', labels: 'panel labels.pdf', readme: 'README.txt', holeSchedule: 'hole schedule.csv', hardwareList: 'hardware list.csv' });
+    expect(manifest.files.map((f) => f.path)).toEqual(expect.arrayContaining(['panel labels.pdf', 'README.txt']));
+    expect(manifest.dxfLayers.pattern).toBe('<where>-DIA_<diameter mm>-<DEPTH_<depth mm> | THROUGH>-<purpose>');
+    expect(manifest.dxfLayers.used).toEqual(expect.arrayContaining(['FACE_A-DIA_35-DEPTH_13-HINGE_CUP', 'FACE_A-DIA_5-DEPTH_13-SHELF_PIN', 'EDGE_X0-DIA_8-DEPTH_30-LOOSE']));
+    expect(manifest.panels.find((p) => p.id === 'side-l')).toMatchObject({ side: 'left', hasErrors: false });
+    const readme = new TextDecoder().decode(made.get(`${root}/README.txt`));
+    expect(readme).toContain('READ ME FIRST');
+    expect(readme).toContain('Hole layers are named <where>-DIA_<diameter mm>-<DEPTH_<depth mm> | THROUGH>-<purpose>:');
+    expect(readme).toContain('purpose: what the hole is for: CONSTRUCTION, HINGE_CUP, MOUNTING_PLATE, SHELF_PIN, LIFT_MECHANISM, RUNNER');
+    // The labels come on the pack's paper, a label per panel (14 to a sheet: one sheet here).
+    const labels = await readPdfPage(made.get(`${root}/panel labels.pdf`)!, 1);
+    expect(labels.pages).toBe(1);
+    expect(labels.text).toContain('Base unit, left side');
+    expect(labels.text).toContain('LEFT side (seen from the front)');
+  }, 60_000);
+
+  it('still makes the pack of a job with errors: cover, README and manifest carry the findings, the panel says "has errors"', async () => {
+    const { root, files, errors } = planPack(input(exportContext(exportJob({}, [clashPanel()]))));
+    expect(errors).toBe(1);
+    const made = await makeAll(files);
+    const manifest = JSON.parse(new TextDecoder().decode(made.get(`${root}/manifest.json`))) as PackManifest;
+    expect(manifest.findings.error).toBe(1);
+    expect(manifest.findingList).toEqual([expect.objectContaining({ severity: 'error', code: 'bores-overlap', panel: 'clash' })]);
+    expect(manifest.panels.find((p) => p.id === 'clash')!.hasErrors).toBe(true);
+    expect(manifest.panels.find((p) => p.id === 'door')!.hasErrors).toBe(false);
+    expect(new TextDecoder().decode(made.get(`${root}/README.txt`))).toContain('THIS PACK CONTAINS ERRORS (1)');
+    const cover = await readPdfPage(made.get(`${root}/cover sheet.pdf`)!, 1);
+    expect(cover.text).toContain('CONTAINS ERRORS');
+    const svg = new TextDecoder().decode(made.get(`${root}/no carcass/Clash face A.svg`));
+    expect(svg).toContain('HAS ERRORS (1): see the cover sheet');
+    const templates = await readPdfPage(made.get(`${root}/no carcass/Clash templates A4.pdf`)!, 1);
+    expect(templates.text).toContain('HAS ERRORS');
+    const tile = await readPdfPage(made.get(`${root}/no carcass/Clash templates A4.pdf`)!, 2);
+    expect(tile.text).toContain('HAS ERRORS (1): see the cover sheet · A1');
+    expect(new TextDecoder().decode(made.get(`${root}/no carcass/Clash.dxf`))).toContain('HAS ERRORS (1): SEE THE COVER SHEET');
+    // A panel without errors says so, and nothing more.
+    expect(new TextDecoder().decode(made.get(`${root}/Base unit/Base unit, door face A.svg`))).not.toContain('HAS ERRORS');
+  }, 60_000);
 
   it('counts the errors the checks found, for the screen to confirm', () => {
     expect(planPack(input(exportContext(exportJob({}, [clashPanel()])))).errors).toBe(1);

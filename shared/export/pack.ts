@@ -1,15 +1,22 @@
 import { checkJob } from '../checks/index';
 import type { Finding, Severity } from '../checks/finding';
+import type { Panel } from '../model/job-document';
+import { carcassOrder } from '../model/panel-order';
 import { cautionsFor } from './cautions';
 import { coverSheet } from './cover-sheet';
+import { DXF_LAYER_SCHEME } from './dxf-layers';
 import { type ExportContext } from './export-context';
 import { hardwareList, hardwareListCsv } from './hardware-list';
 import { holeScheduleCsv } from './hole-schedule';
+import { labelsPdf } from './labels';
 import { PACK_FORMAT, type ManifestFile, type PackManifest } from './manifest';
+import { packReadme, type PackFileNames } from './pack-readme';
 import { safeSegment, UniqueNames } from './pack-paths';
 import { jobDrilling } from './panel-drilling';
+import { layerOf } from './panel-dxf';
 import { panelFiles, type ExportFile, type PanelFileOptions } from './panel-files';
 import { drawingsPdf } from './pdf-document';
+import { templateSheetCount } from './template-pdf';
 import { utf8Bytes } from './utf8';
 
 export interface PackInput extends PanelFileOptions {
@@ -21,6 +28,11 @@ export interface PackInput extends PanelFileOptions {
    * of a job (a swap's retrofit) passes the findings of the whole job on its panels instead.
    */
   findings?: readonly Finding[];
+  /**
+   * The address a panel label's QR code opens (the bench page on that panel), where the pack is made by a
+   * server that has one; labels made without it carry no code.
+   */
+  labelLink?: (panel: Panel) => string;
   /** Told after each file is made: how many are done, of how many, and what the last one was. */
   onProgress?: (done: number, total: number, label: string) => void;
 }
@@ -44,22 +56,34 @@ export interface Pack {
   errors: number;
 }
 
-const FIXED = { cover: 'cover sheet.pdf', schedule: 'hole schedule.csv', hardware: 'hardware list.csv', manifest: 'manifest.json' };
+const FIXED: PackFileNames = {
+  cover: 'cover sheet.pdf',
+  labels: 'panel labels.pdf',
+  readme: 'README.txt',
+  schedule: 'hole schedule.csv',
+  hardware: 'hardware list.csv',
+  manifest: 'manifest.json',
+};
 
 /**
  * Plans the bench pack of a job: a folder per carcass (and `no carcass`) with each panel's drilling maps
- * (SVG), DXF and template sheets (PDF); the cover sheet (PDF); the hole schedule and hardware list (CSV);
- * and manifest.json with the SHA-256 of every other file. Every name is made safe, so no name from the job
+ * (SVG), DXF and template sheets (PDF), all drawn from the panel's one hole list; the cover sheet and the
+ * panel labels (PDF, on the pack's paper); the README sheet (what the files are, the DXF layer names); the
+ * hole schedule and hardware list (CSV); and manifest.json with the SHA-256 of every other file. A job
+ * with error findings still gets its pack: the cover, the README and the manifest carry the findings and
+ * each panel they concern says "has errors" in its files. Every name is made safe, so no name from the job
  * can leave its folder. Files are made one at a time as they are asked for.
  */
 export function planPack(input: PackInput): Pack {
   const { ctx } = input;
   const { job, catalog } = ctx;
   const root = safeSegment(`${job.name} bench pack`, 'bench pack');
-  const drilling = jobDrilling(job, catalog);
   const findings = input.findings ?? checkJob(job, catalog);
-  const hardware = hardwareList(ctx);
+  const drilling = jobDrilling(job, catalog, findings);
+  const hardware = hardwareList(ctx, drilling);
   const producer = `${ctx.generator.name} ${ctx.generator.version}`;
+  const tally = (severity: Severity) => findings.filter((f) => f.severity === severity).length;
+  const pdfOptions = (title: string) => ({ fontBytes: input.fontBytes, deflate: input.deflate, title: `${job.name}: ${title}`, date: ctx.date, producer });
 
   const folders = new UniqueNames();
   Object.values(FIXED).forEach((name) => folders.take(name));
@@ -77,21 +101,25 @@ export function planPack(input: PackInput): Pack {
     for (const file of panelFiles(ctx, d, base, input)) panelEntries.push({ path: `${folder.name}/${file.name}`, file, panel: d.panel.id });
   }
 
+  const fixed = (name: string, label: string, compress: boolean, produce: () => Promise<Uint8Array>) => ({ path: name, file: { name, label, compress, produce } });
   const entries: { path: string; file: ExportFile }[] = [
-    {
-      path: FIXED.cover,
-      file: {
-        name: FIXED.cover,
-        label: 'cover sheet',
-        compress: false,
-        produce: () => {
-          const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels: drilling.map((d) => ({ panel: d.panel, bores: d.bores.length })) });
-          return drawingsPdf(pages, { fontBytes: input.fontBytes, deflate: input.deflate, title: `${job.name}: cover sheet`, date: ctx.date, producer });
-        },
-      },
-    },
-    { path: FIXED.schedule, file: { name: FIXED.schedule, label: 'hole schedule', compress: true, produce: async () => utf8Bytes(holeScheduleCsv(ctx, drilling)) } },
-    { path: FIXED.hardware, file: { name: FIXED.hardware, label: 'hardware list', compress: true, produce: async () => utf8Bytes(hardwareListCsv(hardware)) } },
+    fixed(FIXED.cover, 'cover sheet', false, () => {
+      // The sheets to print, counted as the template files lay them out.
+      const panels = drilling.map((d) => ({ drilling: d, sheets: templateSheetCount(ctx, d, input.paper) }));
+      const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels, files: FIXED });
+      return drawingsPdf(pages, pdfOptions('cover sheet'));
+    }),
+    // A pack of no panels (a retrofit that needs none) has nothing to label.
+    ...(job.panels.length === 0
+      ? []
+      : [
+          fixed(FIXED.labels, 'panel labels', false, () =>
+            labelsPdf({ ctx, panels: carcassOrder(job.carcasses, job.panels), paper: input.paper, ...(input.labelLink ? { link: input.labelLink } : {}) }, pdfOptions('panel labels')),
+          ),
+        ]),
+    fixed(FIXED.readme, 'README', true, async () => utf8Bytes(packReadme(ctx, input.paper, FIXED, tally('error')))),
+    fixed(FIXED.schedule, 'hole schedule', true, async () => utf8Bytes(holeScheduleCsv(ctx, drilling))),
+    fixed(FIXED.hardware, 'hardware list', true, async () => utf8Bytes(hardwareListCsv(hardware))),
     ...panelEntries,
   ];
 
@@ -108,7 +136,6 @@ export function planPack(input: PackInput): Pack {
     },
   }));
 
-  const tally = (severity: Severity) => findings.filter((f) => f.severity === severity).length;
   files.push({
     path: `${root}/${FIXED.manifest}`,
     compress: true,
@@ -121,11 +148,17 @@ export function planPack(input: PackInput): Pack {
         generator: ctx.generator,
         paper: input.paper,
         findings: { error: tally('error'), warning: tally('warning'), note: tally('note') },
-        panels: drilling.map(({ panel }) => ({
+        findingList: findings.map(({ severity, code, panel, message }) => ({ severity, code, panel, message })),
+        sheets: { cover: FIXED.cover, ...(job.panels.length > 0 ? { labels: FIXED.labels } : {}), readme: FIXED.readme, holeSchedule: FIXED.schedule, hardwareList: FIXED.hardware },
+        dxfLayers: { ...DXF_LAYER_SCHEME, used: [...new Set(drilling.flatMap((d) => d.holes.map(layerOf)))].sort() },
+        panels: drilling.map(({ panel, holes, errors, hand }) => ({
           id: panel.id,
           name: panel.name,
           ...(panel.carcass !== undefined ? { carcass: panel.carcass } : {}),
           status: panel.status,
+          hasErrors: errors > 0,
+          ...(hand ? { side: hand.hand } : {}),
+          holes: holes.length,
           files: panelEntries.filter((e) => e.panel === panel.id).map((e) => e.path),
         })),
         files: entries.map((e) => recorded.get(e.path) as ManifestFile),

@@ -97,14 +97,24 @@ export class PageFlow {
     this.place(shapes, TABLE_ROW);
   }
 
-  /** The pages as drawings, each with a footer naming it `page k of n`. */
-  finish(title: string, footer: string): Drawing[] {
+  /** How many pages the flow has taken so far. */
+  get pageCount(): number {
+    return this.pages.length;
+  }
+
+  /**
+   * The pages as drawings, each with a footer naming it `page k of n`; `numbering` counts them within a
+   * longer file instead (the first one's number and the file's page count).
+   */
+  finish(title: string, footer: string, numbering?: { first: number; total: number }): Drawing[] {
     const n = this.pages.length;
+    const first = numbering?.first ?? 1;
+    const total = numbering?.total ?? n;
     return this.pages.map((shapes, i) => ({
       width: this.width,
       height: this.height,
-      title: `${title}, page ${i + 1} of ${n}`,
-      shapes: [...shapes, text(this.margin, this.height - this.margin, fitText(`${footer}. Page ${i + 1} of ${n}.`, 2.6, this.measure), 2.6, MUTED)],
+      title: `${title}, page ${first + i} of ${total}`,
+      shapes: [...shapes, text(this.margin, this.height - this.margin, fitText(`${footer}. Page ${first + i} of ${total}.`, 2.6, this.measure), 2.6, MUTED)],
     }));
   }
 }

@@ -1,8 +1,8 @@
 import DxfParser from 'dxf-parser';
 import { describe, expect, it } from 'vitest';
-import { panelBores } from '../layout/panel-layout';
 import { exportContext, exportJob } from '../testing/export-job';
-import { checkedLayerName, edgeBoreLayer, faceBoreLayer } from './dxf-layers';
+import { checkedLayerName, holeLayer } from './dxf-layers';
+import { jobDrilling } from './panel-drilling';
 import { panelDxf } from './panel-dxf';
 
 const ctx = exportContext(exportJob({}, [{ id: 'odd', name: 'Odd', role: 'loose', width: 300.1, height: 200.2, thickness: 18, material: 'pb18', bores: [{ id: 'h', x: 0.1 + 0.2, y: 10.000000001, face: 'A', diameter: 5, depth: 10 }] }]));
@@ -18,9 +18,9 @@ interface Entity {
 
 /** Reads a DXF file with dxf-parser (npm registry), the outside reader. */
 function read(panelIndex: number) {
-  const panel = ctx.job.panels[panelIndex];
-  const bores = panelBores(panel, ctx.catalog, ctx.job.system);
-  const text = panelDxf(ctx, panel, bores);
+  const drilling = jobDrilling(ctx.job, ctx.catalog, [])[panelIndex];
+  const { panel, holes: bores } = drilling;
+  const text = panelDxf(ctx, drilling);
   const parsed = new DxfParser().parseSync(text) as unknown as { header: Record<string, unknown>; entities: Entity[]; tables: { layer: { layers: Record<string, unknown> } } };
   return { panel, bores, text, parsed };
 }
@@ -34,14 +34,14 @@ describe('panel DXF', () => {
     expect(/^[\x09\x0a\x0d\x20-\x7e\u00a0-\uffff]*$/.test(text)).toBe(true);
   });
 
-  it('has a CIRCLE for every face bore, its centre and radius those of the bore, on its face, diameter and depth layer', () => {
+  it('has a CIRCLE for every face hole, its centre and radius those of the hole, on its face, diameter, depth and purpose layer', () => {
     for (const index of [0, 2]) {
       const { bores, parsed } = read(index);
       const circles = parsed.entities.filter((e) => e.type === 'CIRCLE');
       const faceBores = bores.filter((b) => b.kind === 'face');
       expect(circles).toHaveLength(faceBores.length);
       for (const bore of faceBores) {
-        const layer = faceBoreLayer(bore.face, bore.diameter, bore.through ? 'through' : bore.depth);
+        const layer = holeLayer(bore.face, bore.diameter, bore.through ? 'through' : bore.depth, bore.purpose);
         const match = circles.find((c) => c.layer === layer && Math.abs(c.center!.x - bore.x) < 0.001 && Math.abs(c.center!.y - bore.y) < 0.001);
         expect(match, `circle of ${bore.id}`).toBeDefined();
         expect(Math.abs(match!.radius! - bore.diameter / 2)).toBeLessThan(0.001);
@@ -49,16 +49,37 @@ describe('panel DXF', () => {
     }
   });
 
-  it('keeps face B bores on layers of their own and names layers our way', () => {
+  it('keeps face B holes on layers of their own and names layers our way: where, diameter, depth, purpose', () => {
     const { parsed } = read(0);
     const layers = Object.keys(parsed.tables.layer.layers);
-    expect(layers).toEqual(expect.arrayContaining(['PANEL_OUTLINE', 'BORE_A_D5_Z13', 'BORE_B_D8_Z11', 'BORE_A_D7_THRU', 'EDGE_Y0_D8_Z21', 'EDGE_X1_D5_Z50']));
+    expect(layers).toEqual(
+      expect.arrayContaining([
+        'PANEL',
+        'REFERENCE_EDGE',
+        'FACE_A-DIA_5-DEPTH_13-LOOSE',
+        'FACE_A-DIA_5-DEPTH_13-MOUNTING_PLATE',
+        'FACE_A-DIA_5-DEPTH_13-SHELF_PIN',
+        'FACE_B-DIA_8-DEPTH_11-LOOSE',
+        'FACE_A-DIA_7-THROUGH-LOOSE',
+        'EDGE_Y0-DIA_8-DEPTH_21-LOOSE',
+        'EDGE_X1-DIA_5-DEPTH_50-LOOSE',
+      ]),
+    );
+    // None of the BORE_<face>_D<diameter>_Z<depth> pattern some machine programs use.
+    for (const layer of layers) expect(layer).not.toMatch(/^(BORE|EDGE)_[A-Z0-9]+_D[\d.]+_(Z[\d.]+|THRU)$/);
     for (const entity of parsed.entities) expect(layers).toContain(entity.layer);
+  });
+
+  it('says "has errors" first in its notes when the checks found errors on the panel', () => {
+    const drilling = { ...jobDrilling(ctx.job, ctx.catalog, [])[0], errors: 2 };
+    const notes = (new DxfParser().parseSync(panelDxf(ctx, drilling)) as unknown as { entities: Entity[] }).entities.filter((e) => e.layer === 'NOTES').map((e) => e.text);
+    expect(notes[0]).toBe('HAS ERRORS (2): SEE THE COVER SHEET');
+    expect(notes.join('\n')).toContain('LEFT side (seen from the front)');
   });
 
   it('draws the outline as a closed polyline of the panel size', () => {
     const { panel, parsed } = read(0);
-    const outline = parsed.entities.find((e) => e.type === 'LWPOLYLINE' && e.layer === 'PANEL_OUTLINE')!;
+    const outline = parsed.entities.find((e) => e.type === 'LWPOLYLINE' && e.layer === 'PANEL')!;
     expect(outline.vertices).toEqual([
       { x: 0, y: 0 },
       { x: panel.width, y: 0 },
@@ -69,7 +90,7 @@ describe('panel DXF', () => {
 
   it('shows an edge bore outside its edge, as long as it is deep, with its position, height and depth written', () => {
     const { panel, parsed } = read(0);
-    const onLayer = parsed.entities.filter((e) => e.layer === 'EDGE_X1_D5_Z50');
+    const onLayer = parsed.entities.filter((e) => e.layer === 'EDGE_X1-DIA_5-DEPTH_50-LOOSE');
     const rectangle = onLayer.find((e) => e.type === 'LWPOLYLINE')!;
     const xs = rectangle.vertices!.map((v) => v.x);
     const ys = rectangle.vertices!.map((v) => v.y);
@@ -88,9 +109,9 @@ describe('panel DXF', () => {
 
 describe('layer names', () => {
   it('are ours and refuse what a DXF reader would change', () => {
-    expect(faceBoreLayer('A', 5, 13)).toBe('BORE_A_D5_Z13');
-    expect(faceBoreLayer('B', 7.5, 'through')).toBe('BORE_B_D7.5_THRU');
-    expect(edgeBoreLayer('x0', 8, 30)).toBe('EDGE_X0_D8_Z30');
+    expect(holeLayer('A', 5, 13, 'shelf-pin')).toBe('FACE_A-DIA_5-DEPTH_13-SHELF_PIN');
+    expect(holeLayer('B', 7.5, 'through', 'loose')).toBe('FACE_B-DIA_7.5-THROUGH-LOOSE');
+    expect(holeLayer('x0', 8, 30, 'construction')).toBe('EDGE_X0-DIA_8-DEPTH_30-CONSTRUCTION');
     expect(() => checkedLayerName('BORE A')).toThrow(/not one of ours/);
     expect(() => checkedLayerName('BORE/A')).toThrow(/not one of ours/);
   });

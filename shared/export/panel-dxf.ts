@@ -8,11 +8,15 @@ import {
   TextVerticalAlignment,
   Units,
 } from '@tarikjabiri/dxf';
-import type { PanelBore, PanelEdgeBore } from '../layout/bore';
+import { handText } from '../layout/side-hand';
 import type { Panel } from '../model/job-document';
 import { printable } from './drawing';
-import { edgeBoreLayer, faceBoreLayer, NOTES_LAYER, OUTLINE_LAYER, REFERENCE_LAYER } from './dxf-layers';
+import { DXF_LAYER_SCHEME, holeLayer, NOTES_LAYER, OUTLINE_LAYER, REFERENCE_LAYER } from './dxf-layers';
 import { carcassName, materialName, type ExportContext } from './export-context';
+import type { EdgeHole } from './map-view';
+import type { PanelDrilling } from './panel-drilling';
+import type { PanelHole } from './panel-holes';
+import { checksText } from './title-block';
 import { lengthText, roundTo } from './units';
 
 /** DXF writers print raw JS numbers (0.30000000000000004, 1e-7): every coordinate goes through here. */
@@ -41,7 +45,7 @@ const TEXT = 3;
 const GAP = 2;
 
 /** Where an edge bore's rectangle lies: outside the edge it enters, as long as the bore is deep, as wide as it is. */
-function edgeRectangle(bore: PanelEdgeBore, panel: Panel): [number, number, number, number] {
+function edgeRectangle(bore: EdgeHole, panel: Panel): [number, number, number, number] {
   const r = bore.diameter / 2;
   switch (bore.edge) {
     case 'x0':
@@ -55,8 +59,13 @@ function edgeRectangle(bore: PanelEdgeBore, panel: Panel): [number, number, numb
   }
 }
 
-function addEdgeBore(dxf: DxfWriter, bore: PanelEdgeBore, panel: Panel): void {
-  const layerName = edgeBoreLayer(bore.edge, bore.diameter, bore.depth);
+/** The layer a hole is drawn on. */
+export function layerOf(hole: PanelHole): string {
+  return hole.kind === 'face' ? holeLayer(hole.face, hole.diameter, hole.through ? 'through' : hole.depth, hole.purpose) : holeLayer(hole.edge, hole.diameter, hole.depth, hole.purpose);
+}
+
+function addEdgeBore(dxf: DxfWriter, bore: EdgeHole, panel: Panel): void {
+  const layerName = layerOf(bore);
   const [x0, y0, x1, y1] = edgeRectangle(bore, panel);
   dxf.addLWPolyline(
     [p(x0, y0), p(x1, y0), p(x1, y1), p(x0, y1)].map((point) => ({ point })),
@@ -77,13 +86,14 @@ function addEdgeBore(dxf: DxfWriter, bore: PanelEdgeBore, panel: Panel): void {
 }
 
 /**
- * A panel's drilling as a DXF file (ASCII, AutoCAD 2007 format, millimetres: $INSUNITS = 4), in the panel's
+ * A panel's holes as a DXF file (ASCII, AutoCAD 2007 format, millimetres: $INSUNITS = 4), in the panel's
  * frame seen from face A: x from the reference edge, y from the lower edge. The outline on its own layer;
- * each face bore a CIRCLE on a layer named for its face, diameter and depth (`BORE_A_D5_Z13`; face B on
- * `BORE_B_…`, in the same frame); each edge bore a rectangle outside the edge it enters, as long as it is
- * deep, with its position, height from face A and depth written beside it (`EDGE_X0_D8_Z30`).
+ * each face hole a CIRCLE, each edge hole a rectangle outside the edge it enters, as long as it is deep,
+ * with its position, height from face A and depth written beside it; every hole on a layer named by our
+ * scheme (dxf-layers.ts: where, diameter, depth, purpose). Face B holes are drawn in the same frame.
  */
-export function panelDxf(ctx: ExportContext, panel: Panel, bores: readonly PanelBore[]): string {
+export function panelDxf(ctx: ExportContext, drilling: PanelDrilling): string {
+  const { panel, holes } = drilling;
   const dxf = new DxfWriter();
   dxf.setUnits(Units.Millimeters);
   const layers = new Map<string, number>([
@@ -91,10 +101,7 @@ export function panelDxf(ctx: ExportContext, panel: Panel, bores: readonly Panel
     [REFERENCE_LAYER, Colors.Red],
     [NOTES_LAYER, Colors.White],
   ]);
-  for (const b of bores) {
-    if (b.kind === 'face') layers.set(faceBoreLayer(b.face, b.diameter, b.through ? 'through' : b.depth), b.face === 'A' ? Colors.Cyan : Colors.Magenta);
-    else layers.set(edgeBoreLayer(b.edge, b.diameter, b.depth), Colors.Yellow);
-  }
+  for (const h of holes) layers.set(layerOf(h), h.kind === 'edge' ? Colors.Yellow : h.face === 'A' ? Colors.Cyan : Colors.Magenta);
   for (const [name, color] of layers) dxf.addLayer(name, color, LineTypes.Continuous);
 
   const { width: W, height: H } = panel;
@@ -102,19 +109,20 @@ export function panelDxf(ctx: ExportContext, panel: Panel, bores: readonly Panel
   dxf.addLine(p(0, 0), p(0, H), { layerName: REFERENCE_LAYER });
   dxf.addText(p(GAP, H / 2), TEXT, 'REFERENCE EDGE X = 0', { layerName: REFERENCE_LAYER, rotation: 90 });
 
-  for (const b of bores) {
-    if (b.kind === 'face') dxf.addCircle(p(b.x, b.y), c(b.diameter / 2), { layerName: faceBoreLayer(b.face, b.diameter, b.through ? 'through' : b.depth) });
-    else addEdgeBore(dxf, b, panel);
+  for (const h of holes) {
+    if (h.kind === 'face') dxf.addCircle(p(h.x, h.y), c(h.diameter / 2), { layerName: layerOf(h) });
+    else addEdgeBore(dxf, h, panel);
   }
 
+  const hand = handText(panel, drilling.hand);
   const notes = [
-    `${ctx.job.name} / ${carcassName(ctx, panel)} / ${panel.name} (${panel.id})`,
-    `${lengthText(W)} x ${lengthText(H)} x ${lengthText(panel.thickness)} mm, ${materialName(ctx, panel)}`,
-    'Units mm. Seen from face A: x from the reference edge (x = 0), y from the lower edge (y = 0).',
-    'Face B bores (layers BORE_B_...) are drawn in the same frame, seen from face A.',
-    'Layers BORE_<face>_D<diameter>_Z<depth> or _THRU; EDGE_<edge>_D<diameter>_Z<depth>.',
+    ...(drilling.errors > 0 ? [checksText(drilling).toUpperCase()] : []),
+    `${ctx.job.name} / ${carcassName(ctx, panel)} / ${panel.name} (${panel.id})${hand ? ` / ${hand}` : ''}`,
+    `${lengthText(W)} x ${lengthText(H)} x ${lengthText(panel.thickness)} mm, ${materialName(ctx, panel)}, ${holes.length} holes`,
+    'Units mm. Seen from face A: x from the reference edge (x = 0), y from the lower edge (y = 0). Face B holes are drawn in the same frame.',
+    `Hole layers: ${DXF_LAYER_SCHEME.pattern}, e.g. ${DXF_LAYER_SCHEME.examples[0]}.`,
   ];
-  const reach = Math.max(0, ...bores.filter((b): b is PanelEdgeBore => b.kind === 'edge' && b.edge === 'y1').map((b) => b.depth + 80));
+  const reach = Math.max(0, ...holes.filter((h): h is EdgeHole => h.kind === 'edge' && h.edge === 'y1').map((h) => h.depth + 80));
   notes.forEach((note, i) => dxf.addText(p(0, H + reach + 10 + 5 * (notes.length - i)), TEXT, printable(note), { layerName: NOTES_LAYER }));
   return roundReals(dxf.stringify());
 }

@@ -7,7 +7,7 @@ import type { PanelDrilling } from './panel-drilling';
 import { PAPER, type PaperName } from './paper';
 import type { PdfTools } from './pdf-document';
 import { drawingToSvg, type SvgWindow } from './svg-render';
-import { templateSheetsPdf } from './template-pdf';
+import { panelTemplates, templateSheetsPdf } from './template-pdf';
 import { utf8Bytes } from './utf8';
 
 /** One file of an export, made when asked for, so that a pack never holds all of its files at once. */
@@ -29,34 +29,35 @@ export interface PanelFileOptions extends PdfTools {
 }
 
 /**
- * A panel's files: its drilling map as SVG (face A, and face B when it has bores of its own), its DXF, and
- * its template sheets as PDF. Names start with `base`. The maps are laid out once for all three kinds
- * and let go after the PDF, the last file to need them.
+ * A panel's files: its drilling map as SVG (face A, and face B when it has holes of its own), its DXF, and
+ * its template sheets as PDF, all drawn from the panel's one hole list. Names start with `base`. The maps
+ * are laid out when the first SVG asks for them and let go after the last.
  */
 export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: string, options: PanelFileOptions): ExportFile[] {
-  const { panel, bores } = drilling;
+  const { panel } = drilling;
   let maps: Drawing[] | undefined;
-  const drawMaps = () => (maps ??= panelDrillingMaps(ctx, panel, bores));
-  const faces = mapViews(panel, bores).map((view) => view.face);
+  const faces = mapViews(panel, drilling.holes).map((view) => view.face);
   const svgs: ExportFile[] = faces.map((face, i) => ({
     name: `${base} face ${face}.svg`,
     label: `${panel.name}: drilling map, face ${face}`,
     compress: true,
-    produce: async () => utf8Bytes(drawingToSvg(drawMaps()[i], options.svgWindow())),
+    produce: async () => {
+      const drawn = (maps ??= panelDrillingMaps(ctx, drilling));
+      if (i === faces.length - 1) maps = undefined;
+      return utf8Bytes(drawingToSvg(drawn[i], options.svgWindow()));
+    },
   }));
   const paper = PAPER[options.paper].name;
   return [
     ...svgs,
-    { name: `${base}.dxf`, label: `${panel.name}: DXF`, compress: true, produce: async () => utf8Bytes(panelDxf(ctx, panel, bores)) },
+    { name: `${base}.dxf`, label: `${panel.name}: DXF`, compress: true, produce: async () => utf8Bytes(panelDxf(ctx, drilling)) },
     {
       name: `${base} templates ${paper}.pdf`,
       label: `${panel.name}: template sheets`,
       compress: false,
       produce: async () => {
-        const drawn = drawMaps();
-        maps = undefined;
         const title = `${ctx.job.name}: ${panel.name}, template sheets`;
-        return templateSheetsPdf(drawn, options.paper, { fontBytes: options.fontBytes, deflate: options.deflate, title, date: ctx.date, producer: `${ctx.generator.name} ${ctx.generator.version}` });
+        return templateSheetsPdf(panelTemplates(ctx, drilling, options.paper), { fontBytes: options.fontBytes, deflate: options.deflate, title, date: ctx.date, producer: `${ctx.generator.name} ${ctx.generator.version}` });
       },
     },
   ];

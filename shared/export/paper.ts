@@ -24,7 +24,7 @@ export interface Rect {
 /** Most printers leave a border of 4 to 6 mm unprinted; 8 mm keeps every mark on the paper. */
 export const PAGE_MARGIN = 8;
 /** Bands around the window: the page label on top, the check bar down the left and across the bottom. */
-const HEADER = 24;
+const HEADER = 29;
 const LEFT_BAND = 12;
 const FOOTER = 14;
 

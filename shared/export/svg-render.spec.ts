@@ -1,16 +1,17 @@
 import { createSVGWindow } from 'svgdom';
 import { describe, expect, it } from 'vitest';
 import type { PanelFaceBore } from '../layout/bore';
-import { panelBores } from '../layout/panel-layout';
 import { exportContext, exportJob } from '../testing/export-job';
 import { panelDrillingMaps } from './drilling-map';
-import { oneMarkPerHole } from './map-view';
+import type { FaceHole } from './map-view';
+import { jobDrilling } from './panel-drilling';
 import { drawingToSvg } from './svg-render';
 
 const ctx = exportContext(exportJob({ name: '<script>alert("job")</script> & Co' }));
-const side = ctx.job.panels[0];
-const bores = panelBores(side, ctx.catalog, ctx.job.system);
-const [faceA, faceB] = panelDrillingMaps(ctx, side, bores).map((map) => drawingToSvg(map, createSVGWindow()));
+const drilling = jobDrilling(ctx.job, ctx.catalog, [])[0];
+const side = drilling.panel;
+const holes = drilling.holes;
+const [faceA, faceB] = panelDrillingMaps(ctx, drilling).map((map) => drawingToSvg(map, createSVGWindow()));
 
 /** The little of the DOM these checks read; the project's type checks carry no DOM types. */
 interface XmlElement {
@@ -73,14 +74,16 @@ describe('drilling map as SVG', () => {
     expect(`${h}mm`).toBe(root.getAttribute('height'));
   });
 
-  it('draws every face A bore as a circle of its diameter where it is drilled, seen from face A', () => {
-    const onA = oneMarkPerHole(bores.filter((b): b is PanelFaceBore => b.kind === 'face' && b.face === 'A'));
+  it('draws every face A hole as a circle of its diameter where it is drilled, seen from face A, named by its key', () => {
+    const onA = holes.filter((b): b is FaceHole => b.kind === 'face' && b.face === 'A');
     expect(onA.length).toBeGreaterThan(40);
     expectCircles(parse(faceA), onA, false);
+    const keys = [...parse(faceA).getElementsByTagName('g')].map((g) => g.getAttribute('data-hole')).filter((k) => k !== null);
+    expect(keys.sort()).toEqual(holes.filter((h) => !(h.kind === 'face' && h.face === 'B')).map((h) => h.key).sort());
   });
 
-  it('draws face B bores dashed on a map of their own, seen from face B', () => {
-    const onB = bores.filter((b): b is PanelFaceBore => b.kind === 'face' && b.face === 'B');
+  it('draws face B holes dashed on a map of their own, seen from face B', () => {
+    const onB = holes.filter((b): b is FaceHole => b.kind === 'face' && b.face === 'B');
     expect(onB).toHaveLength(1);
     expectCircles(parse(faceB), onB, true);
   });
@@ -96,7 +99,7 @@ describe('drilling map as SVG', () => {
   it('stays well-formed XML when a name holds characters XML cannot (set past the schema)', () => {
     const odd = exportContext(exportJob());
     odd.job.name = 'bell\u0007 and half a pair \ud800 ok';
-    const svg = drawingToSvg(panelDrillingMaps(odd, side, bores)[0], createSVGWindow());
+    const svg = drawingToSvg(panelDrillingMaps(odd, drilling)[0], createSVGWindow());
     expect(parse(svg).getElementsByTagName('title')[0].textContent).toContain('bell  and half a pair   ok');
   });
 

@@ -45,6 +45,7 @@ function drawShape(root: Container, shape: Shape): Element {
       // Written out in place, so that every circle in the file has its true centre: what a reader of
       // the file (or a CAM program) expects of a drilling map.
       const group = root.group();
+      if (shape.hole !== undefined) group.attr('data-hole', shape.hole);
       for (const inner of translate(shape.drawing.shapes, shape.x, shape.y)) drawShape(group, inner);
       return group;
     }

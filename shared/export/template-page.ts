@@ -1,6 +1,6 @@
 import { checkBarSymbol } from './check-bar';
 import { line, text, type Shape, type SymbolShape } from './drawing';
-import { INK, MUTED } from './palette';
+import { ERROR_RED, INK, MUTED } from './palette';
 import { PAGE_MARGIN } from './paper';
 import { fitText } from './text-width';
 import { TILE_OVERLAP, tileName, type Tile, type TilePlan } from './tiles';
@@ -30,9 +30,13 @@ function registrationMark(x: number, y: number): SymbolShape {
   return { kind: 'symbol', id: 'registration-mark', x: x - MARK / 2, y: y - MARK / 2, drawing: { width: MARK, height: MARK, title: 'registration mark', shapes: MARK_SHAPES } };
 }
 
+const tileCell = (plan: TilePlan) => Math.min(5, 44 / plan.cols, 16 / plan.rows);
+/** How much of the header's width the small map of the tiles and its `rows × cols` take, mm. */
+const tileMapWidth = (plan: TilePlan) => tileCell(plan) * plan.cols + 14;
+
 /** The small map of the tiles in the header, right-aligned at `right`: every page a cell, this one filled. */
 function tileMap(plan: TilePlan, tile: Tile, right: number, top: number): Shape[] {
-  const cell = Math.min(5, 44 / plan.cols, 16 / plan.rows);
+  const cell = tileCell(plan);
   const width = cell * plan.cols;
   const height = cell * plan.rows;
   const left = right - width;
@@ -59,12 +63,23 @@ function neighbours(plan: TilePlan, tile: Tile): string {
   return parts.length === 0 ? 'A single page: nothing to join.' : `Joins ${parts.join(', ')}. Cut along the dashed edge, lay it on the grey strip of the page before and match the square marks.`;
 }
 
+/** What every page of one map's templates says of the panel besides its title. */
+export interface PageFacts {
+  /** The map's title: job, panel and face. */
+  title: string;
+  /** The face up, where the reference edge is and a side's hand (drilling-map.ts `orientationText`). */
+  orientation: string;
+  /** The checks' word when they found errors on the panel; none otherwise. */
+  errors?: string;
+}
+
 /**
- * The marks of one template page, in the page's mm: its label (what, which tile, which page), the words
- * "print at actual size (100 %)", a small map of the tiles, a 100 mm check bar across and one down, the
- * grey overlap strips the next pages are laid on, dashed cut edges and the registration marks.
+ * The marks of one template page, in the page's mm: its label (what, which tile, which page), the face up
+ * with the reference edge and a side's hand, "has errors" when the panel has, the words "print at actual
+ * size (100 %)", a small map of the tiles, a 100 mm check bar across and one down, the grey overlap strips
+ * the next pages are laid on, dashed cut edges and the registration marks.
  */
-export function templatePage(plan: TilePlan, tile: Tile, title: string, page: number, pages: number): PageFurniture {
+export function templatePage(plan: TilePlan, tile: Tile, facts: PageFacts, page: number, pages: number): PageFurniture {
   const w = plan.window;
   const under: Shape[] = [];
   const over: Shape[] = [{ kind: 'rect', x: w.x, y: w.y, width: w.width, height: w.height, stroke: { color: MUTED, width: 0.2 } }];
@@ -88,13 +103,15 @@ export function templatePage(plan: TilePlan, tile: Tile, title: string, page: nu
   if (!last.row) across.forEach((u) => over.push(onPage(u, area.y + area.height - half)));
 
   const right = plan.pageWidth - PAGE_MARGIN;
-  const textWidth = right - PAGE_MARGIN - 52;
+  const textWidth = right - PAGE_MARGIN - tileMapWidth(plan);
   const name = tileName(tile.row, tile.col);
+  const heading = facts.errors ? `${facts.errors} · ${name}: ${facts.title}` : `${name}: ${facts.title}`;
   over.push(
-    text(PAGE_MARGIN, PAGE_MARGIN + 5, fitText(`${name}: ${title}`, 4.2, textWidth), 4.2, INK),
-    text(PAGE_MARGIN, PAGE_MARGIN + 10.5, fitText(PRINT_AT_ACTUAL_SIZE, 3.4, textWidth), 3.4, INK),
-    text(PAGE_MARGIN, PAGE_MARGIN + 15.5, fitText(`Row ${tile.row + 1} of ${plan.rows}, column ${tile.col + 1} of ${plan.cols}; page ${page} of ${pages}. Check both 100 mm bars before drilling.`, 3, textWidth), 3, INK),
-    text(PAGE_MARGIN, PAGE_MARGIN + 20, fitText(neighbours(plan, tile), 2.5, right - PAGE_MARGIN), 2.5, MUTED),
+    text(PAGE_MARGIN, PAGE_MARGIN + 5, fitText(heading, 4.2, textWidth), 4.2, facts.errors ? ERROR_RED : INK),
+    text(PAGE_MARGIN, PAGE_MARGIN + 10.5, fitText(facts.orientation, 3, textWidth), 3, INK),
+    text(PAGE_MARGIN, PAGE_MARGIN + 15.5, fitText(PRINT_AT_ACTUAL_SIZE, 3.2, textWidth), 3.2, INK),
+    text(PAGE_MARGIN, PAGE_MARGIN + 20.5, fitText(`Row ${tile.row + 1} of ${plan.rows}, column ${tile.col + 1} of ${plan.cols}; page ${page} of ${pages}. Check both 100 mm bars before drilling.`, 3, textWidth), 3, INK),
+    text(PAGE_MARGIN, PAGE_MARGIN + 25, fitText(neighbours(plan, tile), 2.5, right - PAGE_MARGIN), 2.5, MUTED),
     ...tileMap(plan, tile, right, PAGE_MARGIN),
     checkBarSymbol(w.x, w.y + w.height + 3, true),
     checkBarSymbol(PAGE_MARGIN + 1.5, w.y, false),

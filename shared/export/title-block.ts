@@ -1,47 +1,64 @@
+import { handText } from '../layout/side-hand';
+import type { Face } from '../model/job-document';
 import { line, text, type Shape } from './drawing';
 import { carcassName, dateText, faceText, materialName, type ExportContext } from './export-context';
-import type { MapView } from './map-view';
-import { INK, MUTED } from './palette';
+import { ERROR_RED, INK, MUTED } from './palette';
+import type { PanelDrilling } from './panel-drilling';
 import { fitText } from './text-width';
 import { lengthText } from './units';
 
 const CELL_W = 38;
 const CELL_H = 9;
-const TITLE_BLOCK_WIDTH = 5 * CELL_W;
+const COLUMNS = 5;
+const TITLE_BLOCK_WIDTH = COLUMNS * CELL_W;
+const HEAD = 11;
+
+/** What a panel's files say of the checks: "has errors" with their count, or that there are none. */
+export function checksText(drilling: PanelDrilling): string {
+  return drilling.errors > 0 ? `HAS ERRORS (${drilling.errors}): see the cover sheet` : 'no errors';
+}
 
 /**
- * The title block of a drilling map, drawn from its top left: the panel's name large, then job, carcass,
- * panel, size, material, thickness, face, date, version and what made it. Every value is plain text.
+ * The title block of a drilling map, drawn from its top left: the panel's name large (and HAS ERRORS in red
+ * when the checks found any on it), then job, carcass, panel, size, material, thickness, face, which side
+ * of the carcass a side is, date, version, what made it and the checks' word. Every value is plain text.
  */
-export function titleBlock(ctx: ExportContext, view: MapView): { shapes: Shape[]; width: number; height: number } {
-  const { panel } = view;
+export function titleBlock(ctx: ExportContext, drilling: PanelDrilling, face: Face): { shapes: Shape[]; width: number; height: number } {
+  const { panel } = drilling;
   const version = ctx.panelVersion?.(panel.id);
-  const cells: [string, string][] = [
-    ['Job', ctx.job.name],
-    ['Carcass', carcassName(ctx, panel)],
-    ['Panel', `${panel.id} (${panel.role})`],
-    ['Size (x × y)', `${lengthText(panel.width)} × ${lengthText(panel.height)} mm`],
-    ['Material', materialName(ctx, panel)],
-    ['Thickness', `${lengthText(panel.thickness)} mm`],
-    ['Face', faceText(panel.role, view.face)],
-    ['Date', dateText(ctx.date)],
-    ['Version', version === undefined ? 'from a job file' : `panel version ${version}`],
-    ['Made by', `${ctx.generator.name} ${ctx.generator.version}`],
+  // Row by row, five columns wide; the side and the checks take more room than one cell.
+  const cells: { label: string; value: string; span?: number; color?: string }[] = [
+    { label: 'Job', value: ctx.job.name },
+    { label: 'Carcass', value: carcassName(ctx, panel) },
+    { label: 'Panel', value: `${panel.id} (${panel.role})` },
+    { label: 'Size (x × y)', value: `${lengthText(panel.width)} × ${lengthText(panel.height)} mm` },
+    { label: 'Material', value: materialName(ctx, panel) },
+    { label: 'Thickness', value: `${lengthText(panel.thickness)} mm` },
+    { label: 'Face up', value: faceText(panel.role, face) },
+    { label: 'Date', value: dateText(ctx.date) },
+    { label: 'Version', value: version === undefined ? 'from a job file' : `panel version ${version}` },
+    { label: 'Made by', value: `${ctx.generator.name} ${ctx.generator.version}` },
+    { label: 'Side', value: handText(panel, drilling.hand) ?? `not a side (${panel.role})`, span: 2 },
+    { label: 'Checks', value: checksText(drilling), span: 3, color: drilling.errors > 0 ? ERROR_RED : INK },
   ];
   const frame = { color: INK, width: 0.35 };
-  const head = 11;
-  const height = head + 2 * CELL_H;
+  const rows = Math.ceil(cells.reduce((n, c) => n + (c.span ?? 1), 0) / COLUMNS);
+  const height = HEAD + rows * CELL_H;
+  const flag = drilling.errors > 0 ? 'HAS ERRORS' : '';
   const shapes: Shape[] = [
     { kind: 'rect', x: 0, y: 0, width: TITLE_BLOCK_WIDTH, height, stroke: frame },
-    text(2, 7.5, fitText(`${panel.name}: drilling map, face ${view.face}`, 5, TITLE_BLOCK_WIDTH - 4), 5, INK),
-    line(0, head, TITLE_BLOCK_WIDTH, head, frame),
-    line(0, head + CELL_H, TITLE_BLOCK_WIDTH, head + CELL_H, { color: MUTED, width: 0.15 }),
+    text(2, 7.5, fitText(`${panel.name}: drilling map, face ${face}`, 5, TITLE_BLOCK_WIDTH - 4 - (flag ? 36 : 0)), 5, INK),
+    line(0, HEAD, TITLE_BLOCK_WIDTH, HEAD, frame),
   ];
-  cells.forEach(([label, value], i) => {
-    const x = (i % 5) * CELL_W;
-    const y = head + Math.floor(i / 5) * CELL_H;
-    if (i % 5 > 0) shapes.push(line(x, y, x, y + CELL_H, { color: MUTED, width: 0.15 }));
-    shapes.push(text(x + 1.5, y + 3, label, 2.2, MUTED), text(x + 1.5, y + 7.4, fitText(value, 3.2, CELL_W - 3), 3.2, INK));
-  });
+  if (flag) shapes.push(text(TITLE_BLOCK_WIDTH - 2, 7.8, flag, 5, ERROR_RED, 'end'));
+  for (let r = 1; r < rows; r++) shapes.push(line(0, HEAD + r * CELL_H, TITLE_BLOCK_WIDTH, HEAD + r * CELL_H, { color: MUTED, width: 0.15 }));
+  let column = 0;
+  for (const { label, value, span = 1, color = INK } of cells) {
+    const x = (column % COLUMNS) * CELL_W;
+    const y = HEAD + Math.floor(column / COLUMNS) * CELL_H;
+    if (x > 0) shapes.push(line(x, y, x, y + CELL_H, { color: MUTED, width: 0.15 }));
+    shapes.push(text(x + 1.5, y + 3, label, 2.2, MUTED), text(x + 1.5, y + 7.4, fitText(value, 3.2, span * CELL_W - 3), 3.2, color));
+    column += span;
+  }
   return { shapes, width: TITLE_BLOCK_WIDTH, height };
 }

@@ -56,7 +56,11 @@ export interface PdfPath {
   y1: number;
   /** Filled in pure black (as QR modules and check-bar blocks are). */
   filledBlack: boolean;
+  /** Drawn with curves (a circle is four quarter arcs), not straight lines and rectangles alone. */
+  curved: boolean;
 }
+
+const CURVES = new Set<number>([OPS.curveTo, OPS.curveTo2, OPS.curveTo3]);
 
 /**
  * One page of a PDF as pdfjs-dist, an outside reader, draws it: every path's box with transforms and form
@@ -81,7 +85,8 @@ export async function readPdfPage(bytes: Uint8Array, pageNumber: number): Promis
       const [x0, y0, x1, y1] = pathBox(args[0] as number[], args[1] as number[]);
       const a = multiply(ctm, [1, 0, 0, 1, x0, y0]);
       const b = multiply(ctm, [1, 0, 0, 1, x1, y1]);
-      paths.push({ x0: Math.min(a[4], b[4]), y0: Math.min(a[5], b[5]), x1: Math.max(a[4], b[4]), y1: Math.max(a[5], b[5]), filledBlack: false });
+      const curved = (args[0] as number[]).some((op) => CURVES.has(op));
+      paths.push({ x0: Math.min(a[4], b[4]), y0: Math.min(a[5], b[5]), x1: Math.max(a[4], b[4]), y1: Math.max(a[5], b[5]), filledBlack: false, curved });
     }
     if ((fn === OPS.fill || fn === OPS.eoFill) && paths.length > 0) paths[paths.length - 1].filledBlack = black;
   });

@@ -73,13 +73,19 @@ export class BenchPack {
     if (sent) this.snackBar.open(sentMessage(sent), undefined, { duration: 6000 });
   }
 
-  /** A job with errors can still be packed (its cover says so), but only after the user has agreed. */
+  /**
+   * A job with errors can still be packed (the bench may need it), but only after the user has agreed: the
+   * cover sheet and manifest carry the findings and each panel they concern says "has errors".
+   */
   private async confirmErrors(confirmLabel: string): Promise<boolean> {
     const errors = this.errors();
     if (errors === 0) return true;
+    const panels = new Set(this.findings.hasValue() ? this.findings.value().findings.filter((f) => f.severity === 'error').map((f) => f.panel) : []).size;
     return ConfirmDialog.ask(this.dialog, {
       title: `This job has ${plural(errors, 'error')}`,
-      message: `The checks found ${plural(errors, 'error')} in “${this.jobName()}”. The pack's cover sheet will say that it contains errors; nobody should drill what they concern until they are put right.`,
+      message:
+        `The checks found ${plural(errors, 'error')} on ${plural(panels, 'panel')} of “${this.jobName()}”. The pack is still made: its cover sheet and manifest list the findings, ` +
+        `and the files of each panel concerned say “has errors” in the title block. Nobody should drill what they concern until they are put right.`,
       confirmLabel,
     });
   }
