@@ -20,7 +20,7 @@ describe('BenchPage', () => {
     errors: 1,
     warnings: 0,
     notes: 0,
-    findings: [{ code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: side.id, bores: [], placements: [] }],
+    findings: [{ code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: side.id, bores: [], placements: [], fixes: [] }],
   };
 
   async function openAs(role: Role, url: string): Promise<void> {

@@ -80,7 +80,7 @@ export class BenchPack {
   private async confirmErrors(confirmLabel: string): Promise<boolean> {
     const errors = this.errors();
     if (errors === 0) return true;
-    const panels = new Set(this.findings.hasValue() ? this.findings.value().findings.filter((f) => f.severity === 'error').map((f) => f.panel) : []).size;
+    const panels = new Set((this.findings.value()?.findings ?? []).filter((f) => f.severity === 'error').map((f) => f.panel)).size;
     return ConfirmDialog.ask(this.dialog, {
       title: `This job has ${plural(errors, 'error')}`,
       message:
