@@ -67,12 +67,23 @@ describe('the panel editor in the browser', () => {
     await expect.poll(() => clashes.count()).toBe(0);
     const from = await screenPoint(page, size, { x: Number(x), y: Number(y) + 96 });
     const to = await screenPoint(page, size, { x: Number(x), y: Number(y) });
+    // The stage keeps its box and its zoom under the pointer for the whole drag, while the clash (an
+    // error) appears and autosave says it waits: nothing that comes up may push or rescale the canvas.
+    const stageState = async () => ({ box: await page.locator('bw-panel-stage').boundingBox(), zoom: await page.locator('.zoom').innerText() });
+    const stageBefore = await stageState();
     await page.mouse.move(from.x, from.y);
     await page.mouse.down();
-    for (let k = 1; k <= 10; k++) await page.mouse.move(from.x, from.y + ((to.y - from.y) * k) / 10);
-    await page.mouse.up();
-
+    for (let k = 1; k <= 10; k++) {
+      await page.mouse.move(from.x, from.y + ((to.y - from.y) * k) / 10);
+      expect(await stageState(), `step ${k} of the drag`).toEqual(stageBefore);
+    }
     await expect.poll(() => clashes.count()).toBeGreaterThan(0);
+    await expect.poll(() => page.locator('.held').count()).toBe(1);
+    expect(await stageState()).toEqual(stageBefore);
+    await page.mouse.up();
+    expect(await stageState()).toEqual(stageBefore);
+    // The plate landed where the pointer let go: on the first plate's hole, not a stage's shift away.
+    await expect.poll(async () => (await placementRows(page))[before + 1]).toContain(`y ${Number(y)},`);
     expect(await ringsOnStage(page, 'bores-overlap') + (await ringsOnStage(page, 'keepouts-overlap'))).toBeGreaterThan(0);
     await screenshot(page, 'editor-finding');
 
