@@ -1,0 +1,11 @@
+import { describe, expect, it } from 'vitest';
+import { mountingWords } from './carcass-mounting';
+
+describe('mountingWords', () => {
+  it('says what the planner said: a kickboard, a wall, or a carcass drawn by hand standing on the floor', () => {
+    expect(mountingWords({ mounting: 'floor', plannedFrom: { mounting: { type: 'kickboard', height: 100, setBack: 50 } } })).toBe('On a kickboard');
+    expect(mountingWords({ mounting: 'wall', plannedFrom: { mounting: { type: 'wall' } } })).toBe('Wall-hung');
+    expect(mountingWords({ mounting: 'floor' })).toBe('Floor-standing');
+    expect(mountingWords({ mounting: 'wall' })).toBe('Wall-hung');
+  });
+});
