@@ -18,7 +18,7 @@ import { ConfirmDialog } from '../ui/confirm-dialog';
 import { CautionList } from '../ui/caution-list';
 import { cautionsOfUnits } from '../ui/job-cautions';
 import { PanelProgress } from '../ui/panel-progress';
-import { mountingWords } from './carcass-mounting';
+import { mountingWords, replannableOnScreen } from './carcass-card';
 import { CutListImport } from './cut-list-import';
 import { JobAttachments } from './job-attachments';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
@@ -55,6 +55,7 @@ export class JobPage {
     return job ? cautionsOfUnits(job, this.catalog()) : [];
   });
   protected readonly mounting = mountingWords;
+  protected readonly replannable = replannableOnScreen;
 
   protected readonly documentUrl = jobDocumentUrl;
   protected readonly labelsUrl = (jobId: number) => labelsPath(jobId);
