@@ -105,6 +105,6 @@ describe('every main screen for every role', () => {
       }
       expect(problems).toEqual({});
       expect(wide).toEqual({});
-    });
+    }, 300_000);
   }
 });
