@@ -23,6 +23,13 @@ export function authRoutes(router: Router, context: RouteContext): void {
     res.json({ user: req.user });
   });
 
+  // What the app asks on load: whoever is signed in, or null. Nobody signed in is an answer, not an
+  // error, so the sign-in page loads without a 401 in the browser's console.
+  router.get('/auth/session', (req, res) => {
+    issueCsrfToken(req, res, cookie);
+    res.json({ user: req.user ?? null });
+  });
+
   router.post('/auth/sign-in', jsonBody, signInLimits(config.signInLimits), async (req, res) => {
     req.body = signInBody.parse(req.body);
     const user = await authenticateLocal(authenticator, req, res);

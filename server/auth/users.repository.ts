@@ -30,7 +30,7 @@ export async function insertUsers(db: Database, rows: (typeof users.$inferInsert
   return db.insert(users).values(rows).returning(accountColumns);
 }
 
-/** Everyone's name and address, by name: the people mail can be sent to without typing an address. */
+/** The active members' names and addresses, by name: the people mail can be sent to without typing an address (a deactivated member is no longer one of them). */
 export function listPeople(db: Database) {
-  return db.select({ name: users.name, email: users.email }).from(users).orderBy(users.name);
+  return db.select({ name: users.name, email: users.email }).from(users).where(eq(users.active, true)).orderBy(users.name);
 }

@@ -75,9 +75,17 @@ describe('sending a pack by mail through the local catcher', () => {
     expect(tooMany.body.error.fields).toEqual({ to: 'must name at most 20 recipients' });
   });
 
-  it('lists the shop people a pack can be sent to', async () => {
+  it('lists the shop people a pack can be sent to, and no longer a member deactivated', async () => {
     const { body } = await designer.get('/api/mail/recipients').expect(200);
     expect(body.people).toContainEqual({ name: 'Tomas Ward', email: 'designer@greyfield.example' });
+    const viewer = body.people.find((p: { email: string }) => p.email === 'viewer@greyfield.example');
+    expect(viewer).toBeDefined();
+    const { body: team } = await owner.get('/api/team').expect(200);
+    const member = team.members.find((m: { email: string }) => m.email === 'viewer@greyfield.example');
+    await owner.patch(`/api/team/members/${member.id}`).send({ active: false }).expect(200);
+    const after = await designer.get('/api/mail/recipients').expect(200);
+    expect(after.body.people).not.toContainEqual(viewer);
+    await owner.patch(`/api/team/members/${member.id}`).send({ active: true }).expect(200);
   });
 
   it('refuses a link it did not sign with 403, and an expired one with 410', async () => {

@@ -165,6 +165,8 @@ export const panelDeleteQuery = z.object({
 export const activityQuery = z.object({ jobId: dbId.optional() });
 
 export const userAnswer = z.object({ user });
+/** GET /api/auth/session: who is signed in, or null. */
+export const sessionAnswer = z.object({ user: user.nullable() });
 export const jobList = z.object({ jobs: z.array(jobSummary) });
 
 /** Saving a panel's drilling from the editor: the whole lists replace the stored ones. */

@@ -59,6 +59,22 @@ const drawers = z.object({
   material: materialId.optional(),
 });
 
+const sectionFront = z.discriminatedUnion('type', [z.object({ type: z.literal('none') }), doors, flap, drawers]);
+
+/**
+ * A carcass divided by fixed shelves into sections, each with its own front: doors below a lift-up flap,
+ * drawers under doors. From the bottom up; each section's height runs from the carcass's lower edge or the
+ * centre of the dividing shelf below it to the centre of the one above it, and the last takes what is left.
+ * A flap hangs from the carcass's top, so it can only be the top section's front.
+ */
+const sections = z.object({
+  type: z.literal('sections'),
+  sections: z
+    .array(z.object({ height: length(MAX_PANEL_LENGTH).optional(), front: sectionFront }))
+    .min(2, 'must have at least 2 sections')
+    .max(4, 'must have at most 4 sections'),
+});
+
 const shelves = z.discriminatedUnion('type', [
   z.object({ type: z.literal('none') }),
   z.object({ type: z.literal('fixed'), count: z.number().int('must be a whole number').min(1).max(10) }),
@@ -92,7 +108,7 @@ export const carcassPlanInput = z.object({
   limits: shopLimits.default({ minWeb: 3, minEdge: 3, minFloor: 3, sagRatio: 144 }),
   back,
   construction: z.enum(['dowels', 'cams', 'screws']),
-  fronts: z.discriminatedUnion('type', [z.object({ type: z.literal('none') }), doors, flap, drawers]),
+  fronts: z.discriminatedUnion('type', [z.object({ type: z.literal('none') }), doors, flap, drawers, sections]),
   shelves,
   mounting,
 });
@@ -102,4 +118,6 @@ export type CarcassPlanInputData = z.input<typeof carcassPlanInput>;
 export type DoorsInput = z.output<typeof doors>;
 export type FlapInput = z.output<typeof flap>;
 export type DrawersInput = z.output<typeof drawers>;
+export type SectionsInput = z.output<typeof sections>;
+export type SectionFrontInput = z.output<typeof sectionFront>;
 export type ShelvesInput = CarcassPlanInput['shelves'];

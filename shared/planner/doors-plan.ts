@@ -4,11 +4,11 @@ import { panelMass } from '../compute/panel-mass';
 import type { Panel } from '../model/job-document';
 import type { DoorsInput } from './carcass-plan-input';
 import { explain, type Explained } from './explained';
-import { frontSizes } from './front-sizes';
+import { frontSizes, openingBand } from './front-sizes';
 import { chooseHinge, type HingeChoice } from './hinge-choice';
 import { hingeHeights, type HingeHeight } from './hinge-heights';
 import { cupPlacements, platePlacements } from './hinge-placements';
-import { carcassPanel, noPlacements, partId, type PartPlacements, type PlanContext } from './plan-parts';
+import { carcassPanel, frontName, noPlacements, openingInside, partId, type PartPlacements, type PlanContext } from './plan-parts';
 
 /** One planned door and why it is as it is. */
 export interface DoorPlan {
@@ -56,7 +56,8 @@ export function frontHinging(
  */
 export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorPlan> | { errors: string[] } {
   const { input, box, catalog } = ctx;
-  const sizes = frontSizes(doors.overlay, doors.count, doors.reveal, { width: input.width, height: input.height, thickness: box.thickness });
+  const whole = frontSizes(doors.overlay, doors.count, doors.reveal, { width: input.width, height: input.height, thickness: box.thickness });
+  const sizes = { ...whole, ...openingBand(doors.overlay, doors.reveal, ctx.opening, openingInside(ctx), whole) };
   const material = ctx.materials.get(doors.material ?? box.board.id) ?? box.board;
   const minWidth = 2 * input.system.pitch;
   if (sizes.width.value < minWidth || sizes.height.value < minWidth) {
@@ -78,10 +79,10 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   const parts = noPlacements();
   const plans: DoorPlan[] = [];
   const panels = hands.map((hand) => {
-    const part = doors.count === 2 ? `door-${hand}` : 'door';
+    const name = frontName(ctx, doors.count === 2 ? `door-${hand}` : 'door', doors.count === 2 ? `${hand} door` : 'door');
     const sideId = partId(ctx, hand);
-    parts[hand].push(...platePlacements(choice, heights.hinges, plateX));
-    const panel = carcassPanel(ctx, part, doors.count === 2 ? `${hand} door` : 'door', 'door', size, {
+    parts[hand].push(...platePlacements(choice, heights.hinges, plateX, ctx.opening.part));
+    const panel = carcassPanel(ctx, name.part, name.label, 'door', size, {
       material: material.id,
       hang: { on: [sideId], dy: sizes.dy.value },
       handleMass: doors.handleMass > 0 ? doors.handleMass : undefined,

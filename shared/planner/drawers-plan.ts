@@ -6,7 +6,7 @@ import type { DrawersInput } from './carcass-plan-input';
 import type { FrontsStep } from './doors-plan';
 import { explain, type Explained } from './explained';
 import { frontSizes } from './front-sizes';
-import { carcassPanel, noPlacements, type PlanContext } from './plan-parts';
+import { carcassPanel, frontName, noPlacements, openingInside, type PlanContext } from './plan-parts';
 
 type Runner = Extract<Fitting, { purpose: 'runner' }>;
 
@@ -38,7 +38,10 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
   const n = drawers.count;
   const one = frontSizes('full', 1, drawers.reveal, { width: input.width, height: input.height, thickness: T });
   // Down to half a millimetre, a size a bench can cut; what is left widens the top reveal.
-  const frontHeight = Math.floor(((input.height - n * drawers.reveal) / n) * 2) / 2;
+  const { from, to, part: section } = ctx.opening;
+  const span = to - from;
+  const inside = openingInside(ctx);
+  const frontHeight = Math.floor(((span - n * drawers.reveal) / n) * 2) / 2;
   if (frontHeight < 2 * input.system.pitch) return { errors: [`fronts.count: ${n} drawers leave fronts of ${mm(frontHeight)}, too low for a drawer`] };
   const front = box.rows.front.value;
   const runners = [...catalog.values()]
@@ -53,19 +56,20 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
   const plans: DrawerPlan[] = [];
   const panels = [];
   for (let i = 0; i < n; i++) {
-    const lower = drawers.reveal / 2 + i * (frontHeight + drawers.reveal);
-    const y = holes.find((h) => h + below >= Math.max(lower, T));
+    const lower = from + drawers.reveal / 2 + i * (frontHeight + drawers.reveal);
+    const y = holes.find((h) => h + below >= Math.max(lower, inside.low));
     if (y === undefined || y + above > lower + frontHeight) return { errors: [`height: no system hole carries the runner of drawer ${i + 1}`] };
-    const placement: Placement = { id: `runner-${i + 1}`, fitting: runner.id, x: front, y, face: 'A', rotation: 0 };
+    const placement: Placement = { id: `${section ? `${section}-` : ''}runner-${i + 1}`, fitting: runner.id, x: front, y, face: 'A', rotation: 0 };
     parts.left.push(placement);
     parts.right.push(placement);
-    const panel = carcassPanel(ctx, `drawer-${i + 1}`, `drawer front ${i + 1}`, 'drawer-front', { width: one.width.value, height: frontHeight }, { material: material.id });
+    const name = frontName(ctx, `drawer-${i + 1}`, `drawer front ${i + 1}`);
+    const panel = carcassPanel(ctx, name.part, name.label, 'drawer-front', { width: one.width.value, height: frontHeight }, { material: material.id });
     panels.push(panel);
     plans.push({
       panel: panel.id,
       width: one.width,
-      height: explain(frontHeight, `the ${mm(input.height)} height less ${n} reveals of ${mm(drawers.reveal)}, shared by ${n}, down to 0.5 mm`),
-      runner: { fitting: runner.id, y: explain(y, `the lowest system hole that keeps the runner's body above ${mm(Math.max(lower, T))}, behind its front; ${runner.name}, the longest that clears the back`) },
+      height: explain(frontHeight, `the ${mm(span)} height less ${n} reveals of ${mm(drawers.reveal)}, shared by ${n}, down to 0.5 mm`),
+      runner: { fitting: runner.id, y: explain(y, `the lowest system hole that keeps the runner's body above ${mm(Math.max(lower, inside.low))}, behind its front; ${runner.name}, the longest that clears the back`) },
     });
   }
   return { panels, parts, plans, notes: [] };

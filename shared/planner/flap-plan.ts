@@ -5,14 +5,14 @@ import type { Placement } from '../model/job-document';
 import type { FlapInput } from './carcass-plan-input';
 import { frontHinging, type FrontsStep } from './doors-plan';
 import { explain, type Explained } from './explained';
-import { frontSizes } from './front-sizes';
+import { frontSizes, openingBand } from './front-sizes';
 import { chooseHinge, type HingeChoice } from './hinge-choice';
 import { hingeHeights, type HingeHeight } from './hinge-heights';
 import { cupPlacements, platePlacements } from './hinge-placements';
 import { chooseLift, type LiftChoice } from './lift-choice';
 import { clearOfBodies } from './clear-of-bodies';
 import { connectorColumns, jointPlacements } from './construction';
-import { carcassPanel, noPlacements, partId, type PlanContext } from './plan-parts';
+import { carcassPanel, frontName, noPlacements, openingInside, partId, type PlanContext } from './plan-parts';
 
 /** The planned flap: its size, mass, power factor, mechanism, hinges in the top and its moment curve. */
 export interface FlapPlan {
@@ -44,7 +44,10 @@ const ANGLE_STEP = 5;
 export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan> | { errors: string[] } {
   const { input, box, catalog } = ctx;
   const T = box.thickness;
-  const sizes = frontSizes('full', 1, flap.reveal, { width: input.width, height: input.height, thickness: T });
+  if (!ctx.opening.upperIsBox) return { errors: [`fronts: a lift-up flap hangs from the carcass's top, so only the top section can have one`] };
+  const whole = frontSizes('full', 1, flap.reveal, { width: input.width, height: input.height, thickness: T });
+  const inside = openingInside(ctx);
+  const sizes = { ...whole, ...openingBand('full', flap.reveal, ctx.opening, inside, whole) };
   const material = ctx.materials.get(flap.material ?? box.board.id) ?? box.board;
   const size = { width: sizes.height.value, height: sizes.width.value, thickness: material.thickness };
   const hinging = frontHinging(size, material.density, flap.handleMass, size.height);
@@ -67,8 +70,8 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
   if ('error' in heights) return { errors: [heights.error] };
   const top = lift.fitting.keepOuts.reduce((m, k) => Math.max(m, k.y + k.height), 0);
   const bottom = lift.fitting.keepOuts.reduce((m, k) => Math.min(m, k.y), 0);
-  const anchor = holeHeights(box.grid).filter((y) => y + top <= input.height - T && y + bottom >= T).at(-1);
-  if (anchor === undefined) return { errors: [`height: ${mm(input.height)} is too low for the lift mechanism's body between top and bottom`] };
+  const anchor = holeHeights(box.grid).filter((y) => y + top <= inside.high && y + bottom >= inside.low).at(-1);
+  if (anchor === undefined) return { errors: [`height: ${mm(inside.high - inside.low)} inside is too low for the lift mechanism's body`] };
   const parts = noPlacements();
   const hands = flap.mechanisms === 2 ? (['left', 'right'] as const) : (['left'] as const);
   const mechanisms = hands.map((hand) => {
@@ -81,7 +84,8 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
     };
   });
   parts.top.push(...platePlacements(choice, heights.hinges, topGrid.rows[0]));
-  const panel = carcassPanel(ctx, 'flap', 'flap', 'flap', size, {
+  const name = frontName(ctx, 'flap', 'flap');
+  const panel = carcassPanel(ctx, name.part, name.label, 'flap', size, {
     material: material.id,
     hang: { on: [partId(ctx, 'top'), ...hands.map((hand) => partId(ctx, hand))], dy },
     handleMass: flap.handleMass > 0 ? flap.handleMass : undefined,

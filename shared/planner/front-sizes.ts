@@ -1,6 +1,7 @@
 import { mm } from '../checks/wording';
 import { explain, type Explained } from './explained';
 import type { OverlayKind } from './hinge-choice';
+import type { Opening } from './plan-parts';
 
 /** The outside of the box that fronts cover. */
 export interface FrontOpening {
@@ -54,5 +55,27 @@ export function frontSizes(kind: OverlayKind, count: number, reveal: number, box
     dy: explain(r / 2, `half the ${mm(r)} reveal above the sides' lower edge`),
     overlay: explain(covered - r / 2, `${kind} overlay: ${mm(covered)} of the ${mm(T)} side less half the ${mm(r)} reveal`),
     left: T - covered + r / 2,
+  };
+}
+
+/**
+ * The height and lower edge of the fronts of one opening. For the whole carcass they are `frontSizes`' own.
+ * In a section, full and half overlay fronts meet a dividing shelf as two carcasses' fronts meet a shared
+ * side: each covers its half, half a reveal short of the shelf's centre; inset fronts sit a reveal inside
+ * the faces of the boards around them.
+ */
+export function openingBand(kind: OverlayKind, reveal: number, opening: Opening, inside: { low: number; high: number }, whole: FrontSizes): Pick<FrontSizes, 'height' | 'dy'> {
+  if (!opening.part) return { height: whole.height, dy: whole.dy };
+  const r = reveal;
+  const span = opening.to - opening.from;
+  if (kind === 'inset') {
+    return {
+      height: explain(inside.high - inside.low - 2 * r, `the ${mm(inside.high - inside.low)} between the boards above and below the section less a ${mm(r)} reveal at each`),
+      dy: explain(inside.low + r, `the board below the section's face at ${mm(inside.low)} plus the ${mm(r)} reveal`),
+    };
+  }
+  return {
+    height: explain(span - r, `the ${mm(span)} section (to the dividing shelf's centre) less half a ${mm(r)} reveal above and below`),
+    dy: explain(opening.from + r / 2, `half the ${mm(r)} reveal above the section's lower end at ${mm(opening.from)}`),
   };
 }

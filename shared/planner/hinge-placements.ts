@@ -15,7 +15,10 @@ export function cupPlacements(choice: HingeChoice, hinges: readonly HingeHeight[
   }));
 }
 
-/** The mounting plates that meet those cups, on the panel the front hangs on, on the row at `x`. */
-export function platePlacements(choice: HingeChoice, hinges: readonly HingeHeight[], x: number): Placement[] {
-  return hinges.map((h, i) => ({ id: `plate-${i + 1}`, fitting: choice.plate.id, x, y: h.plate, face: 'A', rotation: 0 }));
+/**
+ * The mounting plates that meet those cups, on the panel the front hangs on, on the row at `x`; in a
+ * divided carcass their ids carry the section's name, as one side carries the plates of several sections.
+ */
+export function platePlacements(choice: HingeChoice, hinges: readonly HingeHeight[], x: number, section = ''): Placement[] {
+  return hinges.map((h, i) => ({ id: `${section ? `${section}-` : ''}plate-${i + 1}`, fitting: choice.plate.id, x, y: h.plate, face: 'A', rotation: 0 }));
 }

@@ -4,11 +4,12 @@ import { formatIssues } from '../model/validation-messages';
 import { planBox, type CarcassBox } from './carcass-box';
 import { carcassPlanInput, type CarcassPlanInput } from './carcass-plan-input';
 import { connectorColumns, constructionWhy, jointPlacements } from './construction';
-import { planDoors, type DoorPlan, type FrontsStep } from './doors-plan';
-import { planDrawers, type DrawerPlan } from './drawers-plan';
+import type { DoorPlan } from './doors-plan';
+import type { DrawerPlan } from './drawers-plan';
 import { explain, type Explained } from './explained';
-import { planFlap, type FlapPlan } from './flap-plan';
-import { carcassPanel, noPlacements, type PartPlacements, type PlanContext } from './plan-parts';
+import type { FlapPlan } from './flap-plan';
+import { carcassPanel, noPlacements, wholeOpening, type PartPlacements, type PlanContext } from './plan-parts';
+import { planOpening, planSections, type SectionPlan } from './sections-plan';
 import { planShelves, type PinRows, type ShelfPlan } from './shelves-plan';
 
 /** A planned carcass: its record and panels for the job document, and every number with its reason. */
@@ -21,29 +22,16 @@ export interface CarcassPlan {
   doors: DoorPlan[];
   flap?: FlapPlan;
   drawers: DrawerPlan[];
+  /** The dividing shelves of a carcass in sections first, then the shelves asked for. */
   shelves: ShelfPlan[];
   pins?: PinRows;
+  /** A carcass divided by fixed shelves: each section's span and front; empty for one front over the whole. */
+  sections: SectionPlan[];
   /** What the designer should know: hinges outside the usual range, shelves that sag. */
   notes: string[];
 }
 
 export type PlanResult = { ok: true; plan: CarcassPlan } | { ok: false; errors: string[] };
-
-type AnyFronts = FrontsStep<DoorPlan> | FrontsStep<FlapPlan> | FrontsStep<DrawerPlan>;
-
-function planFronts(ctx: PlanContext): AnyFronts | { errors: string[] } {
-  const { fronts } = ctx.input;
-  switch (fronts.type) {
-    case 'none':
-      return { panels: [], parts: noPlacements(), plans: [], notes: [] };
-    case 'doors':
-      return planDoors(ctx, fronts);
-    case 'flap':
-      return planFlap(ctx, fronts);
-    case 'drawers':
-      return planDrawers(ctx, fronts);
-  }
-}
 
 function merge(...steps: PartPlacements[]): PartPlacements {
   return {
@@ -71,8 +59,8 @@ export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
   const boxed = planBox(input);
   if ('errors' in boxed) return { ok: false, errors: boxed.errors };
   const { box } = boxed;
-  const ctx: PlanContext = { input, box, catalog, materials: new Map(input.materials.map((m) => [m.id, m])) };
-  const fronts = planFronts(ctx);
+  const ctx: PlanContext = { input, box, catalog, materials: new Map(input.materials.map((m) => [m.id, m])), opening: wholeOpening(input.height) };
+  const fronts = input.fronts.type === 'sections' ? planSections(ctx, input.fronts) : planOpening(ctx, input.fronts);
   if ('errors' in fronts) return { ok: false, errors: fronts.errors };
   const T = box.thickness;
   const columns = connectorColumns(box.grid);
@@ -102,7 +90,6 @@ export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
   panels.push(...shelved.panels, ...fronts.panels);
   const notes = [...fronts.notes, ...shelved.plans.filter((s) => !s.ok).map((s) => `Shelf ${s.panel} sags more than the limit; keep its span under ${Math.floor(s.maxSpan.value)} mm or stiffen it.`)];
   if (!box.balance.balanced) notes.unshift(`The sides are not balanced: ${box.balance.why}.`);
-  const frontsType = input.fronts.type;
   return {
     ok: true,
     plan: {
@@ -120,11 +107,12 @@ export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
       panels,
       box,
       construction: explain(input.construction, constructionWhy(input.construction)),
-      doors: frontsType === 'doors' ? (fronts.plans as DoorPlan[]) : [],
-      flap: frontsType === 'flap' ? (fronts.plans as FlapPlan[])[0] : undefined,
-      drawers: frontsType === 'drawers' ? (fronts.plans as DrawerPlan[]) : [],
-      shelves: shelved.plans,
+      doors: fronts.doors,
+      flap: fronts.flap,
+      drawers: fronts.drawers,
+      shelves: [...fronts.dividers, ...shelved.plans],
       pins: 'pins' in shelved ? shelved.pins : undefined,
+      sections: fronts.sections,
       notes,
     },
   };

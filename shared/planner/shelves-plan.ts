@@ -44,6 +44,23 @@ function sagOf(ctx: PlanContext, span: number, depth: number): Pick<ShelfPlan, '
   };
 }
 
+/**
+ * A fixed shelf joined between the sides like top and bottom, centred at side height `y`: its panel with
+ * the joint's bores in its ends, the bores it puts in each side, and its sag.
+ */
+export function fixedShelf(ctx: PlanContext, y: number, part: string, label: string, why: string): { panel: Panel; side: Placement[]; plan: ShelfPlan } {
+  const { input, box } = ctx;
+  const span = box.innerWidth.value;
+  const depth = box.shelfDepth.value;
+  const joint = jointPlacements(input.construction, connectorColumns(box.grid), y, span, part);
+  const panel = carcassPanel(ctx, part, label, 'shelf', { width: depth, height: span }, { placements: joint.part });
+  return {
+    panel,
+    side: joint.side,
+    plan: { panel: panel.id, kind: 'fixed', y: explain(y, why), span: box.innerWidth, depth: box.shelfDepth, ...sagOf(ctx, span, depth) },
+  };
+}
+
 /** The side heights a shelf may take, nearest first to evenly spaced targets, one per shelf. */
 function spread(count: number, heights: number[], low: number, high: number): number[] {
   return Array.from({ length: count }, (_, i) => {
@@ -81,22 +98,23 @@ export function planShelves(
   const plans: ShelfPlan[] = [];
   const ys = spread(shelves.count, heights, T, input.height - T);
   ys.forEach((y, i) => {
-    const fixed = shelves.type === 'fixed';
-    const span = fixed ? box.innerWidth.value : box.innerWidth.value - 2 * shelves.play;
-    const depth = box.shelfDepth.value;
-    const panel = carcassPanel(ctx, `shelf-${i + 1}`, `${fixed ? 'fixed' : 'adjustable'} shelf ${i + 1}`, 'shelf', { width: depth, height: span });
-    if (fixed) {
-      const joint = jointPlacements(input.construction, columns, y, span, `shelf-${i + 1}`);
-      parts.left.push(...joint.side);
-      parts.right.push(...joint.side);
-      panel.placements = joint.part;
+    if (shelves.type === 'fixed') {
+      const shelf = fixedShelf(ctx, y, `shelf-${i + 1}`, `fixed shelf ${i + 1}`, 'the free system hole nearest an even spacing; the joint is centred on it');
+      parts.left.push(...shelf.side);
+      parts.right.push(...shelf.side);
+      panels.push(shelf.panel);
+      plans.push(shelf.plan);
+      return;
     }
+    const span = box.innerWidth.value - 2 * shelves.play;
+    const depth = box.shelfDepth.value;
+    const panel = carcassPanel(ctx, `shelf-${i + 1}`, `adjustable shelf ${i + 1}`, 'shelf', { width: depth, height: span });
     panels.push(panel);
     plans.push({
       panel: panel.id,
       kind: shelves.type,
-      y: explain(y, fixed ? 'the free system hole nearest an even spacing; the joint is centred on it' : 'the pin height nearest an even spacing; it can be moved to any drilled height'),
-      span: explain(span, fixed ? box.innerWidth.why : `${box.innerWidth.why}, less ${mm(shelves.play)} play at each end`),
+      y: explain(y, 'the pin height nearest an even spacing; it can be moved to any drilled height'),
+      span: explain(span, `${box.innerWidth.why}, less ${mm(shelves.play)} play at each end`),
       depth: box.shelfDepth,
       ...sagOf(ctx, span, depth),
     });

@@ -32,6 +32,7 @@ export const routes: Routes = [
       { path: 'catalog', loadChildren: () => import('./catalog/catalog.routes') },
       { path: 'bench', loadChildren: () => import('./bench/bench.routes') },
       { path: 'team', loadChildren: () => import('./team/team.routes') },
+      { path: 'how-it-works', loadChildren: () => import('./help/help.routes') },
       { path: 'jobs/:jobId/plan', loadChildren: () => import('./planner/planner.routes') },
       { path: 'jobs/:jobId/swap', loadChildren: () => import('./swap/swap.routes') },
     ],

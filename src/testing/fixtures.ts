@@ -60,7 +60,7 @@ export function aJobDetail(panels: PanelRecord[] = [aPanel(), aPanel({ dbId: 102
 /** Signs the given role in through the API's `me` answer, as the app does at start. */
 export async function signInAs(role: Role): Promise<void> {
   const restoring = TestBed.inject(AuthStore).restoreSession();
-  TestBed.inject(HttpTestingController).expectOne('/api/auth/me').flush({ user: aUser(role) });
+  TestBed.inject(HttpTestingController).expectOne('/api/auth/session').flush({ user: aUser(role) });
   await restoring;
 }
 

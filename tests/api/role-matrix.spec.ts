@@ -37,6 +37,7 @@ const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { jobId, p
 const ROUTES: Record<string, Row> = {
   'GET /api/health': { request: (c) => c.get('/api/health'), expect: [200, 200, 200, 200, 200] },
   'GET /api/auth/me': { request: (c) => c.get('/api/auth/me'), expect: [401, 200, 200, 200, 200] },
+  'GET /api/auth/session': { request: (c) => c.get('/api/auth/session'), expect: [200, 200, 200, 200, 200] },
   'POST /api/auth/sign-in': {
     request: (c, _f, actor) => c.post('/api/auth/sign-in').send({ email: emailOf(actor), password: DEMO_PASSWORD }),
     expect: [200, 200, 200, 200, 200],

@@ -67,12 +67,23 @@ describe('the panel editor in the browser', () => {
     await expect.poll(() => clashes.count()).toBe(0);
     const from = await screenPoint(page, size, { x: Number(x), y: Number(y) + 96 });
     const to = await screenPoint(page, size, { x: Number(x), y: Number(y) });
+    // The stage keeps its box and its zoom under the pointer for the whole drag, while the clash (an
+    // error) appears and autosave says it waits: nothing that comes up may push or rescale the canvas.
+    const stageState = async () => ({ box: await page.locator('bw-panel-stage').boundingBox(), zoom: await page.locator('.zoom').innerText() });
+    const stageBefore = await stageState();
     await page.mouse.move(from.x, from.y);
     await page.mouse.down();
-    for (let k = 1; k <= 10; k++) await page.mouse.move(from.x, from.y + ((to.y - from.y) * k) / 10);
-    await page.mouse.up();
-
+    for (let k = 1; k <= 10; k++) {
+      await page.mouse.move(from.x, from.y + ((to.y - from.y) * k) / 10);
+      expect(await stageState(), `step ${k} of the drag`).toEqual(stageBefore);
+    }
     await expect.poll(() => clashes.count()).toBeGreaterThan(0);
+    await expect.poll(() => page.locator('.held').count()).toBe(1);
+    expect(await stageState()).toEqual(stageBefore);
+    await page.mouse.up();
+    expect(await stageState()).toEqual(stageBefore);
+    // The plate landed where the pointer let go: on the first plate's hole, not a stage's shift away.
+    await expect.poll(async () => (await placementRows(page))[before + 1]).toContain(`y ${Number(y)},`);
     expect(await ringsOnStage(page, 'bores-overlap') + (await ringsOnStage(page, 'keepouts-overlap'))).toBeGreaterThan(0);
     await screenshot(page, 'editor-finding');
 
@@ -120,5 +131,52 @@ describe('the panel editor in the browser', () => {
     expect(await zoom()).toBeLessThanOrEqual(before * 3 + 2);
     // The window as the fingers left it (a full-page shot would resize the stage and fit the panel again).
     await page.screenshot({ path: join(screenshotDir, 'editor-pinched.png') });
+  });
+});
+
+describe('the panel editor from the keyboard alone', () => {
+  let close: (() => Promise<void>) | undefined;
+  afterEach(async () => {
+    await close?.();
+    close = undefined;
+  });
+
+  it('places a hinge cup with its cup-boring distance and the reason, moves, turns, undoes and lets go of it without a mouse', async () => {
+    const browser = await openBrowser();
+    close = browser.close;
+    const { page } = browser;
+    await signIn(page, baseUrl, 'designer@greyfield.example');
+    await page.getByRole('link', { name: 'Loft study bookcase' }).click();
+    await page.getByRole('link', { name: 'Desk hutch, section 1 left door' }).click();
+    await page.locator('bw-panel-stage canvas').first().waitFor();
+    // A door reads from its hinge edge (design.md §3), on the size line and on the stage.
+    expect(await page.locator('.title .size').innerText()).toContain('x from the hinge edge to the opening edge');
+    const before = (await placementRows(page)).length;
+
+    // Find the fitting by typing, Tab to it, Enter places it.
+    await page.getByLabel('Find a fitting').focus();
+    await page.keyboard.type('full overlay, 45');
+    await page.keyboard.press('Tab');
+    await expect.poll(() => page.evaluate(() => document.activeElement?.textContent ?? '')).toContain('Cup hinge, full overlay, 45/9.5');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => placementRows(page)).toHaveLength(before + 1);
+    // Its cup-boring distance is filled from where it landed, and the form says why it stands there.
+    const distance = page.getByLabel('Cup-boring distance (mm)');
+    await expect.poll(() => distance.inputValue()).toMatch(/^\d+(\.\d+)?$/);
+    expect(await page.locator('bw-properties-form .why').innerText()).toMatch(/cup-boring distance [\d.]+ mm plus half the Ø35 cup; this hinge takes 3 to 7 mm/);
+
+    // Into the drawing by Tab from the catalog list's last control is long; the stage is one focusable element.
+    await page.locator('bw-panel-stage').focus();
+    await page.keyboard.press('Shift+ArrowUp');
+    await page.keyboard.press('r');
+    await expect.poll(async () => (await placementRows(page)).at(-1)).toContain('90°');
+    await page.keyboard.press('Control+z');
+    await expect.poll(async () => (await placementRows(page)).at(-1)).toContain('0°');
+    await page.keyboard.press('Control+z');
+    await page.keyboard.press('Control+z');
+    await expect.poll(() => placementRows(page)).toHaveLength(before);
+    // Nothing stays selected that the undo took away.
+    expect(await page.locator('bw-properties-form').innerText()).toContain('Select a placement on the panel or in the list');
+    await screenshot(page, 'editor-keyboard');
   });
 });

@@ -36,7 +36,7 @@ describe('authGuard', () => {
     const harness = await RouterTestingHarness.create();
     const navigating = harness.navigateByUrl('/jobs/11');
     await settle();
-    http.expectOne('/api/auth/me').flush({ user: aUser('viewer') });
+    http.expectOne('/api/auth/session').flush({ user: aUser('viewer') });
     await navigating;
 
     expect(TestBed.inject(Router).url).toBe('/jobs/11');
@@ -47,9 +47,7 @@ describe('authGuard', () => {
     const harness = await RouterTestingHarness.create();
     const navigating = harness.navigateByUrl('/jobs/11');
     await settle();
-    http
-      .expectOne('/api/auth/me')
-      .flush({ error: { code: 'unauthenticated', message: 'Not signed in.' } }, { status: 401, statusText: 'Unauthorized' });
+    http.expectOne('/api/auth/session').flush({ user: null });
     await navigating;
 
     expect(TestBed.inject(Router).url).toBe('/sign-in?returnUrl=%2Fjobs%2F11');

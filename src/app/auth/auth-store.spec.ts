@@ -7,7 +7,6 @@ import { ApiProblem } from '../core/api-problem';
 import { errorInterceptor } from '../core/error-interceptor';
 import { AuthStore } from './auth-store';
 
-const notSignedIn = { error: { code: 'unauthenticated', message: 'Not signed in.' } };
 const unauthorized = { status: 401, statusText: 'Unauthorized' };
 
 describe('AuthStore', () => {
@@ -16,7 +15,7 @@ describe('AuthStore', () => {
 
   /** A sign-in first asks who is signed in, which hands out the XSRF token, then posts. */
   async function answerSignIn(answer: object, status = { status: 200, statusText: 'OK' }): Promise<void> {
-    http.expectOne('/api/auth/me').flush(notSignedIn, unauthorized);
+    http.expectOne('/api/auth/session').flush({ user: null });
     await settle();
     http.expectOne({ method: 'POST', url: '/api/auth/sign-in' }).flush(answer, status);
   }
@@ -38,7 +37,7 @@ describe('AuthStore', () => {
   it('asks the server once who is signed in', async () => {
     const first = auth.restoreSession();
     const second = auth.restoreSession();
-    http.expectOne({ method: 'GET', url: '/api/auth/me' }).flush({ user: aUser('bench') });
+    http.expectOne({ method: 'GET', url: '/api/auth/session' }).flush({ user: aUser('bench') });
 
     expect(await first).toEqual(aUser('bench'));
     expect(await second).toEqual(aUser('bench'));
@@ -48,7 +47,7 @@ describe('AuthStore', () => {
 
   it('takes a 401 from me as nobody signed in', async () => {
     const restoring = auth.restoreSession();
-    http.expectOne('/api/auth/me').flush(notSignedIn, unauthorized);
+    http.expectOne('/api/auth/session').flush({ user: null });
 
     expect(await restoring).toBeNull();
     expect(auth.user()).toBeNull();
@@ -57,14 +56,14 @@ describe('AuthStore', () => {
 
   it('refuses an answer that does not match the contract', async () => {
     const restoring = auth.restoreSession();
-    http.expectOne('/api/auth/me').flush({ user: { id: 3, email: 'x@y.example', name: 'X', role: 'owner' } });
+    http.expectOne('/api/auth/session').flush({ user: { id: 3, email: 'x@y.example', name: 'X', role: 'owner' } });
 
     expect(await restoring).toBeNull();
   });
 
   it('fetches the XSRF token, signs in and grants what the role allows', async () => {
     const signingIn = auth.signIn('designer@greyfield.example', 'greyfield-demo');
-    http.expectOne('/api/auth/me').flush(notSignedIn, unauthorized);
+    http.expectOne('/api/auth/session').flush({ user: null });
     await settle();
     const request = http.expectOne({ method: 'POST', url: '/api/auth/sign-in' });
     expect(request.request.body).toEqual({ email: 'designer@greyfield.example', password: 'greyfield-demo' });
@@ -101,7 +100,7 @@ describe('AuthStore', () => {
     expect(auth.signedIn()).toBe(false);
 
     const restoring = auth.restoreSession();
-    http.expectOne('/api/auth/me').flush(notSignedIn, unauthorized);
+    http.expectOne('/api/auth/session').flush({ user: null });
     expect(await restoring).toBeNull();
   });
 });

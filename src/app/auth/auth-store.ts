@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { can, Permission, User, userAnswer } from '../../../shared/api/contract';
+import { can, Permission, User, sessionAnswer, userAnswer } from '../../../shared/api/contract';
 import { ApiProblem } from '../core/api-problem';
 
 /** Who is signed in, and what their role lets them do (contract.ts `permissions`). */
@@ -26,8 +26,8 @@ export class AuthStore {
    * change needs, so the app makes it at start.
    */
   restoreSession(): Promise<User | null> {
-    this.restoring ??= firstValueFrom(this.http.get('/api/auth/me'))
-      .then((raw) => userAnswer.parse(raw).user)
+    this.restoring ??= firstValueFrom(this.http.get('/api/auth/session'))
+      .then((raw) => sessionAnswer.parse(raw).user)
       .then(
         (who) => this.remember(who),
         () => this.remember(null),

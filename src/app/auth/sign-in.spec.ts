@@ -35,8 +35,7 @@ describe('SignIn', () => {
     type('password', 'greyfield-demo');
     page.querySelector<HTMLButtonElement>('button[type="submit"]')!.click();
     if (firstTry) {
-      const notSignedIn = { error: { code: 'unauthenticated', message: 'Not signed in.' } };
-      http.expectOne('/api/auth/me').flush(notSignedIn, { status: 401, statusText: 'Unauthorized' });
+      http.expectOne('/api/auth/session').flush({ user: null });
     }
     await settle();
     http.expectOne('/api/auth/sign-in').flush(answer, { status, statusText: 'Answer' });

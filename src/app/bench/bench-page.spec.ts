@@ -56,6 +56,8 @@ describe('BenchPage', () => {
     await openAs('bench', '/bench?job=11&carcass=b1');
 
     expect(page.querySelector('[role="note"]')!.textContent).toContain('check the 100 mm bar on every page before drilling');
+    // The bench assembles the chosen job's units too: their cautions beside drilling's (design.md §8).
+    expect([...page.querySelectorAll('[data-caution]')].map((c) => c.getAttribute('data-caution'))).toEqual(['drilling', 'tall-unit']);
     expect(cardNames()).toEqual(['Left side']);
     expect(page.textContent).toContain('1 error');
     expect(page.textContent).toContain('Face A up (inside face)');

@@ -6,9 +6,12 @@ import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { Title } from '@angular/platform-browser';
-import { CAUTION_DEFERRAL, CAUTIONS } from '../../../shared/export/cautions';
+import type { CautionId } from '../../../shared/export/cautions';
 import { AuthStore } from '../auth/auth-store';
 import { statusLabels } from '../jobs/panel-labels';
+import { CatalogStore } from '../catalog/catalog-store';
+import { CautionList } from '../ui/caution-list';
+import { cautionsOfUnits } from '../ui/job-cautions';
 import { PanelProgress } from '../ui/panel-progress';
 import { BenchPanelCard } from './bench-panel-card';
 import { BenchStore } from './bench-store';
@@ -21,6 +24,7 @@ import { BenchStore } from './bench-store';
   selector: 'bw-bench-page',
   imports: [
     BenchPanelCard,
+    CautionList,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
@@ -38,8 +42,12 @@ export class BenchPage {
   private readonly title = inject(Title);
   protected readonly store = inject(BenchStore);
 
-  /** Drilling from printed templates (design.md §8), with what every caution defers to. */
-  protected readonly caution = `${CAUTIONS.drilling} ${CAUTION_DEFERRAL}`;
+  private readonly catalog = inject(CatalogStore).catalog;
+  /** Drilling from printed templates always (design.md §8), and the cautions of the chosen job's units: the bench assembles them too. */
+  protected readonly cautions = computed((): CautionId[] => {
+    const job = this.store.document();
+    return ['drilling', ...(job ? cautionsOfUnits(job, this.catalog()) : [])];
+  });
   protected readonly statusLabels = statusLabels;
   protected readonly canMark = computed(() => this.auth.can('markPanels'));
   protected readonly carcassNames = computed(() => new Map(this.store.carcasses().map((c) => [c.id, c.name])));

@@ -10,6 +10,7 @@ import { carcassOrder } from '../../../shared/model/panel-order';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { JobsApi, jobsUrl, jobUrl } from '../jobs/jobs-api';
 import { jobFindingsUrl } from '../packs/pack-api';
+import { jobDocumentOf } from '../ui/job-cautions';
 
 /** A mark made on this page, kept so that it can be undone. */
 export interface BenchMark {
@@ -88,6 +89,11 @@ export class BenchStore {
     return error === undefined ? null : describeError(error);
   });
   readonly carcasses = computed(() => this.loaded()?.carcasses ?? []);
+  /** The job as the shared rules read it (cautions). */
+  readonly document = computed(() => {
+    const detail = this.loaded();
+    return detail && jobDocumentOf(detail);
+  });
   /** The job's materials that its panels use. */
   readonly materials = computed(() => {
     const used = new Set(this.panels().map((p) => p.material));

@@ -10,12 +10,15 @@ import { EditorStore } from './editor-store';
 
 const job = makeJob([makePanel('left', { placements: [{ id: 'plate-0-1', fitting: 'plate-0', x: 37, y: 121, face: 'A' }] })]);
 
-function setUp(editor = true) {
-  const panel = signal<Panel | undefined>(job.panels[0]);
+const door = makeJob([makePanel('door', { role: 'door', width: 400, height: 700 })]);
+
+function setUp(editor = true, { archived = false, of = job } = {}) {
+  const panel = signal<Panel | undefined>(of.panels[0]);
+  const jobDetail = signal({ job: { archived } });
   TestBed.configureTestingModule({
     providers: [
       EditorStore,
-      { provide: EditorSource, useValue: { panel, record: panel, job: signal(job) } },
+      { provide: EditorSource, useValue: { panel, record: panel, job: signal(of), jobDetail } },
       { provide: AuthStore, useValue: { can: () => editor } },
     ],
   });
@@ -77,5 +80,33 @@ describe('EditorStore', () => {
     store.select(selectionOf(['plate-0-1']));
     store.deleteSelection();
     expect(store.panel()).toBe(job.panels[0]);
+  });
+
+  it('changes nothing on an archived job, even for a designer', () => {
+    const store = setUp(true, { archived: true });
+    expect(store.editable()).toBe(false);
+    store.placeFitting('shelf-pin-5', { x: 40, y: 300 });
+    expect(store.panel()).toBe(job.panels[0]);
+  });
+
+  it('fills a dropped hinge cup\'s cup-boring distance from where it lands, and keeps B in the hinge\'s range', () => {
+    // trade-reference §2: cup centre = B + 17.5 mm for a Ø35 cup (common practice); this hinge takes B 3 to 7 mm.
+    const store = setUp(true, { of: door });
+    store.placeFitting('hinge-full-overlay-45', { x: 21.2, y: 100 });
+    expect(store.panel()?.placements[0]).toMatchObject({ x: 21, params: { boringDistance: 3.5 } });
+    store.placeFitting('hinge-full-overlay-45', { x: 60, y: 600 });
+    expect(store.panel()?.placements[1]).toMatchObject({ x: 24.5, params: { boringDistance: 7 } });
+    store.setPlacement(store.panel()!.placements[1].id, { params: { boringDistance: 4.5 } });
+    expect(store.panel()?.placements[1]).toMatchObject({ x: 22, params: { boringDistance: 4.5 } });
+  });
+
+  it('lets go of what an undo takes off the panel', () => {
+    const store = setUp();
+    store.placeFitting('shelf-pin-5', { x: 40, y: 300 });
+    expect(store.selection().placements.size).toBe(1);
+    store.undo();
+    expect(store.hasSelection()).toBe(false);
+    store.redo();
+    expect(store.hasSelection()).toBe(false);
   });
 });

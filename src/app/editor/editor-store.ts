@@ -14,6 +14,7 @@ import { rotateItems } from './document/commands/rotate-items';
 import { setProperties, type PlacementChanges } from './document/commands/set-properties';
 import * as history from './document/history';
 import { isEmptySelection, NO_SELECTION, selectionOf, type Selection } from './document/selection';
+import { cupXForBoringDistance, hingeCupX, syncBoringDistances } from './document/hinge-distance';
 import { panelGrid, snapPlacement } from './document/snap-placement';
 import { AuthStore } from '../auth/auth-store';
 import { CatalogStore } from '../catalog/catalog-store';
@@ -54,8 +55,8 @@ export class EditorStore {
   readonly checksOn = signal(checksWanted());
 
   readonly panel = computed(() => this.history()?.present);
-  /** Bench and viewer roles see the drilling but change nothing. */
-  readonly editable = computed(() => this.auth.can('editJobs'));
+  /** Bench and viewer roles see the drilling but change nothing; nor does anyone on an archived job. */
+  readonly editable = computed(() => this.auth.can('editJobs') && this.source.jobDetail()?.job.archived !== true);
   readonly canUndo = computed(() => (this.history()?.past.length ?? 0) > 0);
   readonly canRedo = computed(() => (this.history()?.future.length ?? 0) > 0);
   readonly dragging = computed(() => this.history()?.mark !== undefined);
@@ -105,17 +106,29 @@ export class EditorStore {
 
   undo(): void {
     this.history.update((h) => h && history.undo(h));
+    this.keepSelectionOnPanel();
   }
 
   redo(): void {
     this.history.update((h) => h && history.redo(h));
+    this.keepSelectionOnPanel();
+  }
+
+  /** What undo or redo took off the panel leaves the selection too. */
+  private keepSelectionOnPanel(): void {
+    const panel = this.panel();
+    if (!panel) return;
+    const { placements, bores } = this.selection();
+    this.select(selectionOf(panel.placements.filter((p) => placements.has(p.id)).map((p) => p.id), panel.bores.filter((b) => bores.has(b.id)).map((b) => b.id)));
   }
 
   /** Puts a fitting where the pointer or the user says, snapped as the fitting wants; selects it. */
   placeFitting(fittingId: string, at: Point, free = false): void {
     const grid = this.grid();
     if (!grid) return;
-    const spot = snapPlacement(at, { rotation: 0, face: this.face() }, this.catalog().get(fittingId), { grid, step: this.step(), free });
+    const fitting = this.catalog().get(fittingId);
+    const snapped = snapPlacement(at, { rotation: 0, face: this.face() }, fitting, { grid, step: this.step(), free });
+    const spot = free ? snapped : { ...snapped, x: hingeCupX(snapped.x, { rotation: 0 }, fitting).x };
     const before = new Set(this.panel()?.placements.map((p) => p.id));
     this.apply(addPlacement, { fitting: fittingId, x: spot.x, y: spot.y, face: this.face() });
     const added = this.panel()?.placements.find((p) => !before.has(p.id));
@@ -160,8 +173,12 @@ export class EditorStore {
     this.select(selectionOf(moved, bores));
   }
 
+  /** A typed cup-boring distance moves its cup across the door: x and B are one number seen two ways. */
   setPlacement(id: string, changes: PlacementChanges): void {
-    this.apply(setProperties, { id, changes });
+    const placement = this.panel()?.placements.find((p) => p.id === id);
+    const b = changes.params?.['boringDistance'];
+    const x = placement && b !== undefined && b !== placement.params?.['boringDistance'] ? cupXForBoringDistance(b, placement, this.catalog().get(placement.fitting)) : undefined;
+    this.apply(setProperties, { id, changes: x === undefined ? changes : { ...changes, x } });
   }
 
   copySelection(): void {
@@ -203,9 +220,11 @@ export class EditorStore {
     const lead = h.mark.placements.find((p) => p.id === leadId);
     const start = lead ?? { x: 0, y: 0, rotation: 0 as const, face: this.face() };
     const wanted = { x: start.x + travel.x, y: start.y + travel.y };
-    const spot = snapPlacement(wanted, start, lead && this.catalog().get(lead.fitting), { grid, step: this.step(), free: free || !lead });
+    const fitting = lead && this.catalog().get(lead.fitting);
+    const snapped = snapPlacement(wanted, start, fitting, { grid, step: this.step(), free: free || !lead });
+    const spot = free || !lead ? snapped : { ...snapped, x: hingeCupX(snapped.x, lead, fitting).x };
     const next = moveItems(h.mark, { selection: this.selection(), dx: spot.x - start.x, dy: spot.y - start.y });
-    this.history.set(history.preview(h, next));
+    this.history.set(history.preview(h, syncBoringDistances(next, this.catalog())));
   }
 
   endDrag(): void {
@@ -220,6 +239,6 @@ export class EditorStore {
   /** Replaces the drilling from outside the commands (applying another panel's); one undoable step. */
   private apply<P>(command: Command<P>, params: P): void {
     if (!this.editable()) return;
-    this.history.update((h) => h && history.record(h, command(h.present, params)));
+    this.history.update((h) => h && history.record(h, syncBoringDistances(command(h.present, params), this.catalog())));
   }
 }

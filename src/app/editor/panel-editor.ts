@@ -9,8 +9,13 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { Title } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { filter, fromEvent } from 'rxjs';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
 import { CatalogStore } from '../catalog/catalog-store';
+import { CautionList } from '../ui/caution-list';
+import { cautionsOfUnits } from '../ui/job-cautions';
+import { panelFrame } from './panel-frame';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { itemsArea } from './document/items-area';
 import { NO_SELECTION, selectionOf } from './document/selection';
@@ -35,6 +40,7 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
   selector: 'bw-panel-editor',
   imports: [
     CatalogList,
+    CautionList,
     FindingsList,
     MatButtonModule,
     MatButtonToggleModule,
@@ -69,18 +75,33 @@ export class PanelEditor implements LeavesSafely {
     const at = this.stage()?.cursor();
     return at ? `x ${at.x.toFixed(1)}  y ${at.y.toFixed(1)} mm` : '';
   });
+  protected readonly frame = computed(() => panelFrame(this.store.panel()?.role ?? 'loose'));
+  /** The cautions of this panel's unit (a flap's, its sides'), for every role. */
+  protected readonly cautions = computed(() => {
+    const job = this.store.job();
+    const panel = this.store.panel();
+    return job && panel ? cautionsOfUnits(job, this.store.catalog(), panel) : [];
+  });
   protected readonly zoomPercent = computed(() => {
     const view = this.stage()?.view();
     return view ? `${Math.round(view.scale * 100)} %` : '';
   });
 
   constructor() {
-    // The shop's own fittings, so that a panel placing one draws and checks as its pack will.
-    inject(CatalogStore).load();
+    // The shop's own fittings as they are now, so that a panel placing one draws and checks as its pack
+    // will; read again whenever the tab comes back into view, as a fitting may have been imported meanwhile.
+    const catalog = inject(CatalogStore);
+    catalog.reload();
+    fromEvent(document, 'visibilitychange')
+      .pipe(
+        filter(() => document.visibilityState === 'visible'),
+        takeUntilDestroyed(),
+      )
+      .subscribe(() => catalog.reload());
     const title = inject(Title);
     effect(() => {
       const panel = this.store.panel();
-      if (panel) title.setTitle(`${panel.name} · Panel editor · Borewright`);
+      if (panel) title.setTitle(`${panel.name} · ${this.store.editable() ? 'Panel editor' : 'Panel'} · Borewright`);
     });
     this.showFocusOnOpen();
   }

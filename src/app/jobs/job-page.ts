@@ -1,5 +1,5 @@
 import { DatePipe } from '@angular/common';
-import { Component, effect, inject } from '@angular/core';
+import { Component, computed, effect, inject } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -10,11 +10,15 @@ import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { PanelRecord } from '../../../shared/api/contract';
 import { labelsPath } from '../../../shared/api/label-contract';
-import { Can } from '../auth/can';
+import { AuthStore } from '../auth/auth-store';
+import { CatalogStore } from '../catalog/catalog-store';
 import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
+import { CautionList } from '../ui/caution-list';
+import { cautionsOfUnits } from '../ui/job-cautions';
 import { PanelProgress } from '../ui/panel-progress';
+import { mountingWords, replannableOnScreen } from './carcass-card';
 import { CutListImport } from './cut-list-import';
 import { JobAttachments } from './job-attachments';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
@@ -30,7 +34,7 @@ const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 /** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [BenchPack, Can, CutListImport, DatePipe, JobAttachments, JobFindings, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
+  imports: [BenchPack, CautionList, CutListImport, DatePipe, JobAttachments, JobFindings, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
   providers: [JobStore, JobFindingsStore],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',
@@ -39,7 +43,19 @@ export class JobPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly title = inject(Title);
+  private readonly auth = inject(AuthStore);
+  private readonly catalog = inject(CatalogStore).catalog;
   protected readonly store = inject(JobStore);
+
+  /** Editing for roles that may, while the job is not archived. */
+  protected readonly canEdit = computed(() => this.auth.can('editJobs') && this.store.job()?.archived === false);
+  /** The cautions of the job's units, for every role: the installer hangs what the designer drew. */
+  protected readonly cautions = computed(() => {
+    const job = this.store.document();
+    return job ? cautionsOfUnits(job, this.catalog()) : [];
+  });
+  protected readonly mounting = mountingWords;
+  protected readonly replannable = replannableOnScreen;
 
   protected readonly documentUrl = jobDocumentUrl;
   protected readonly labelsUrl = (jobId: number) => labelsPath(jobId);
@@ -49,6 +65,11 @@ export class JobPage {
       const job = this.store.job();
       if (job) this.title.setTitle(`${job.name} · Borewright`);
     });
+  }
+
+  protected labelsAsked(): void {
+    const count = this.store.panels().length;
+    this.snackBar.open(`Labels for ${count} ${count === 1 ? 'panel' : 'panels'}, 14 to an A4 sheet: the PDF is on its way to your downloads.`, undefined, { duration: 5000 });
   }
 
   protected editDetails(): void {

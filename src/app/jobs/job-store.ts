@@ -6,6 +6,7 @@ import { map } from 'rxjs';
 import { jobDetail, PanelRecord } from '../../../shared/api/contract';
 import { PanelStatus } from '../../../shared/model/job-document';
 import { describeError } from '../core/api-problem';
+import { jobDocumentOf } from '../ui/job-cautions';
 import { JobChanges, JobsApi, jobUrl, PanelFields } from './jobs-api';
 
 /** One job as its page shows it, following the `:jobId` of the route, and the changes made to its panels. */
@@ -28,6 +29,11 @@ export class JobStore {
   readonly materials = computed(() => this.loaded()?.materials ?? []);
   readonly carcasses = computed(() => this.loaded()?.carcasses ?? []);
   readonly panels = computed(() => this.loaded()?.panels ?? []);
+  /** The job as the shared rules read it (cautions). */
+  readonly document = computed(() => {
+    const detail = this.loaded();
+    return detail && jobDocumentOf(detail);
+  });
   readonly loading = this.detail.isLoading;
   readonly loadError = computed(() => {
     if (this.jobId() !== undefined && this.detail.status() === 'idle') return 'There is no job at this address.';

@@ -4,7 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
-import { MatSelectModule } from '@angular/material/select';
+import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
@@ -63,6 +63,8 @@ export class PanelTable {
   readonly panels = input.required<readonly PanelRecord[]>();
   readonly carcasses = input.required<readonly Carcass[]>();
   readonly materials = input.required<readonly Material[]>();
+  /** An archived job: its panels are shown, not changed. */
+  readonly readOnly = input(false);
   readonly editPanel = output<PanelRecord>();
   readonly deletePanel = output<PanelRecord>();
   readonly changeStatus = output<PanelStatusChange>();
@@ -70,8 +72,8 @@ export class PanelTable {
 
   protected readonly filter = signal('');
   protected readonly statuses = panelStatus.options.map((status) => ({ status, label: statusLabels[status] }));
-  protected readonly canEdit = computed(() => this.auth.can('editJobs'));
-  protected readonly canMark = computed(() => this.auth.can('markPanels'));
+  protected readonly canEdit = computed(() => this.auth.can('editJobs') && !this.readOnly());
+  protected readonly canMark = computed(() => this.auth.can('markPanels') && !this.readOnly());
   protected readonly columns = computed(() => (this.canEdit() ? [...readColumns, 'actions'] : readColumns));
   protected readonly rows = new MatTableDataSource<PanelRow>([]);
   private readonly panelRows = computed(() => {
@@ -99,6 +101,15 @@ export class PanelTable {
     effect(() => (this.rows.data = this.panelRows()));
     effect(() => (this.rows.sort = this.sort() ?? null));
     effect(() => (this.rows.filter = this.filter().trim().toLowerCase()));
+  }
+
+  /**
+   * Asks for a status and shows the panel's own until the server has taken the new one: the saved record
+   * then brings it, and a refused change leaves the choice the panel really has.
+   */
+  protected askStatus(panel: PanelRecord, select: MatSelect, status: PanelStatus): void {
+    select.value = panel.status;
+    this.changeStatus.emit({ panel, status });
   }
 
   /** The statuses a panel may go to from its own (shared/model/panel-status.ts); its own stays listed. */

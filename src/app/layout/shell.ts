@@ -21,6 +21,8 @@ export class Shell {
   private readonly router = inject(Router);
   protected readonly auth = inject(AuthStore);
 
+  /** The phone's list of links, open or folded. */
+  protected readonly menuOpen = signal(false);
   protected readonly signingOut = signal(false);
   protected readonly signOutFailure = signal<string | null>(null);
 

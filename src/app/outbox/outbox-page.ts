@@ -5,6 +5,7 @@ import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { outboxAttachmentUrl, OutboxStore } from './outbox-store';
+import { textParts } from './text-links';
 
 /** What the local mail catcher received (design.md §5): for admins, to see what left and to fetch attachments. */
 @Component({
@@ -17,4 +18,5 @@ import { outboxAttachmentUrl, OutboxStore } from './outbox-store';
 export class OutboxPage {
   protected readonly store = inject(OutboxStore);
   protected readonly attachmentUrl = outboxAttachmentUrl;
+  protected readonly parts = textParts;
 }

@@ -78,7 +78,8 @@ export function fromPlanInput(input: CarcassPlanInput): Partial<PlannerFormValue
     construction: input.construction,
     back: back.type,
     ...(back.type === 'grooved' ? { backMaterial: back.material, setIn: back.setIn, grooveDepth: back.grooveDepth } : {}),
-    fronts: fronts.type,
+    // The form holds one kind of front: a carcass in sections is planned again from its description file.
+    ...(fronts.type !== 'sections' ? { fronts: fronts.type } : {}),
     ...(fronts.type === 'doors' ? { doorCount: fronts.count === 1 ? '1' : '2', overlay: fronts.overlay, hingeSide: fronts.hingeSide, reveal: fronts.reveal, handleMass: fronts.handleMass } : {}),
     ...(fronts.type === 'flap' ? { mechanisms: fronts.mechanisms === 1 ? '1' : '2', reveal: fronts.reveal, handleMass: fronts.handleMass } : {}),
     ...(fronts.type === 'drawers' ? { drawerCount: fronts.count, reveal: fronts.reveal } : {}),

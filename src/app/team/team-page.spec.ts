@@ -102,24 +102,39 @@ describe('TeamPage', () => {
     expect(page.textContent).toContain('No open invitations.');
   });
 
-  it('changes a role, and puts the choice back when the server refuses it', async () => {
+  it('asks before changing a role, saying what it lets the member do, says when it is done, and puts the choice back when the server refuses it', async () => {
     const choose = async (member: string, option: string) => {
       row(member).querySelector<HTMLElement>('.mat-mdc-select-trigger')!.click();
       await fixture.whenStable();
       [...document.querySelectorAll<HTMLElement>('mat-option')].find((o) => o.textContent?.trim() === option)!.click();
       await fixture.whenStable();
     };
+    const confirm = async (label: string) => {
+      buttonNamed(label)!.click();
+      await settle();
+    };
     const shown = (member: string) => row(member).querySelector('.mat-mdc-select-value')?.textContent?.trim();
 
+    await choose('Ada Keel', 'Viewer');
+    expect(dialogText()).toContain('Make Ada Keel a viewer?');
+    expect(dialogText()).toContain('read jobs, drawings and cautions');
+    await confirm('Cancel');
+    await fixture.whenStable();
+    http.expectNone('/api/team/members/5');
+    expect(shown('Ada Keel')).toBe('Bench');
+
     await choose('Ada Keel', 'Designer');
+    await confirm('Make designer');
     const request = http.expectOne({ method: 'PATCH', url: '/api/team/members/5' });
     expect(request.request.body).toEqual({ role: 'designer' });
     request.flush({ ...team.members[0], role: 'designer' });
     await settle();
     await fixture.whenStable();
     expect(shown('Ada Keel')).toBe('Designer');
+    expect(document.querySelector('mat-snack-bar-container')?.textContent).toContain('Ada Keel is now a designer.');
 
     await choose('Ada Keel', 'Viewer');
+    await confirm('Make viewer');
     http.expectOne('/api/team/members/5').flush(
       { error: { code: 'conflict', message: 'Someone made a conflicting change at the same moment. Reload and try again.' } },
       { status: 409, statusText: 'Conflict' },

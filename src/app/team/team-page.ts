@@ -6,6 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSlideToggle, MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTableModule } from '@angular/material/table';
 import { Router } from '@angular/router';
 import { Role, role } from '../../../shared/api/contract';
@@ -15,6 +16,14 @@ import { describeError } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { InviteForm } from './invite-form';
 import { TeamStore } from './team-store';
+
+/** What each role lets its member do (design.md §1), said before a role changes. */
+const ROLE_MAY: Record<Role, string> = {
+  admin: 'everything, plus the team, roles, shop settings and catalog imports',
+  designer: 'create and edit jobs, carcasses, panels and placements, run checks, export and send packs',
+  bench: 'read jobs, download and print packs and templates, mark panels drilled or checked',
+  viewer: 'read jobs, drawings and cautions, and nothing else',
+};
 
 /** The admin's team page: members with their roles and whether they may sign in, and invitations. */
 @Component({
@@ -38,6 +47,7 @@ export class TeamPage {
   private readonly dialog = inject(MatDialog);
   private readonly router = inject(Router);
   private readonly auth = inject(AuthStore);
+  private readonly snackBar = inject(MatSnackBar);
   protected readonly store = inject(TeamStore);
 
   protected readonly roles = role.options;
@@ -54,16 +64,25 @@ export class TeamPage {
     const giveUp = () => {
       select.value = member.role;
     };
-    if (this.isSelf(member) && next !== 'admin') {
-      const confirmed = await ConfirmDialog.ask(this.dialog, {
-        title: 'Give up your admin role?',
-        message: `As ${next} you can no longer manage the team, and this page closes. Another admin can give the role back.`,
-        confirmLabel: `Make me ${next}`,
-      });
-      if (!confirmed) return giveUp();
-    }
+    const self = this.isSelf(member) && next !== 'admin';
+    const confirmed = await ConfirmDialog.ask(
+      this.dialog,
+      self
+        ? {
+            title: 'Give up your admin role?',
+            message: `As ${next} you can no longer manage the team, and this page closes. Another admin can give the role back.`,
+            confirmLabel: `Make me ${next}`,
+          }
+        : {
+            title: `Make ${member.name} ${article(next)} ${next}?`,
+            message: `As ${next}, ${member.name} may ${ROLE_MAY[next]}. It applies from their next page.`,
+            confirmLabel: `Make ${next}`,
+          },
+    );
+    if (!confirmed) return giveUp();
     const changed = await this.change(member, { role: next }, `${member.name}'s role was not changed.`);
     if (!changed) return giveUp();
+    this.snackBar.open(`${member.name} is now ${article(next)} ${next}.`, undefined, { duration: 5000 });
     if (this.isSelf(member) && next !== 'admin') {
       // The toolbar and the permissions follow the new role from the server's own answer.
       this.auth.forgetSession();
@@ -122,4 +141,8 @@ export class TeamPage {
       this.busy.set(false);
     }
   }
+}
+
+function article(role: Role): string {
+  return role === 'admin' ? 'an' : 'a';
 }

@@ -1,5 +1,6 @@
 import type { Fitting } from '../../../../shared/catalog/fitting';
 import type { Panel } from '../../../../shared/model/job-document';
+import { panelFrame } from '../panel-frame';
 
 /** A number field of the properties form: what it is called and the values the panel or fitting allows. */
 export interface NumberField {
@@ -18,7 +19,7 @@ export interface NumberField {
  */
 export function placementFields(panel: Panel, fitting: Fitting | undefined): NumberField[] {
   const fields: NumberField[] = [
-    { key: 'x', label: 'x', min: 0, max: panel.width, param: false, hint: 'From the reference edge' },
+    { key: 'x', label: 'x', min: 0, max: panel.width, param: false, hint: `From the ${panelFrame(panel.role).reference.toLowerCase()}` },
     { key: 'y', label: 'y', min: 0, max: panel.height, param: false, hint: 'From the lower edge' },
   ];
   if (fitting?.purpose === 'hinge-cup') {

@@ -4,6 +4,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import type { Face, Rotation } from '../../../../shared/model/job-document';
+import { hingeCupWhy } from '../document/hinge-distance';
 import { EditorStore } from '../editor-store';
 import { placementFields, readNumber, type NumberField } from './placement-fields';
 
@@ -29,6 +30,18 @@ export class PropertiesForm {
   protected readonly fields = computed(() => {
     const panel = this.store.panel();
     return panel ? placementFields(panel, this.fitting()) : [];
+  });
+  /** Why a hinge cup stands where it does across the door. */
+  protected readonly why = computed(() => {
+    const p = this.placement();
+    return p && hingeCupWhy(p, this.fitting());
+  });
+  /** A selection of several things, counted in words. */
+  protected readonly selectedWords = computed(() => {
+    const { placements, bores } = this.store.selection();
+    const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+    const what = `${count(placements.size, 'placement', 'placements')} and ${count(bores.size, 'loose bore', 'loose bores')} selected.`;
+    return this.store.editable() ? `${what} Move them with the arrow keys or by dragging; choose one alone to edit its numbers.` : `${what} Choose one alone to read its numbers.`;
   });
   /** Messages of refused values, by field; cleared when another placement is selected. */
   protected readonly problems = linkedSignal<Record<string, string>>(() => (this.placement()?.id, {}));

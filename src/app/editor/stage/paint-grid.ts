@@ -7,7 +7,7 @@ import { toScreen, type View } from './view';
  * The board, its reference edge and the 32 mm system: outline, rows as lines and every system hole as
  * a small ring. Drawn in screen space, as it is redrawn only when the view or the panel's size changes.
  */
-export function paintGrid(layer: Konva.Layer, panel: { width: number; height: number }, grid: SystemGrid | undefined, view: View): void {
+export function paintGrid(layer: Konva.Layer, panel: { width: number; height: number; reference: string }, grid: SystemGrid | undefined, view: View): void {
   layer.destroyChildren();
   const at = (x: number, y: number) => toScreen(view, { x, y });
   const a = at(0, 0);
@@ -18,7 +18,7 @@ export function paintGrid(layer: Konva.Layer, panel: { width: number; height: nu
   );
   // The reference edge: a strong line and its name, so that x is never read from the wrong edge.
   layer.add(new Konva.Line({ points: [a.x, a.y, a.x, b.y], stroke: ACCENT, strokeWidth: 4 }));
-  const label = new Konva.Text({ text: 'Reference edge (x = 0)', fontSize: 11, fontFamily: LABEL_FONT, fill: ACCENT });
+  const label = new Konva.Text({ text: `${panel.reference} (x = 0)`, fontSize: 11, fontFamily: LABEL_FONT, fill: ACCENT });
   label.position({ x: a.x - label.width() / 2, y: b.y - 18 });
   layer.add(label);
   const lower = new Konva.Text({ text: 'Lower edge (y = 0)', fontSize: 11, fontFamily: LABEL_FONT, fill: MUTED });

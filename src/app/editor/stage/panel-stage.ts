@@ -1,15 +1,26 @@
-import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, viewChild } from '@angular/core';
+import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, untracked, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
 import { fromEvent, map } from 'rxjs';
 import type { Box } from '../../../../shared/layout/bore';
 import { EditorStore } from '../editor-store';
+import { panelFrame } from '../panel-frame';
 import { HitIndex, hitItems } from './hit-index';
 import { BorePainter } from './paint-bores';
 import { paintGrid } from './paint-grid';
 import { paintOverlay } from './paint-overlay';
 import { localPoint, pointerTool } from './pointer-tool';
 import { fitView, toPanel, viewOfBox, zoomAt, type Point, type View } from './view';
+
+/** What the grid is drawn from: it is redrawn when these change, not on every edit. */
+interface Board {
+  id: string;
+  width: number;
+  height: number;
+  thickness: number;
+  /** The name of the edge at x = 0. */
+  reference: string;
+}
 
 /** The MIME type a catalog entry carries when dragged onto the stage. */
 export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
@@ -43,10 +54,13 @@ export class PanelStage {
 
   private readonly size = signal({ width: 0, height: 0 });
   /** Fitted whenever the stage's size, the board or the face shown changes; panned and zoomed in between. */
-  private readonly viewState = linkedSignal<View | undefined>(() => {
-    const size = this.size();
-    const board = this.board();
-    return board && size.width > 0 ? fitView(board, size, this.store.face() === 'B') : undefined;
+  private readonly viewState = linkedSignal<{ size: { width: number; height: number }; board: Board | undefined; back: boolean }, View | undefined>({
+    source: () => ({ size: this.size(), board: this.board(), back: this.store.face() === 'B' }),
+    computation: ({ size, board, back }, previous) => {
+      // Never under a dragging pointer: the view it started with holds until the drag ends.
+      if (previous?.value && untracked(() => this.store.dragging())) return previous.value;
+      return board && size.width > 0 ? fitView(board, size, back) : undefined;
+    },
   });
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
@@ -71,11 +85,11 @@ export class PanelStage {
   });
   /** The board's size and thickness alone: the grid is redrawn when these change, not on every edit. */
   private readonly board = computed(
-    () => {
+    (): Board | undefined => {
       const panel = this.store.panel();
-      return panel && { id: panel.id, width: panel.width, height: panel.height, thickness: panel.thickness };
+      return panel && { id: panel.id, width: panel.width, height: panel.height, thickness: panel.thickness, reference: panelFrame(panel.role).reference };
     },
-    { equal: (a, b) => a?.id === b?.id && a?.width === b?.width && a?.height === b?.height && a?.thickness === b?.thickness },
+    { equal: (a, b) => a?.id === b?.id && a?.width === b?.width && a?.height === b?.height && a?.thickness === b?.thickness && a?.reference === b?.reference },
   );
 
   /** The pointer's position on the panel in mm, for the readout. */
