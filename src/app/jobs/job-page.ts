@@ -49,14 +49,15 @@ export class JobPage {
     });
   }
 
-  protected editDetails(): void {
+  protected async editDetails(): Promise<void> {
     const job = this.store.job();
     if (!job) return;
-    this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
+    const ref = this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
       data: { title: 'Job details', saveLabel: 'Save', job, withNotes: true, save: (values) => this.store.updateJob(values) },
       width: '520px',
       maxWidth: 'calc(100vw - 32px)',
     });
+    if ((await firstValueFrom(ref.afterClosed())) === 'reload') this.store.reload();
   }
 
   protected async addPanel(): Promise<void> {
