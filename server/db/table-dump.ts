@@ -7,7 +7,7 @@ import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, pane
  * Every table a backup holds, parents before children (the order a restore inserts them): the shop's
  * data, its invitation and reset links (an open invitation still works after a restore) and the
  * outbox. Left out are the transient tables: sessions (everyone signs in again) and the sign-in
- * attempt counters.
+ * throttle's counters and usual addresses.
  */
 const TABLES = [users, shopFittings, jobs, carcasses, panels, placements, bores, activity, attachments, mailTokens, outbox];
 

@@ -4,7 +4,7 @@ export class AppError extends Error {
     readonly status: number,
     readonly code: string,
     message: string,
-    readonly extra: { fields?: Record<string, string>; details?: string[] } = {},
+    readonly extra: { fields?: Record<string, string>; details?: string[]; retryAfterSeconds?: number } = {},
   ) {
     super(message);
     this.name = 'AppError';

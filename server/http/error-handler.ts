@@ -60,8 +60,10 @@ function clientFault(err: unknown): AppError | undefined {
 export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   if (res.headersSent) return next(err);
   const known = toAppError(err);
+  const { retryAfterSeconds, ...extra } = known?.extra ?? {};
+  if (retryAfterSeconds !== undefined) res.set('Retry-After', String(retryAfterSeconds));
   const body: ApiError = known
-    ? { error: { code: known.code, message: known.message, ...known.extra } }
+    ? { error: { code: known.code, message: known.message, ...extra } }
     : { error: { code: 'internal', message: 'Something went wrong on the server. The error is logged; please try again.' } };
   // A client's mistake is logged at warn by pino-http with its status; only our own faults are errors.
   if (!known) req.log.error({ err }, 'request failed');
