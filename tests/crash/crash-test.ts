@@ -135,7 +135,9 @@ async function main(): Promise<void> {
       const running = Array.from({ length: WORKERS }, (_, w) => worker(w));
       // Killed at a random moment once writes are flowing, most often mid-transaction.
       const before = acknowledged;
-      while (acknowledged === before) await new Promise((r) => setTimeout(r, 10));
+      let finished = false;
+      void Promise.all(running).then(() => (finished = true));
+      while (acknowledged === before && !finished) await new Promise((r) => setTimeout(r, 10));
       await new Promise((r) => setTimeout(r, 300 + Math.random() * 1200));
       await kill(server);
       stop = true;
