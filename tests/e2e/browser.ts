@@ -33,7 +33,7 @@ export async function openBrowser(
   // either fails the test at close(), so a screen that needs what the policy refuses cannot pass.
   const violations: string[] = [];
   await context.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'}`));
+    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));
   });
   const watch = (page: Page) =>
     page.on('console', (message) => {
