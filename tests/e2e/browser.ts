@@ -32,8 +32,9 @@ export async function openBrowser(
   // Every content security policy violation is reported by the page itself and by Chromium's console;
   // either fails the test at close(), so a screen that needs what the policy refuses cannot pass.
   const violations: string[] = [];
-  await context.addInitScript(() => {
-    document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));
+  await context.addInitScript({
+    content:
+      "document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));",
   });
   const watch = (page: Page) =>
     page.on('console', (message) => {
