@@ -49,7 +49,7 @@ export function createApp(deps: AppDeps): Express {
       customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
     }),
   );
-  app.use(securityHeaders);
+  app.use(securityHeaders(deps.config));
   app.use('/api', createApiRouter(deps));
   app.use(clientApp(deps.clientDir ?? DEFAULT_CLIENT_DIR));
   app.use(errorHandler);

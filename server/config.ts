@@ -69,7 +69,16 @@ export type Config = {
   trustProxy?: string;
   logLevel: string;
   session: { idleMs: number; absoluteMs: number };
-  signInLimits: { windowMs: number; perAccount: number; perAddress: number };
+  /** Sign-in throttling per client address and per address and account (auth/sign-in-throttle.ts). */
+  signInThrottle: {
+    windowMs: number;
+    perAddress: { free: number; refuseAfter: number };
+    perPair: { free: number; refuseAfter: number };
+    baseDelayMs: number;
+    /** The longest the right password waits at its owner's usual address. */
+    maxDelayMs: number;
+    usualAddressDays: number;
+  };
   /** How long the single-use links sent by mail work (server/team/mail-tokens.ts). */
   mailLinks: { invitationMs: number; passwordResetMs: number };
   /** Reset mails asked for, per address asked about and per client address: no one fills a mailbox with them. */
@@ -105,7 +114,14 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     trustProxy: env.TRUST_PROXY,
     logLevel: env.LOG_LEVEL ?? (env.NODE_ENV === 'test' ? 'silent' : 'info'),
     session: { idleMs: env.SESSION_IDLE_MINUTES * 60_000, absoluteMs: env.SESSION_MAX_DAYS * 86_400_000 },
-    signInLimits: { windowMs: 15 * 60_000, perAccount: 5, perAddress: 30 },
+    signInThrottle: {
+      windowMs: 15 * 60_000,
+      perAddress: { free: 10, refuseAfter: 30 },
+      perPair: { free: 3, refuseAfter: 10 },
+      baseDelayMs: 1000,
+      maxDelayMs: 30_000,
+      usualAddressDays: 90,
+    },
     mailLinks: { invitationMs: env.INVITATION_DAYS * 86_400_000, passwordResetMs: env.PASSWORD_RESET_MINUTES * 60_000 },
     passwordResetLimits: { windowMs: 60 * 60_000, perAccount: 3, perAddress: 20 },
   };

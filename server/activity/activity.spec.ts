@@ -24,7 +24,7 @@ describe('activity', () => {
     await designer.put(`/api/panels/${panel.dbId}/drilling`).send({ version: 2, placements: [], bores: [] }).expect(200);
     await designer.patch(`/api/panels/${panel.dbId}/status`).send({ version: 3, status: 'drilled' }).expect(200);
     await designer.delete(`/api/panels/${panel.dbId}?version=4`).expect(204);
-    await designer.patch(`/api/jobs/${job.id}`).send({ archived: true }).expect(200);
+    await designer.patch(`/api/jobs/${job.id}`).send({ archived: true, version: 1 }).expect(200);
 
     const res = await designer.get(`/api/activity?jobId=${job.id}`).expect(200);
     expect(activityList.parse(res.body)).toEqual(res.body);

@@ -4,7 +4,7 @@ import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
 import { notFound } from '../http/app-error';
 import { findJob, touchJob } from '../jobs/jobs.repository';
-import { attachmentType } from './content-type';
+import { attachmentType, nameForType } from './content-type';
 import * as repo from './attachments.repository';
 
 type SummaryRow = NonNullable<Awaited<ReturnType<typeof repo.findAttachmentSummary>>>;
@@ -33,11 +33,13 @@ export interface UploadedFile {
 /** Keeps a photo or PDF with the job, typed by its content, with an activity entry. */
 export async function uploadAttachment(db: Database, actor: User, jobId: number, file: UploadedFile): Promise<AttachmentSummary> {
   const contentType = await attachmentType(file.bytes, file.fileName, file.declaredType);
+  const filename = nameForType(file.fileName, contentType);
   const id = await db.transaction(async (tx) => {
     await requireJob(tx, jobId);
-    const inserted = await repo.insertAttachment(tx, { jobId, filename: file.fileName, contentType, size: file.bytes.length, content: file.bytes, uploadedBy: actor.id });
+    const inserted = await repo.insertAttachment(tx, { jobId, filename, contentType, size: file.bytes.length, content: file.bytes, uploadedBy: actor.id });
     await touchJob(tx, jobId);
-    await recordActivity(tx, { userId: actor.id, jobId, action: 'attachment.uploaded', details: { attachment: inserted, file: file.fileName, type: contentType, size: file.bytes.length } });
+    const details = { attachment: inserted, file: filename, sentAs: file.fileName, type: contentType, size: file.bytes.length };
+    await recordActivity(tx, { userId: actor.id, jobId, action: 'attachment.uploaded', details });
     return inserted;
   });
   return toSummary((await repo.findAttachmentSummary(db, id))!);
@@ -47,7 +49,8 @@ export async function uploadAttachment(db: Database, actor: User, jobId: number,
 export async function attachmentForDownload(db: Database, id: number) {
   const row = await repo.findAttachment(db, id);
   if (!row) throw notFound(`Attachment ${id}`);
-  return row;
+  // Rows kept before names followed the content get the same name on the way out.
+  return { ...row, filename: nameForType(row.filename, row.contentType as AttachmentType) };
 }
 
 /** Removes an attachment from its job, with an activity entry. */

@@ -39,7 +39,7 @@ describe('job attachments', () => {
     expect(list.maxBytes).toBe(LIMIT);
     expect(list.attachments.map((a) => [a.filename, a.contentType])).toEqual([
       ['wall.png', 'image/png'],
-      ['survey.bin', 'image/jpeg'],
+      ['survey.jpg', 'image/jpeg'],
       ['drawing.pdf', 'application/pdf'],
     ]);
     const { body: log } = await designer.get(`/api/activity?jobId=${jobId}`).expect(200);

@@ -5,6 +5,20 @@ import { AppError } from '../http/app-error';
 const isAllowed = (mime: string): mime is AttachmentType => mime in ATTACHMENT_TYPES;
 
 const BY_EXTENSION: Record<string, AttachmentType> = { png: 'image/png', jpg: 'image/jpeg', jpeg: 'image/jpeg', webp: 'image/webp', pdf: 'application/pdf' };
+/** The extension a file of each type is saved with. */
+const EXTENSION: Record<AttachmentType, string> = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/webp': 'webp', 'application/pdf': 'pdf' };
+
+/**
+ * The name a file of this content type is kept and downloaded under: the name it came with when its
+ * extension is one of the type's (in any case), else with its extension replaced by the type's. A PNG
+ * sent as `invoice.html` downloads as `invoice.png`, so once saved to disk it opens as a picture,
+ * never as a web page.
+ */
+export function nameForType(fileName: string, type: AttachmentType): string {
+  const match = /^(.*[^.])\.([^.]*)$/.exec(fileName);
+  if (match && BY_EXTENSION[match[2].toLowerCase()] === type) return fileName;
+  return `${match ? match[1] : fileName}.${EXTENSION[type]}`;
+}
 
 /** The type the client claims, from the part's Content-Type or else the name's extension, when it is one we take. */
 function claimedType(fileName: string, declared: string): AttachmentType | undefined {

@@ -9,7 +9,7 @@ import { issueCsrfToken } from './csrf';
 import { authenticateLocal } from './passport';
 import { passwordResetFor, requestPasswordResetLater, resetPassword } from './password-reset.service';
 import { passwordResetLimits } from './password-reset-limits';
-import { signInLimits } from './sign-in-limits';
+import { throttledSignIn } from './sign-in-throttle';
 import { csrfCookie, startSession } from './start-session';
 
 /** Sign-in, sign-out, "who am I" and password reset by mail; /auth/me also hands the client its XSRF token. */
@@ -30,9 +30,10 @@ export function authRoutes(router: Router, context: RouteContext): void {
     res.json({ user: req.user ?? null });
   });
 
-  router.post('/auth/sign-in', jsonBody, signInLimits(config.signInLimits), async (req, res) => {
+  router.post('/auth/sign-in', jsonBody, async (req, res) => {
     req.body = signInBody.parse(req.body);
-    const user = await authenticateLocal(authenticator, req, res);
+    const attempt = { db: context.db, limits: config.signInThrottle, now: context.clock(), ip: req.ip ?? '', email: req.body.email };
+    const user = await throttledSignIn(attempt, () => authenticateLocal(authenticator, req, res));
     await startSession(req, res, user, context);
     res.json({ user });
   });

@@ -1,4 +1,5 @@
 import type { CatalogEntry } from '../../shared/api/catalog-contract';
+import { jsonTooDeep, TOO_DEEP_MESSAGE } from '../../shared/model/json-depth';
 import type { User } from '../../shared/api/contract';
 import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import type { Fitting } from '../../shared/catalog/fitting';
@@ -27,8 +28,10 @@ export async function listCatalog(db: Database): Promise<CatalogEntry[]> {
 
 /** Reads an uploaded file as JSON; what it holds is checked by `readFittingImport`. */
 export function readFittingFile(bytes: Buffer): unknown {
+  const text = bytes.toString('utf8').replace(/^\uFEFF/, '');
+  if (jsonTooDeep(text)) throw invalidImport([`the file ${TOO_DEEP_MESSAGE}`]);
   try {
-    return JSON.parse(bytes.toString('utf8').replace(/^\uFEFF/, ''));
+    return JSON.parse(text);
   } catch (err) {
     throw invalidImport([`the file is not JSON: ${(err as Error).message}`]);
   }

@@ -4,7 +4,7 @@ import { createJob, jobAsDocument, listJobs } from '../jobs/jobs.service';
 import { openTestDatabase } from '../testing/test-database';
 import type { DatabaseHandle } from './client';
 import { jobs, users } from './schema';
-import { dumpTables, restoreTables, type Backup } from './table-dump';
+import { dumpTables, restoreTables, RestoreError, type Backup } from './table-dump';
 
 describe('backup and restore', () => {
   let source: DatabaseHandle;
@@ -34,6 +34,32 @@ describe('backup and restore', () => {
     const [owner] = await target.db.select().from(users).limit(1);
     const created = await createJob(target.db, owner, { name: 'After the restore' });
     expect(created.id).toBe(max + 1);
+  });
+
+  it('names the table and the row the database refuses, never printing the rows, and restores nothing', async () => {
+    const fresh = await openTestDatabase('empty');
+    try {
+      const panels = backup.tables.panels as { id: number; width: number; name: string }[];
+      const bad = panels.map((p, i) => (i === 2 ? { ...p, width: null } : p));
+      const attempt = restoreTables(fresh.db, { ...backup, tables: { ...backup.tables, panels: bad } });
+      await expect(attempt).rejects.toThrow(RestoreError);
+      const message = ((await attempt.catch((e: unknown) => e)) as Error).message;
+      expect(message).toMatch(new RegExp(`^table panels, row 3 \\(id ${panels[2].id}\\): null value in column "width"`));
+      // PostgreSQL's detail ("Failing row contains (…)") would list the row's values, its name among them.
+      expect(message).not.toContain(panels[2].name);
+      expect(message.length).toBeLessThan(300);
+      const duplicate = restoreTables(fresh.db, { ...backup, tables: { ...backup.tables, jobs: [...backup.tables.jobs, backup.tables.jobs[0]] } });
+      await expect(duplicate).rejects.toThrow(new RegExp(`^table jobs, row ${backup.tables.jobs.length + 1} \\(id 1\\): duplicate key value`));
+      const notRows = restoreTables(fresh.db, { ...backup, tables: { ...backup.tables, bores: 'none' as unknown as unknown[] } });
+      await expect(notRows).rejects.toThrow('table bores is not a list of rows');
+      expect(await fresh.db.$count(jobs)).toBe(0);
+    } finally {
+      await fresh.close();
+    }
+  });
+
+  it('holds the invitation and reset links and the outbox, and restores them', () => {
+    expect(Object.keys(backup.tables)).toEqual(['users', 'shop_fittings', 'jobs', 'carcasses', 'panels', 'placements', 'bores', 'activity', 'attachments', 'mail_tokens', 'outbox']);
   });
 
   it('refuses a database that already has rows, and a file of another kind', async () => {

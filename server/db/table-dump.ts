@@ -1,13 +1,15 @@
 import { readFileSync } from 'node:fs';
 import { getTableName, sql, type SQL } from 'drizzle-orm';
 import type { Database } from './client';
-import { activity, attachments, bores, carcasses, jobs, panels, placements, shopFittings, users } from './schema';
+import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, users } from './schema';
 
 /**
- * Every table a backup holds, parents before children (the order a restore inserts them). Sessions
- * and the single-use mail links are transient and left out: after a restore, invite again.
+ * Every table a backup holds, parents before children (the order a restore inserts them): the shop's
+ * data, its invitation and reset links (an open invitation still works after a restore) and the
+ * outbox. Left out are the transient tables: sessions (everyone signs in again) and the sign-in
+ * throttle's counters and usual addresses.
  */
-const TABLES = [users, shopFittings, jobs, carcasses, panels, placements, bores, activity, attachments];
+const TABLES = [users, shopFittings, jobs, carcasses, panels, placements, bores, activity, attachments, mailTokens, outbox];
 
 export const BACKUP_FORMAT = 'borewright.backup/1';
 
@@ -64,10 +66,40 @@ export async function restoreTables(db: Database, backup: Backup): Promise<void>
     for (const table of TABLES) {
       const name = getTableName(table);
       const rows = backup.tables[name] ?? [];
-      if (rows.length > 0) {
-        await tx.execute(sql`insert into ${table} select * from json_populate_recordset(null::${table}, ${JSON.stringify(rows)}::json)`);
-      }
+      if (!Array.isArray(rows)) throw new RestoreError(`table ${name} is not a list of rows`);
+      if (rows.length > 0) await insertRows(tx, table, rows);
       await tx.execute(sql`select setval(pg_get_serial_sequence(${name}, 'id'), coalesce(max(id), 0) + 1, false) from ${table}`);
     }
   });
+}
+
+type Table = (typeof TABLES)[number];
+
+const insertAll = (db: Database, table: Table, rows: unknown[]) =>
+  db.execute(sql`insert into ${table} select * from json_populate_recordset(null::${table}, ${JSON.stringify(rows)}::json)`);
+
+/** The database's own words for a refused row: its message, never its detail, which lists the row's values. */
+function refusal(err: unknown): string {
+  const cause = (err as { cause?: { message?: unknown } }).cause;
+  return typeof cause?.message === 'string' ? cause.message : (err as Error).message.split('\n')[0];
+}
+
+/**
+ * A table's rows in one statement, inside a savepoint. When the database refuses them, the rows are
+ * tried one by one, each in a savepoint of its own, to name the first that is refused: its table, its
+ * place in the file and its id, with the database's reason.
+ */
+async function insertRows(tx: Database, table: Table, rows: unknown[]): Promise<void> {
+  const done = await tx.transaction((sp) => insertAll(sp, table, rows)).then(
+    () => true,
+    () => false,
+  );
+  if (done) return;
+  for (const [i, row] of rows.entries()) {
+    await tx.transaction((sp) => insertAll(sp, table, [row])).catch((err: unknown) => {
+      const id = (row as { id?: unknown } | null)?.id;
+      throw new RestoreError(`table ${getTableName(table)}, row ${i + 1}${id === undefined ? '' : ` (id ${JSON.stringify(id)})`}: ${refusal(err)}`);
+    });
+  }
+  throw new RestoreError(`table ${getTableName(table)}: its rows were refused together though each alone was accepted (two rows with one key?)`);
 }

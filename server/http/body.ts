@@ -1,6 +1,7 @@
 import express, { type RequestHandler } from 'express';
 import multer from 'multer';
 import { sizeInWords } from '../../shared/api/file-size';
+import { jsonTooDeep, TOO_DEEP_MESSAGE } from '../../shared/model/json-depth';
 import { AppError } from './app-error';
 import { findNulText, NUL_MESSAGE } from './nul-text';
 
@@ -15,7 +16,19 @@ function wrongType(req: express.Request, type: string): AppError | undefined {
   return !empty && req.is(type) === false ? new AppError(415, 'unsupported-media-type', `Send the request body as ${type}.`) : undefined;
 }
 
-const parseJson = express.json({ limit: JSON_LIMIT });
+/** 400 for a body nested past MAX_JSON_DEPTH; a thrown AppError keeps its status through the parser. */
+export function tooDeep(what: string): AppError {
+  return new AppError(400, 'too-deep', `${what} ${TOO_DEEP_MESSAGE}.`);
+}
+
+// The depth is read from the raw bytes before JSON.parse runs, so no walk over the parsed body
+// (ours for NUL, zod's, the database driver's) can meet a nest deep enough to overflow the stack.
+const parseJson = express.json({
+  limit: JSON_LIMIT,
+  verify: (_req, _res, raw) => {
+    if (jsonTooDeep(raw.toString('latin1'))) throw tooDeep('The request body');
+  },
+});
 
 /** For routes that take a JSON body. */
 export const jsonBody: RequestHandler = (req, res, next) => {

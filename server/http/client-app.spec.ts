@@ -12,7 +12,7 @@ describe('the web app and the API side by side', () => {
   beforeAll(async () => {
     dir = mkdtempSync(path.join(tmpdir(), 'borewright-client-'));
     mkdirSync(path.join(dir, 'assets'));
-    writeFileSync(path.join(dir, 'index.html'), '<!doctype html><title>Borewright</title>');
+    writeFileSync(path.join(dir, 'index.html'), '<!doctype html><title>Borewright</title><bw-root ngCspNonce="CSP_NONCE"></bw-root>');
     writeFileSync(path.join(dir, 'assets', 'app.js'), 'console.log(1)');
     [built, unbuilt] = await Promise.all([createTestApp({ clientDir: dir }), createTestApp({ clientDir: path.join(dir, 'missing') })]);
   });
@@ -47,7 +47,20 @@ describe('the web app and the API side by side', () => {
     for (const url of ['/', '/api/health']) {
       const res = await request(built.app).get(url);
       expect(res.headers).toMatchObject({ 'x-content-type-options': 'nosniff', 'x-frame-options': 'DENY' });
+      expect(res.headers['content-security-policy']).toContain("frame-ancestors 'none'");
       expect(res.headers).not.toHaveProperty('x-powered-by');
     }
+  });
+
+  it('gives each page a fresh nonce, the same in the policy and on the app’s root element', async () => {
+    const nonces = [];
+    for (const page of ['/', '/jobs/3', '/index.html']) {
+      const res = await request(built.app).get(page).expect(200);
+      const nonce = /'nonce-([A-Za-z0-9+/=]+)'/.exec(res.headers['content-security-policy'])![1];
+      expect(res.text).toContain(`<bw-root ngCspNonce="${nonce}">`);
+      expect(res.text).not.toContain('CSP_NONCE');
+      nonces.push(nonce);
+    }
+    expect(new Set(nonces).size).toBe(3);
   });
 });

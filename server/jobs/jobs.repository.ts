@@ -1,4 +1,4 @@
-import { asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
 import { bores, carcasses, jobs, panels, placements, users } from '../db/schema';
@@ -10,6 +10,7 @@ const summaryColumns = (db: Database) => ({
   client: jobs.client,
   notes: jobs.notes,
   archived: jobs.archived,
+  version: jobs.version,
   carcassCount: db.$count(carcasses, eq(carcasses.jobId, jobs.id)),
   panelCount: db.$count(panels, eq(panels.jobId, jobs.id)),
   updatedAt: jobs.updatedAt,
@@ -80,12 +81,20 @@ export async function insertJobDraft(tx: Database, draft: JobDocumentDraft): Pro
   return jobId;
 }
 
-/** Changes the job's own fields; undefined when there is no such job. */
-export async function updateJob(db: Database, id: number, changes: Partial<Pick<typeof jobs.$inferInsert, 'name' | 'client' | 'notes' | 'archived'>>) {
+/**
+ * Changes the job's own fields and bumps its version, but only while the job is still at `version`;
+ * undefined when it is not (or there is no such job).
+ */
+export async function updateJobAtVersion(
+  db: Database,
+  id: number,
+  version: number,
+  changes: Partial<Pick<typeof jobs.$inferInsert, 'name' | 'client' | 'notes' | 'archived'>>,
+) {
   const [row] = await db
     .update(jobs)
-    .set({ ...changes, updatedAt: sql`now()` })
-    .where(eq(jobs.id, id))
+    .set({ ...changes, version: sql`${jobs.version} + 1`, updatedAt: sql`now()` })
+    .where(and(eq(jobs.id, id), eq(jobs.version, version)))
     .returning({ id: jobs.id });
   return row;
 }

@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { jsonTooDeep, TOO_DEEP_MESSAGE } from '../../shared/model/json-depth';
 import type { carcassCreateBody, JobDetail, jobCreateBody, JobSummary, jobUpdateBody, User } from '../../shared/api/contract';
 import { DEFAULT_MATERIALS } from '../../shared/model/default-materials';
 import { JOB_FORMAT, jobDocument, type Carcass, type JobDocument } from '../../shared/model/job-document';
@@ -6,7 +7,7 @@ import { parseJobDocument } from '../../shared/model/parse-job';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
 import { carcassDraft, fromJobDocument, toCarcass, toJobDocument, toPanelRecords } from '../db/job-mapping';
-import { AppError, invalidField, notFound } from '../http/app-error';
+import { AppError, invalidField, notFound, staleVersion } from '../http/app-error';
 import { findNulText, NUL_MESSAGE } from '../http/nul-text';
 import { nextDocumentId } from './document-ids';
 import * as repo from './jobs.repository';
@@ -75,9 +76,11 @@ export function createJob(db: Database, actor: User, body: z.output<typeof jobCr
  * by its path, so the user can mend the file in one go.
  */
 export function readJobFile(bytes: Buffer): JobDocument {
+  const text = bytes.toString('utf8').replace(/^\uFEFF/, '');
+  if (jsonTooDeep(text)) throw invalidDocument([`the file ${TOO_DEEP_MESSAGE}`]);
   let input: unknown;
   try {
-    input = JSON.parse(bytes.toString('utf8').replace(/^\uFEFF/, ''));
+    input = JSON.parse(text);
   } catch (err) {
     throw invalidDocument([`the file is not JSON: ${(err as Error).message}`]);
   }
@@ -98,12 +101,18 @@ export function importJob(db: Database, actor: User, doc: JobDocument, fileName?
   return storeJob(db, actor, doc, 'job.imported', fileName ? { file: fileName } : {});
 }
 
-/** Renames, re-notes, archives or unarchives a job, with its activity entry. */
+/**
+ * Renames, re-notes, archives or unarchives a job at the version the client saw, with its activity
+ * entry; someone else's change since then answers 409 rather than being written over.
+ */
 export async function updateJob(db: Database, actor: User, jobId: number, body: z.output<typeof jobUpdateBody>): Promise<JobSummary> {
+  const { version, ...changes } = body;
   await db.transaction(async (tx) => {
-    if (!(await repo.updateJob(tx, jobId, body))) throw notFound(`Job ${jobId}`);
-    const action = body.archived === true ? 'job.archived' : body.archived === false ? 'job.unarchived' : 'job.updated';
-    await recordActivity(tx, { userId: actor.id, jobId, action, details: { fields: Object.keys(body) } });
+    const current = await repo.findJob(tx, jobId);
+    if (!current) throw notFound(`Job ${jobId}`);
+    if (current.version !== version || !(await repo.updateJobAtVersion(tx, jobId, version, changes))) throw staleVersion('this job', current.version);
+    const action = changes.archived === true ? 'job.archived' : changes.archived === false ? 'job.unarchived' : 'job.updated';
+    await recordActivity(tx, { userId: actor.id, jobId, action, details: { fields: Object.keys(changes) } });
   });
   return jobSummary(db, jobId);
 }

@@ -42,21 +42,21 @@ describe('jobs', () => {
 
   it('renames, archives and unarchives', async () => {
     const { body: job } = await designer.post('/api/jobs').send({ name: 'Old name' }).expect(201);
-    expect((await designer.patch(`/api/jobs/${job.id}`).send({ name: 'New name', notes: 'Measured on site' }).expect(200)).body.name).toBe('New name');
-    await designer.patch(`/api/jobs/${job.id}`).send({ archived: true }).expect(200);
+    expect((await designer.patch(`/api/jobs/${job.id}`).send({ name: 'New name', notes: 'Measured on site', version: 1 }).expect(200)).body.name).toBe('New name');
+    await designer.patch(`/api/jobs/${job.id}`).send({ archived: true, version: 2 }).expect(200);
     const active = (await designer.get('/api/jobs').expect(200)).body.jobs.map((j: { id: number }) => j.id);
     const archived = (await designer.get('/api/jobs?archived=true').expect(200)).body.jobs.map((j: { id: number }) => j.id);
     expect(active).not.toContain(job.id);
     expect(archived).toContain(job.id);
-    await designer.patch(`/api/jobs/${job.id}`).send({ archived: false }).expect(200);
-    expect((await designer.get(`/api/jobs/${job.id}`).expect(200)).body.job).toMatchObject({ name: 'New name', notes: 'Measured on site', archived: false });
+    await designer.patch(`/api/jobs/${job.id}`).send({ archived: false, version: 3 }).expect(200);
+    expect((await designer.get(`/api/jobs/${job.id}`).expect(200)).body.job).toMatchObject({ name: 'New name', notes: 'Measured on site', archived: false, version: 4 });
   });
 
   it('refuses an empty change and an unknown job', async () => {
-    const empty = await designer.patch('/api/jobs/1').send({}).expect(400);
-    expect(empty.body.error.fields).toEqual({ '(body)': 'nothing to change' });
+    const empty = await designer.patch('/api/jobs/1').send({ version: 1 }).expect(400);
+    expect(empty.body.error.fields).toEqual({ '(body)': 'nothing to change: send at least one field besides version' });
     expect((await designer.get('/api/jobs/999999').expect(404)).body.error.code).toBe('not-found');
-    await designer.patch('/api/jobs/999999').send({ name: 'x' }).expect(404);
+    await designer.patch('/api/jobs/999999').send({ name: 'x', version: 1 }).expect(404);
   });
 
   it('downloads a job as a borewright.job/1 file that imports as the same job', async () => {

@@ -6,22 +6,14 @@ import type { Database } from '../db/client';
 import type { PanelStatus } from '../../shared/model/job-document';
 import { statusStep } from '../../shared/model/panel-status';
 import { boreDraft, placementDraft, type PanelRow } from '../db/job-mapping';
-import { AppError, invalidField, notFound } from '../http/app-error';
+import { AppError, invalidField, notFound, staleVersion } from '../http/app-error';
 import { nextDocumentId } from '../jobs/document-ids';
 import { carcassKeys, findJob, touchJob } from '../jobs/jobs.repository';
 import * as repo from './panels.repository';
 
 type BoardFields = Partial<z.output<typeof panelFieldsBody>>;
 
-function stale(current?: number): AppError {
-  const now = current === undefined ? '' : ` (it is now at version ${current})`;
-  return new AppError(
-    409,
-    'stale-version',
-    `Someone else changed this panel since you loaded it${now}. Reload it to see their change, then make yours again.`,
-    { fields: { version: 'is not the current version' } },
-  );
-}
+const stale = (current?: number) => staleVersion('this panel', current);
 
 /** Checks board fields against the job (its materials and carcasses) and turns them into column changes. */
 async function boardChanges(tx: Database, jobId: number, fields: BoardFields): Promise<repo.PanelChanges> {

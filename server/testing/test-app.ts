@@ -1,7 +1,7 @@
 import { createApp } from '../app';
 import { loadConfig, type Config } from '../config';
 import type { DatabaseHandle } from '../db/client';
-import { createLogger } from '../logger';
+import { createLogger, type Logger } from '../logger';
 import { startMail, type Mailer } from '../mail/mailer';
 import { openTestDatabase } from './test-database';
 
@@ -24,10 +24,12 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
 }
 
 /** createApp on an in-memory database from a template, with a clock only the test moves. */
-export async function createTestApp(options: { template?: 'empty' | 'demo'; config?: Partial<Config>; clientDir?: string } = {}): Promise<TestApp> {
+export async function createTestApp(
+  options: { template?: 'empty' | 'demo'; config?: Partial<Config>; clientDir?: string; logger?: Logger } = {},
+): Promise<TestApp> {
   const database = await openTestDatabase(options.template ?? 'demo');
   const config = testConfig(options.config);
-  const logger = createLogger('silent');
+  const logger = options.logger ?? createLogger('silent');
   const mail = await startMail(config, database.db, logger);
   // A clock that stands still unless the test moves it: a slow machine cannot make a session time out.
   const start = Date.now();

@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { text } from '../model/well-formed-text';
 import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement, shopLimits, systemSettings } from '../model/job-document';
 
 /**
@@ -58,6 +59,8 @@ export const jobSummary = z.object({
   name: z.string(),
   client: z.string().nullable(),
   archived: z.boolean(),
+  /** The version of the job's own fields; a change sends it back, and a stale one answers 409. */
+  version: z.number().int(),
   carcassCount: z.number().int(),
   panelCount: z.number().int(),
   updatedAt: z.string(),
@@ -66,18 +69,20 @@ export type JobSummary = z.output<typeof jobSummary>;
 
 export const jobCreateBody = z.object({
   name: displayName,
-  client: z.string().trim().max(200).optional(),
-  notes: z.string().max(10_000).optional(),
+  client: text.trim().max(200).optional(),
+  notes: text.max(10_000).optional(),
 });
 
 export const jobUpdateBody = z
   .object({
     name: displayName.optional(),
-    client: z.string().trim().max(200).nullable().optional(),
-    notes: z.string().max(10_000).nullable().optional(),
+    client: text.trim().max(200).nullable().optional(),
+    notes: text.max(10_000).nullable().optional(),
     archived: z.boolean().optional(),
+    /** The version the client last saw; a stale one answers 409. */
+    version: z.number().int().min(1),
   })
-  .refine((b) => Object.keys(b).length > 0, 'nothing to change');
+  .refine((b) => Object.keys(b).length > 1, 'nothing to change: send at least one field besides version');
 
 /** A panel as the API returns it: the document's panel plus its database id, carcass id and version. */
 export const panelRecord = panel.extend({
@@ -110,7 +115,7 @@ export const carcassCreateBody = carcass.omit({ id: true, plannedFrom: true }).e
 export const panelFieldsBody = z.object({
   name: displayName,
   role: panelRole,
-  carcass: z.string().max(64).nullable().optional(),
+  carcass: text.max(64).nullable().optional(),
   width: panel.shape.width,
   height: panel.shape.height,
   thickness: panel.shape.thickness,

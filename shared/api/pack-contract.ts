@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { text } from '../model/well-formed-text';
 import { finding } from '../checks/finding';
 import { dbId } from './contract';
 
@@ -26,7 +27,7 @@ export const packSendBody = z.object({
     .max(MAX_RECIPIENTS, `must name at most ${MAX_RECIPIENTS} recipients`)
     .transform((to) => [...new Set(to)]),
   paper: paperQuery.shape.paper,
-  message: z.string().trim().max(2000, 'must be at most 2000 characters').optional(),
+  message: text.trim().max(2000, 'must be at most 2000 characters').optional(),
 });
 export type PackSendBody = z.input<typeof packSendBody>;
 

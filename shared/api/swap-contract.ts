@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { isWellFormedText, LONE_SURROGATE_MESSAGE, text } from '../model/well-formed-text';
 import { swapReport } from '../swap/swap-report';
 import { paperQuery } from './pack-contract';
 
@@ -8,7 +9,7 @@ import { paperQuery } from './pack-contract';
  */
 
 /** A fitting id as the job or the catalog names it; whether the catalog knows it is the swap check's to say. */
-const fittingName = z.string('is required').trim().min(1, 'must name a fitting').max(64, 'must be at most 64 characters');
+const fittingName = z.string('is required').refine(isWellFormedText, LONE_SURROGATE_MESSAGE).trim().min(1, 'must name a fitting').max(64, 'must be at most 64 characters');
 
 /** `?from=&to=`: the fitting used in the job and its replacement. */
 export const swapQuery = z.object({ from: fittingName, to: fittingName });
@@ -21,7 +22,7 @@ export const retrofitQuery = swapQuery.extend({ paper: paperQuery.shape.paper })
  * report, by panel id: a panel changed since answers 409, so a swap is never applied to a plan nobody saw.
  */
 export const swapApplyBody = swapQuery.extend({
-  versions: z.record(z.string().max(64), z.number().int().min(1)).optional(),
+  versions: z.record(text.max(64), z.number().int().min(1)).optional(),
 });
 export type SwapApplyBody = z.input<typeof swapApplyBody>;
 

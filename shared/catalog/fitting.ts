@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { text } from '../model/well-formed-text';
 import { displayName, edge } from '../model/job-document';
 
 /**
@@ -19,7 +20,7 @@ const boreId = z
   .max(32, 'must be at most 32 characters')
   .regex(/^[a-z0-9]+(?:-[a-z0-9]+)*$/, 'must be kebab-case: lower-case letters and digits joined by "-"');
 
-const source = z.string().trim().min(1, 'must say where the numbers come from');
+const source = text.trim().min(1, 'must say where the numbers come from');
 const offset = z.number().finite('must be a finite number').min(-2000).max(2000);
 const size = (max: number) =>
   z.number().finite('must be a finite number').positive('must be greater than 0').max(max, `must be at most ${max} mm`);

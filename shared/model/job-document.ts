@@ -1,4 +1,5 @@
 import * as z from 'zod';
+import { text } from './well-formed-text';
 
 /**
  * The job document, format `borewright.job/1` (design.md §3): the single definition of a job that the
@@ -22,8 +23,7 @@ const id = z
   .regex(/^[A-Za-z0-9][A-Za-z0-9._:-]*$/, 'may hold only letters, digits and . _ : - and must start with a letter or digit');
 
 /** A name shown to people: any text but control characters, trimmed, 1 to 200 characters. */
-export const displayName = z
-  .string()
+export const displayName = text
   .trim()
   .min(1, 'must not be empty')
   .max(200, 'must be at most 200 characters')
@@ -88,7 +88,7 @@ export const carcass = z.object({
    * The description the carcass planner made this carcass from, as the planner reads it (without the
    * job's materials, system and limits), so that it can be planned again; absent for a carcass drawn by hand.
    */
-  plannedFrom: z.record(z.string().max(64), z.unknown()).optional(),
+  plannedFrom: z.record(text.max(64), z.unknown()).optional(),
 });
 
 export const placement = z.object({
@@ -100,7 +100,7 @@ export const placement = z.object({
   rotation: rotation.default(0),
   mirrored: z.boolean().optional(),
   /** Fitting parameters, such as a hinge's cup-boring distance `boringDistance`. */
-  params: z.record(z.string().max(64), z.number().finite()).optional(),
+  params: z.record(text.max(64), z.number().finite()).optional(),
 });
 
 export const faceBore = z.object({
@@ -152,8 +152,8 @@ export const panel = z.object({
 const jobShape = z.object({
   format: z.literal(JOB_FORMAT),
   name: displayName,
-  client: z.string().trim().max(200).optional(),
-  notes: z.string().max(10_000).optional(),
+  client: text.trim().max(200).optional(),
+  notes: text.max(10_000).optional(),
   system: systemSettings.default({ pitch: 32, setback: 37, holeDiameter: 5, holeDepth: 13 }),
   limits: shopLimits.default({ minWeb: 3, minEdge: 3, minFloor: 3, sagRatio: 144 }),
   materials: z.array(material).max(200),

@@ -23,6 +23,8 @@ function flatten(issue: Issue, prefix: readonly PropertyKey[]): { path: Property
     // Only a union of objects has a branch to point into; a union of values (a number or a keyword) keeps its own message.
     if (closest.length > 0 && closest.every((inner) => inner.path.length > 0)) return closest.flatMap((inner) => flatten(inner, path));
   }
+  // A record key its schema refuses: the key's own problem says why, at the key's path.
+  if (issue.code === 'invalid_key' && issue.issues.length > 0) return issue.issues.map((inner) => ({ path, message: `the name ${inner.message}` }));
   return [{ path, message: issue.message }];
 }
 

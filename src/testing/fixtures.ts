@@ -14,6 +14,7 @@ export function aJobSummary(changes: Partial<JobSummary> = {}): JobSummary {
     name: 'Larch Lane kitchen',
     client: 'R. Hale',
     archived: false,
+    version: 3,
     carcassCount: 1,
     panelCount: 2,
     updatedAt: '2026-11-30T09:15:00.000Z',

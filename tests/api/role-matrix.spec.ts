@@ -51,7 +51,7 @@ const ROUTES: Record<string, Row> = {
     expect: [401, 201, 201, 403, 403],
   },
   'GET /api/jobs/:jobId': { request: (c, f) => c.get(`/api/jobs/${f.jobId}`), expect: [401, 200, 200, 200, 200] },
-  'PATCH /api/jobs/:jobId': { request: (c, f) => c.patch(`/api/jobs/${f.jobId}`).send({ archived: true }), expect: [401, 200, 200, 403, 403] },
+  'PATCH /api/jobs/:jobId': { request: (c, f) => c.patch(`/api/jobs/${f.jobId}`).send({ archived: true, version: 1 }), expect: [401, 200, 200, 403, 403] },
   'GET /api/jobs/:jobId/document': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/document`), expect: [401, 200, 200, 200, 200] },
   'POST /api/jobs/:jobId/carcasses': {
     request: (c, f) => c.post(`/api/jobs/${f.jobId}/carcasses`).send({ name: 'Box', width: 600, height: 722, depth: 560, material: 'mdf-19' }),

@@ -29,13 +29,28 @@ export async function openBrowser(
     viewport,
     hasTouch: touch,
   });
+  // Every content security policy violation is reported by the page itself and by Chromium's console;
+  // either fails the test at close(), so a screen that needs what the policy refuses cannot pass.
+  const violations: string[] = [];
+  await context.addInitScript({
+    content:
+      "document.addEventListener('securitypolicyviolation', (e) => console.error(`CSP violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'} at ${e.sourceFile}:${e.lineNumber}:${e.columnNumber}`));",
+  });
+  const watch = (page: Page) =>
+    page.on('console', (message) => {
+      const text = message.text();
+      if (/Content Security Policy|CSP violation/.test(text)) violations.push(text);
+    });
+  context.on('page', watch);
   const page = context.pages()[0] ?? (await context.newPage());
+  for (const open of context.pages()) watch(open);
   return {
     context,
     page,
     async close() {
       await context.close();
       rmSync(profile, { recursive: true, force: true });
+      if (violations.length > 0) throw new Error(`The content security policy was violated:\n${violations.join('\n')}`);
     },
   };
 }

@@ -33,6 +33,31 @@ describe('a designer and a viewer in the browser', () => {
     await page.getByRole('button', { name: /^save$/i }).click();
     await expect.poll(() => page.getByRole('cell', { name: 'Left side', exact: true }).count()).toBe(1);
     await screenshot(page, 'designer-job-with-panel');
+
+    // The job's notes, saved with the job's version; someone else's change in between is never written over.
+    await page.getByRole('button', { name: /details/i }).click();
+    await page.getByLabel('Notes').fill('Measured on site');
+    await page.getByRole('button', { name: /^save$/i }).click();
+    await expect.poll(() => page.getByRole('dialog').count()).toBe(0);
+    await page.getByRole('button', { name: /details/i }).click();
+    const jobId = Number(/\/jobs\/(\d+)/.exec(page.url())![1]);
+    const renamed = await page.evaluate(async (id) => {
+      const token = document.cookie.split('; ').find((c) => c.startsWith('XSRF-TOKEN='))?.split('=')[1] ?? '';
+      const job = await (await fetch(`/api/jobs/${id}`)).json();
+      const res = await fetch(`/api/jobs/${id}`, {
+        method: 'PATCH',
+        headers: { 'content-type': 'application/json', 'x-xsrf-token': decodeURIComponent(token) },
+        body: JSON.stringify({ name: 'Renamed in another tab', version: job.job.version }),
+      });
+      return res.status;
+    }, jobId);
+    expect(renamed).toBe(200);
+    await page.getByLabel('Notes').fill('Measured twice');
+    await page.getByRole('button', { name: /^save$/i }).click();
+    await expect.poll(() => page.getByRole('alert').textContent()).toContain('Someone else changed this job since you opened it.');
+    await screenshot(page, 'job-details-stale');
+    await page.getByRole('button', { name: 'Reload' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Renamed in another tab' }).count()).toBeGreaterThan(0);
   });
 
   it('shows a viewer no edit controls, and the API refuses the viewer an edit', async () => {

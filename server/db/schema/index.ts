@@ -11,3 +11,4 @@ export { outbox } from './outbox';
 export { mailTokens } from './mail-tokens';
 export { shopFittings } from './shop-fittings';
 export { attachments } from './attachments';
+export { signInAttempts, signInAddresses } from './sign-in-attempts';

@@ -58,10 +58,10 @@ describe('SignIn', () => {
     expect(page.querySelector('[role="alert"]')?.textContent).toContain('That e-mail address and password do not match an account.');
   });
 
-  it('asks the user to wait after too many tries', async () => {
-    await submit({ error: { code: 'too-many-tries', message: 'Too many sign-in attempts.' } }, 429);
+  it('says how long to wait after too many tries, in the server’s words', async () => {
+    await submit({ error: { code: 'sign-in-wait', message: 'Too many sign-in attempts in a short time. Wait 4 seconds and try again.' } }, 429);
 
-    expect(page.querySelector('[role="alert"]')?.textContent).toContain('Too many sign-in tries. Wait a few minutes');
+    expect(page.querySelector('[role="alert"]')?.textContent).toContain('Wait 4 seconds and try again.');
   });
 
   it('goes where the guard was sending the user, and never off the site', async () => {

@@ -74,7 +74,6 @@ export class SignIn {
 
 function signInFailure(error: unknown): string {
   if (error instanceof ApiProblem && error.status === 401) return 'That e-mail address and password do not match an account.';
-  if (error instanceof ApiProblem && error.status === 429)
-    return 'Too many sign-in tries. Wait a few minutes before trying again.';
+  // A 429 says how long to wait: seconds while the server only slows the tries, minutes once it refuses them.
   return describeError(error);
 }

@@ -6,7 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { describeError } from '../core/api-problem';
+import { describeError, isStaleVersion } from '../core/api-problem';
 import { fieldMessage, FieldWording, notBlank, showFieldProblems } from '../core/form-messages';
 
 /** What the form gives back: an empty client is null, notes only when the form shows them. */
@@ -33,7 +33,10 @@ const wording: Record<JobField, FieldWording> = {
   notes: { label: 'notes' },
 };
 
-/** Creates a job, or changes its name, client and notes. */
+/**
+ * Creates a job, or changes its name, client and notes. Closes with what `save` gave, or with `reload`
+ * when, after a 409, the user asks for the job as it now is.
+ */
 @Component({
   selector: 'bw-job-form-dialog',
   imports: [
@@ -60,6 +63,8 @@ export class JobFormDialog {
   });
   protected readonly saving = signal(false);
   protected readonly failure = signal<string | null>(null);
+  /** Someone else changed the job since this form was filled from it (a 409): saving again would need their change first. */
+  protected readonly stale = signal(false);
 
   protected message(field: JobField): string {
     return fieldMessage(this.form.controls[field], wording[field]);
@@ -81,9 +86,14 @@ export class JobFormDialog {
       });
       this.dialogRef.close(saved);
     } catch (error) {
-      if (!showFieldProblems(this.form, error)) this.failure.set(describeError(error));
+      if (isStaleVersion(error)) this.stale.set(true);
+      else if (!showFieldProblems(this.form, error)) this.failure.set(describeError(error));
     } finally {
       this.saving.set(false);
     }
+  }
+
+  protected reload(): void {
+    this.dialogRef.close('reload');
   }
 }

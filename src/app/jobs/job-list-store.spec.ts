@@ -78,7 +78,7 @@ describe('JobListStore', () => {
 
     const archiving = store.updateJob(aJobSummary(), { archived: true });
     const patch = http.expectOne({ method: 'PATCH', url: '/api/jobs/11' });
-    expect(patch.request.body).toEqual({ archived: true });
+    expect(patch.request.body).toEqual({ archived: true, version: 3 });
     patch.flush(aJobSummary({ archived: true }));
     await archiving;
 

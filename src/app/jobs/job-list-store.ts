@@ -38,7 +38,7 @@ export class JobListStore {
   }
 
   async updateJob(job: JobSummary, changes: JobChanges): Promise<JobSummary> {
-    const updated = await this.api.updateJob(job.id, changes);
+    const updated = await this.api.updateJob(job, changes);
     this.list.reload();
     return updated;
   }

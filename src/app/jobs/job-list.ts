@@ -16,7 +16,7 @@ import { firstValueFrom } from 'rxjs';
 import { JobSummary } from '../../../shared/api/contract';
 import { AuthStore } from '../auth/auth-store';
 import { Can } from '../auth/can';
-import { describeError } from '../core/api-problem';
+import { describeError, isStaleVersion } from '../core/api-problem';
 import { JobFormDialog, JobFormRequest } from './job-form-dialog';
 import { JobImportDialog } from './job-import-dialog';
 import { JobListStore } from './job-list-store';
@@ -83,7 +83,7 @@ export class JobList {
       withNotes: true,
       save: ({ name, client, notes }) => this.store.createJob({ name, client: client ?? undefined, notes }),
     });
-    if (job) this.offerToOpen(job, `Created “${job.name}”.`);
+    if (job && job !== 'reload') this.offerToOpen(job, `Created “${job.name}”.`);
   }
 
   protected async renameJob(job: JobSummary): Promise<void> {
@@ -94,7 +94,8 @@ export class JobList {
       withNotes: false,
       save: (values) => this.store.updateJob(job, values),
     });
-    if (renamed) this.snackBar.open(`Renamed to “${renamed.name}”.`, undefined, { duration: 4000 });
+    if (renamed === 'reload') this.store.reload();
+    else if (renamed) this.snackBar.open(`Renamed to “${renamed.name}”.`, undefined, { duration: 4000 });
   }
 
   protected async setArchived(job: JobSummary, archived: boolean): Promise<void> {
@@ -104,6 +105,8 @@ export class JobList {
       this.snackBar.open(`“${job.name}” is ${done}.`, undefined, { duration: 4000 });
     } catch (error) {
       this.snackBar.open(describeError(error), 'Dismiss');
+      // The list shows the job as it was; after a 409 it shows it as it now is.
+      if (isStaleVersion(error)) this.store.reload();
     }
   }
 
@@ -127,8 +130,8 @@ export class JobList {
       .subscribe(() => void this.router.navigate(['/jobs', job.id]));
   }
 
-  private async openJobForm(request: JobFormRequest): Promise<JobSummary | undefined> {
-    const ref = this.dialog.open<JobFormDialog, JobFormRequest, JobSummary>(JobFormDialog, {
+  private async openJobForm(request: JobFormRequest): Promise<JobSummary | 'reload' | undefined> {
+    const ref = this.dialog.open<JobFormDialog, JobFormRequest, JobSummary | 'reload'>(JobFormDialog, {
       data: request,
       width: '480px',
       maxWidth: 'calc(100vw - 32px)',

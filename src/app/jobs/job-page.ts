@@ -72,14 +72,15 @@ export class JobPage {
     this.snackBar.open(`Labels for ${count} ${count === 1 ? 'panel' : 'panels'}, 14 to an A4 sheet: the PDF is on its way to your downloads.`, undefined, { duration: 5000 });
   }
 
-  protected editDetails(): void {
+  protected async editDetails(): Promise<void> {
     const job = this.store.job();
     if (!job) return;
-    this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
+    const ref = this.dialog.open<JobFormDialog, JobFormRequest>(JobFormDialog, {
       data: { title: 'Job details', saveLabel: 'Save', job, withNotes: true, save: (values) => this.store.updateJob(values) },
       width: '520px',
       maxWidth: 'calc(100vw - 32px)',
     });
+    if ((await firstValueFrom(ref.afterClosed())) === 'reload') this.store.reload();
   }
 
   protected async addPanel(): Promise<void> {

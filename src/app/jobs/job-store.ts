@@ -49,9 +49,9 @@ export class JobStore {
     this.detail.reload();
   }
 
+  /** Rejects with a 409 ApiProblem when someone else changed the job since it was loaded. */
   async updateJob(changes: JobChanges): Promise<void> {
-    const job = this.requireJob();
-    await this.api.updateJob(job.id, changes);
+    await this.api.updateJob(this.requireJob(), changes);
     this.detail.reload();
   }
 

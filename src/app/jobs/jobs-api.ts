@@ -15,7 +15,8 @@ import {
 import { PanelStatus } from '../../../shared/model/job-document';
 
 export type JobCreate = z.input<typeof jobCreateBody>;
-export type JobChanges = z.input<typeof jobUpdateBody>;
+/** What the user changed; the API adds the version they saw. */
+export type JobChanges = Omit<z.input<typeof jobUpdateBody>, 'version'>;
 export type PanelFields = z.input<typeof panelFieldsBody>;
 
 export const jobsUrl = '/api/jobs';
@@ -35,8 +36,10 @@ export class JobsApi {
     return jobSummary.parse(await firstValueFrom(this.http.post(jobsUrl, body)));
   }
 
-  async updateJob(jobId: number, changes: JobChanges): Promise<JobSummary> {
-    return jobSummary.parse(await firstValueFrom(this.http.patch(jobUrl(jobId), changes)));
+  /** Sends the version the user saw; a job changed since answers 409. */
+  async updateJob(job: Pick<JobSummary, 'id' | 'version'>, changes: JobChanges): Promise<JobSummary> {
+    const body = { ...changes, version: job.version };
+    return jobSummary.parse(await firstValueFrom(this.http.patch(jobUrl(job.id), body)));
   }
 
   /** Uploads a job document; the events carry upload progress, the last one the new job. */

@@ -1,0 +1,34 @@
+import express from 'express';
+import request from 'supertest';
+import { describe, expect, it } from 'vitest';
+import { testConfig } from '../testing/test-app';
+import { securityHeaders } from './security-headers';
+
+const appFor = (env: 'development' | 'production' | 'test') => express().use(securityHeaders(testConfig({ env }))).get('/', (_req, res) => res.send('ok'));
+
+/** The policy as a map of directive to its sources. */
+function directives(header: string): Map<string, string[]> {
+  return new Map(header.split(';').map((d) => d.trim().split(/\s+/)).map(([name, ...sources]) => [name, sources]));
+}
+
+describe('security headers', () => {
+  // CSP Level 3 (W3C Working Draft): 'unsafe-inline' would let an injected <script> or on* handler run,
+  // frame-ancestors 'none' forbids every framing page (published).
+  it('send a content security policy without unsafe-inline or eval, refusing every framing page', async () => {
+    const res = await request(appFor('development')).get('/').expect(200);
+    const policy = directives(res.headers['content-security-policy']);
+    expect(policy.get('script-src')).toEqual(["'self'"]);
+    expect(policy.get('default-src')).toEqual(["'self'"]);
+    expect(policy.get('object-src')).toEqual(["'none'"]);
+    expect(policy.get('frame-ancestors')).toEqual(["'none'"]);
+    expect(policy.get('style-src')).toEqual(["'self'", expect.stringMatching(/^'nonce-[A-Za-z0-9+/]{22}==?'$/)]);
+    expect(res.headers['content-security-policy']).not.toMatch(/unsafe-inline|unsafe-eval/);
+  });
+
+  // RFC 6797 §6.1: the header is honoured only over HTTPS, which production runs behind (published).
+  it('ask for HTTPS only in production, which runs behind TLS', async () => {
+    expect((await request(appFor('production')).get('/')).headers['strict-transport-security']).toBe('max-age=31536000');
+    expect((await request(appFor('development')).get('/')).headers).not.toHaveProperty('strict-transport-security');
+    expect((await request(appFor('test')).get('/')).headers).not.toHaveProperty('strict-transport-security');
+  });
+});
