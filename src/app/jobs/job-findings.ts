@@ -3,8 +3,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import type { PanelRecord } from '../../../shared/api/contract';
 import { JobFindingsStore } from './job-findings-store';
-
-const ICONS = { error: 'error', warning: 'warning', note: 'info' } as const;
+import { SEVERITY_ICONS } from '../ui/severity-icons';
 
 /**
  * The findings of the whole job, panel by panel, each a link that opens the editor at its panel with the
@@ -20,7 +19,7 @@ export class JobFindings {
   private readonly store = inject(JobFindingsStore);
   readonly panels = input.required<readonly PanelRecord[]>();
 
-  protected readonly icons = ICONS;
+  protected readonly icons = SEVERITY_ICONS;
   protected readonly rows = computed(() => {
     const panels = new Map(this.panels().map((p) => [p.id, p]));
     return (this.store.value()?.findings ?? []).map((finding) => {

@@ -9,9 +9,8 @@ import { fixStaysOnPanel } from '../document/commands/apply-finding-fix';
 import { itemsArea } from '../document/items-area';
 import { selectionOf } from '../document/selection';
 import { EditorStore } from '../editor-store';
+import { SEVERITY_ICONS } from '../../ui/severity-icons';
 
-
-const ICONS = { error: 'error', warning: 'warning', note: 'info' } as const;
 
 /**
  * The shared checks' findings on this panel, worst first; a click selects what they concern, shows it and
@@ -29,7 +28,7 @@ export class FindingsList {
   /** The area to show, in mm, when a finding is chosen. */
   readonly showArea = output<Box>();
 
-  protected readonly icons = ICONS;
+  protected readonly icons = SEVERITY_ICONS;
   /** The finding the user opened (by what it is about), whose fixes are tried. */
   private readonly opened = signal<string | null>(null);
   protected readonly openedFinding = computed(() => {
