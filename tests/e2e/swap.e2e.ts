@@ -82,7 +82,7 @@ describe('the swap check in the browser', () => {
       // Runners: the rear screws 160 and 320 behind the front one on the 37 mm row (trade-reference §6, common practice).
       const left = rows.filter((r) => r['panel'] === 'drawer-base-left');
       expect(left.map((r) => r['x'])).toEqual(['197', '357', '197', '357', '197', '357']);
-      expect(rows.every((r) => r['bore'].includes('/rear-'))).toBe(true);
+      expect(rows.every((r) => r['bores'].includes('/rear-'))).toBe(true);
 
       await page.getByRole('button', { name: 'Apply swap…' }).click();
       const dialog = page.getByRole('alertdialog');
