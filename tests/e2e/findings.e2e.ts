@@ -9,7 +9,9 @@ async function openPanel(page: Page, job: string, panel: string): Promise<void> 
   await page.getByRole('link', { name: panel, exact: true }).click();
   await page.waitForURL(/\/panels\/\d+/);
   await page.locator('bw-panel-stage canvas').first().waitFor();
-  await page.getByRole('button', { name: /^Placements \(/ }).click();
+  const header = page.getByRole('button', { name: /^Placements \(/ });
+  if ((await header.getAttribute('aria-expanded')) !== 'true') await header.click();
+  await page.locator('bw-placement-list .placement').first().waitFor({ state: 'visible' });
 }
 
 /** Selects a placement from the list and types a new height into its y field. */
@@ -18,6 +20,13 @@ async function setHeight(page: Page, placement: string, y: number): Promise<void
   const field = page.locator('bw-properties-form input').nth(1);
   await field.fill(String(y));
   await field.press('Enter');
+}
+
+/** Saves the panel, unless autosave already has: a warning does not hold autosave back. */
+async function saved(page: Page): Promise<void> {
+  const save = page.getByRole('button', { name: 'Save', exact: true });
+  if (await save.isEnabled()) await save.click({ timeout: 2000 }).catch(() => undefined);
+  await expect.poll(() => page.locator('.save-state').innerText()).toContain('All changes saved');
 }
 
 /** Rings the stage draws for findings of this code, read from Konva's own node tree. */
@@ -47,9 +56,10 @@ describe('findings and their fixes in the browser', () => {
     await openPanel(page, 'Larch Lane kitchen', 'Wall unit, left side');
     await expect.poll(() => page.locator('bw-findings-list').innerText()).toContain('No findings');
     const pins = page.locator('bw-placement-list .placement', { hasText: 'Shelf pin' });
-    const pin = (await pins.first().locator('strong').innerText()).trim();
+    const pin = ((await pins.first().locator('strong').textContent()) ?? '').trim();
+    expect(pin).not.toBe('');
     const plates = page.locator('bw-placement-list .placement', { hasText: 'Mounting plate' });
-    const [, plateY] = /, y ([\d.]+)/.exec(await plates.first().innerText()) ?? [];
+    const [, plateY] = /, y ([\d.]+)/.exec((await plates.first().textContent()) ?? '') ?? [];
     expect(Number(plateY)).toBeGreaterThan(0);
 
     // The plate's upper screw hole is 16 mm above its anchor (two holes 32 mm apart, trade-reference §2).
@@ -83,13 +93,13 @@ describe('findings and their fixes in the browser', () => {
     await signIn(page, baseUrl, 'designer@greyfield.example');
     await openPanel(page, 'Loft study bookcase', 'Flap unit, left, left side');
     const pins = page.locator('bw-placement-list .placement', { hasText: 'Shelf pin' });
-    const pin = (await pins.first().locator('strong').innerText()).trim();
-    const [, pinY] = /, y ([\d.]+)/.exec(await pins.first().innerText()) ?? [];
+    const pin = ((await pins.first().locator('strong').textContent()) ?? '').trim();
+    expect(pin).not.toBe('');
+    const [, pinY] = /, y ([\d.]+)/.exec((await pins.first().textContent()) ?? '') ?? [];
     // One pitch down on the left side only: the other side no longer mirrors it (a warning, so autosave goes on).
     await setHeight(page, pin, Number(pinY) - 32);
     await expect.poll(() => findingOf(page, 'sides-mismatched').count()).toBe(1);
-    await page.getByRole('button', { name: 'Save', exact: true }).click();
-    await expect.poll(() => page.locator('.save-state').innerText()).toContain('All changes saved');
+    await saved(page);
 
     await page.goBack();
     await page.waitForURL(/\/jobs\/\d+$/);
@@ -108,7 +118,6 @@ describe('findings and their fixes in the browser', () => {
     const item = itemOf(page, 'sides-mismatched');
     await item.getByRole('button', { name: 'Apply fix' }).first().click();
     await expect.poll(() => findingOf(page, 'sides-mismatched').count()).toBe(0);
-    await page.getByRole('button', { name: 'Save', exact: true }).click();
-    await expect.poll(() => page.locator('.save-state').innerText()).toContain('All changes saved');
+    await saved(page);
   });
 });
