@@ -10,26 +10,15 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { XSRF_COOKIE, XSRF_HEADER } from '../../server/auth/csrf';
 import { DEMO_PASSWORD } from '../../server/demo/greyfield-people';
+import { freePort } from '../free-port';
 
 const ROUNDS = Number(process.env.CRASH_ROUNDS ?? 20);
 const WORKERS = 6;
 const root = path.resolve(import.meta.dirname, '../..');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
-}
 
 /** A browser's view of the API: one cookie jar, the XSRF token echoed on writes. */
 class Client {
