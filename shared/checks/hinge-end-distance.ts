@@ -54,7 +54,7 @@ function finding(site: PanelSite, cup: Cup, end: End): DraftFinding | null {
   const message = `Hinge ${id}'s cup is ${mm(distance)} from ${where} of ${panel.role} ${panel.id}; the outer cups sit 76 to 100 mm from the ends.`;
   const remedy = {
     candidates: () => [moves(site, cup, fromEnd, end)],
-    advice: `Move the hinge and its plate together so the cup sits 76 to 100 mm from ${where}.`,
+    advice: `Move the hinge and the plate it meets together so the cup sits 76 to 100 mm from ${where}; where no system hole for the plate allows that height, keep the nearest and check it against the hinge maker's data.`,
   };
   return report(site, 'hinge-end-distance', 'warning', message, [], remedy, [id]);
 }
