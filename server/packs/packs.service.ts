@@ -56,7 +56,7 @@ async function panelContext(db: Database, panelId: number, date: Date) {
 /** A panel's drilling map of one face as SVG, full size; face B only when the panel has face B holes. */
 export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date): Promise<DownloadFile> {
   const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
-  const index = mapViews(panel, drilling.holes).findIndex((view) => view.face === face);
+  const index = mapViews(drilling).findIndex((view) => view.face === face);
   if (index < 0) throw new AppError(404, 'no-such-map', `Panel ${panelId} has no bores on face ${face}, so it has no drilling map of that face.`);
   const newWindow = await svgWindows();
   const svg = drawingToSvg(panelDrillingMaps(ctx, drilling)[index], newWindow());

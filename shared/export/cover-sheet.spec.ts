@@ -82,7 +82,7 @@ describe('cover sheet', () => {
     // 44 system holes with the plate, pin and runner screws in them drilled once, the runner's own and the edge pilot (Ø5).
     expect(flat).toContain('Holes by diameter: Ø35: 2, Ø15: 1, Ø8: 8, Ø7: 1, Ø5: 47.');
     expect(flat).toContain('Hardware to fetch: Cam connector, Ø15 cam: 1; Cup hinge, full overlay, 45/9.5: 2; Mounting plate, 0 mm: 2;');
-    expect(flat).toContain('Sides: Base unit, left side: LEFT side (seen from the front).');
+    expect(flat).toContain('Handed panels: Base unit, left side: LEFT side (seen from the front); Base unit, door: hinged on the LEFT (seen from the front).');
     expect(flat).toContain('Panels in no carcass 1 panel, 4 template sheets to print on A4. Holes by diameter: Ø8: 1. Hardware to fetch: none.');
   });
 

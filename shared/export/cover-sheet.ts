@@ -86,10 +86,10 @@ function readMeFirst(flow: PageFlow, input: CoverInput, errors: number): void {
       ? `Read the findings below. This pack contains errors: a panel whose files say "HAS ERRORS" in the title block is not to be drilled until the error is put right.`
       : 'Read the safety notes and the findings below.',
     `Print each panel's template file on ${paper} at actual size (100 %, no "fit to page"). Its first sheet is the panel's information (title block, bore table, legend); measure the 100 mm bars on every sheet before drilling from it.`,
-    `Print "${files.labels}" and stick each label on its panel: it names the panel, the face up and, on a side, LEFT or RIGHT as seen from the front. Never drill two sides of one hand.`,
+    `Print "${files.labels}" and stick each label on its panel: it names the panel, the face up and, on a side, LEFT or RIGHT as seen from the front, and on a door the side it is hinged on. Never drill two sides of one hand.`,
     `Fetch the hardware below from stores, carcass by carcass: shelf pins are counted four per adjustable shelf, not one per hole.`,
     `Drill each panel face up as its label and templates say, the templates' reference edge (x = 0) on the panel's reference edge. For a machine, load the panel's DXF; its layers are named as "${files.readme}" explains.`,
-    `Check every hole against "${files.schedule}" (each hole once, by its key, in the panel's frame seen from face A), then mark the panel drilled on the bench page.`,
+    `Check every hole against "${files.schedule}" (each hole once, by its key: x from the reference edge, y from the lower edge), then mark the panel drilled on the bench page.`,
     `"${files.manifest}" lists every file with its SHA-256: a file that does not match it has been changed since the pack was made.`,
   ];
   flow.heading('Read me first: the order of work');
@@ -108,7 +108,7 @@ function contents(flow: PageFlow, input: CoverInput): void {
     const column = group.id === undefined ? (hardware.carcasses.length > ctx.job.carcasses.length ? hardware.carcasses.length - 1 : -1) : i;
     const sheets = panels.reduce((n, p) => n + p.sheets, 0);
     const fetch = hardware.lines.filter((l) => (l.perCarcass[column] ?? 0) > 0).map((l) => `${l.name}: ${l.perCarcass[column]}`);
-    const sides = panels.flatMap(({ drilling }) => {
+    const hands = panels.flatMap(({ drilling }) => {
       const hand = handText(drilling.panel, drilling.hand);
       return hand ? [`${drilling.panel.name}: ${hand}`] : [];
     });
@@ -116,7 +116,7 @@ function contents(flow: PageFlow, input: CoverInput): void {
     flow.paragraph(`${plural(panels.length, 'panel')}, ${plural(sheets, 'template sheet')} to print on ${PAPER[input.paper].name}.`, 3.2, INK, 4);
     flow.paragraph(`Holes by diameter: ${holesByDiameter(panels)}.`, 3.2, INK, 4);
     flow.paragraph(`Hardware to fetch: ${fetch.length > 0 ? fetch.join('; ') : 'none'}.`, 3.2, INK, 4);
-    if (sides.length > 0) flow.paragraph(`Sides: ${sides.join('; ')}.`, 3.2, MUTED, 4);
+    if (hands.length > 0) flow.paragraph(`Handed panels: ${hands.join('; ')}.`, 3.2, MUTED, 4);
     flow.gap(2);
   });
   const labels = ctx.job.panels.length;

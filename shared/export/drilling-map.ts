@@ -6,7 +6,7 @@ import { boreGroups, boreTable, type BoreGroup } from './map-bore-table';
 import { ordinateDimensions, ordinateReach } from './map-dimensions';
 import { legend } from './map-legend';
 import { figureReach, panelFigure } from './map-panel';
-import { mapViews, referenceSide, type MapView } from './map-view';
+import { mapViews, type MapView } from './map-view';
 import { INK } from './palette';
 import type { PanelDrilling } from './panel-drilling';
 import { titleBlock } from './title-block';
@@ -38,7 +38,7 @@ function viewNotes(view: MapView): string[] {
  */
 export function orientationText(drilling: PanelDrilling, view: MapView): string {
   const hand = handText(drilling.panel, drilling.hand);
-  return [`Face ${faceText(drilling.panel.role, view.face)} up`, `reference edge (x = 0) at the ${referenceSide(view.face)}`, ...(hand ? [hand] : [])].join(' · ');
+  return [`Face ${faceText(drilling.panel.role, view.face)} up`, `reference edge (x = 0) at the ${view.referenceAt}`, ...(hand ? [hand] : [])].join(' · ');
 }
 
 /**
@@ -124,5 +124,5 @@ function drillingMap(ctx: ExportContext, drilling: PanelDrilling, view: MapView)
 
 /** The drilling maps of a panel: face A's, and face B's when it has holes of its own. */
 export function panelDrillingMaps(ctx: ExportContext, drilling: PanelDrilling): Drawing[] {
-  return mapViews(drilling.panel, drilling.holes).map((view) => drillingMap(ctx, drilling, view));
+  return mapViews(drilling).map((view) => drillingMap(ctx, drilling, view));
 }

@@ -1,7 +1,7 @@
 import { PDFName, PDFString } from 'pdf-lib';
 import QRCode from 'qrcode';
 import { panelBores } from '../layout/panel-layout';
-import { handText, sideHands } from '../layout/side-hand';
+import { handText, panelHands } from '../layout/side-hand';
 import type { Panel } from '../model/job-document';
 import { text, translate, type Drawing, type RectShape, type Shape } from './drawing';
 import { carcassName, dateText, faceName, materialName, type ExportContext } from './export-context';
@@ -138,7 +138,7 @@ export function labelSheets({ ctx, panels, link, paper = 'a4' }: LabelsInput): D
   if (panels.length === 0) throw new Error('No panels to label: pass at least one panel');
   const { width, height } = PAPER[paper];
   const sheet = LABEL_SHEETS[paper];
-  const hands = sideHands(ctx.job);
+  const hands = panelHands(ctx.job);
   const sheets = Math.ceil(panels.length / LABELS_PER_SHEET);
   const drawings: Drawing[] = [];
   for (let n = 0; n < sheets; n++) {

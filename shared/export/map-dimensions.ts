@@ -73,7 +73,7 @@ export function ordinateReach(view: MapView, figure: Reach): Reach {
   const { xs, ys } = ordinateValues(view);
   const reach = { ...figure };
   reach.bottom += 1 + columnDepth(xs) + 5;
-  if (view.face === 'A') reach.left += 1 + columnDepth(ys);
+  if (view.referenceAt === 'left') reach.left += 1 + columnDepth(ys);
   else reach.right += 1 + columnDepth(ys);
   reach.top += 5;
   return reach;
@@ -93,7 +93,7 @@ export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shap
     outward: 1,
     along: 'x',
   });
-  const onLeft = view.face === 'A';
+  const onLeft = view.referenceAt === 'left';
   const beside = ordinateColumn({
     marks: ys.map((value) => ({ value, at: viewPoint(view, 0, value).y })),
     start: onLeft ? -figure.left - 1 : W + figure.right + 1,

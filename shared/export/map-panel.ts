@@ -24,11 +24,11 @@ export interface PanelFigure {
 
 const EDGES: readonly Edge[] = ['x0', 'x1', 'y0', 'y1'];
 
-/** The side of the sheet an edge lies on in this view: face B's map is mirrored left to right. */
+/** The side of the sheet an edge lies on in this view: x0, the reference edge, where the view puts it. */
 function sheetSide(view: MapView, edge: Edge): keyof Reach {
   if (edge === 'y0') return 'bottom';
   if (edge === 'y1') return 'top';
-  const left = (edge === 'x0') === (view.face === 'A');
+  const left = (edge === 'x0') === (view.referenceAt === 'left');
   return left ? 'left' : 'right';
 }
 
@@ -79,11 +79,12 @@ function hiddenPath(view: MapView, bore: EdgeHole): Shape {
 export function panelFigure(view: MapView): PanelFigure {
   const { width: W, height: H } = view.panel;
   const shapes: Shape[] = [{ kind: 'rect', x: 0, y: 0, width: W, height: H, stroke: { color: INK, width: 0.5 } }];
-  const refX = view.face === 'A' ? 0 : W;
+  const onLeft = view.referenceAt === 'left';
+  const refX = onLeft ? 0 : W;
   shapes.push(line(refX, 0, refX, H, { color: INK, width: 1.2 }));
-  const inward = view.face === 'A' ? 4.5 : -2.5;
+  const inward = onLeft ? 4.5 : -2.5;
   shapes.push(text(refX + inward, H - 4, 'REFERENCE EDGE (x = 0)', 2.8, INK, 'start', true));
-  shapes.push(text(view.face === 'A' ? 9 : W - 9, H - 2, 'lower edge (y = 0)', 2.4, MUTED, view.face === 'A' ? 'start' : 'end'));
+  shapes.push(text(onLeft ? 9 : W - 9, H - 2, 'lower edge (y = 0)', 2.4, MUTED, onLeft ? 'start' : 'end'));
   for (const bore of view.edgeBores) shapes.push(hiddenPath(view, bore));
   for (const bore of view.faceBores) {
     const at = viewPoint(view, bore.x, bore.y);

@@ -1,7 +1,7 @@
 import type { Catalog } from '../catalog/fitting';
 import type { Finding } from '../checks/finding';
 import { panelBores } from '../layout/panel-layout';
-import { sideHands, type SideHand } from '../layout/side-hand';
+import { panelHands, type SideHand } from '../layout/side-hand';
 import type { JobDocument, Panel } from '../model/job-document';
 import { panelHoles, type PanelHole } from './panel-holes';
 
@@ -12,7 +12,7 @@ export interface PanelDrilling {
   holes: PanelHole[];
   /** Errors the checks found on this panel: its files say "has errors" when there are any. */
   errors: number;
-  /** Which side of its carcass a side panel is, when the job tells it. */
+  /** Which side of its carcass a side panel is, or a door is hinged on, when the job tells it. */
   hand?: SideHand;
 }
 
@@ -31,12 +31,12 @@ function drillingOf(job: JobDocument, catalog: Catalog, panel: Panel, errors: Re
 
 /** Lays out one panel of a job with the errors among `findings` that concern it (a download of one panel's file). */
 export function panelDrilling(job: JobDocument, catalog: Catalog, panel: Panel, findings: readonly Finding[]): PanelDrilling {
-  return drillingOf(job, catalog, panel, errorsByPanel(findings), sideHands(job));
+  return drillingOf(job, catalog, panel, errorsByPanel(findings), panelHands(job));
 }
 
 /** Lays out every panel of a job, in the document's order, with the errors among `findings` that concern each. */
 export function jobDrilling(job: JobDocument, catalog: Catalog, findings: readonly Finding[]): PanelDrilling[] {
   const errors = errorsByPanel(findings);
-  const hands = sideHands(job);
+  const hands = panelHands(job);
   return job.panels.map((panel) => drillingOf(job, catalog, panel, errors, hands));
 }

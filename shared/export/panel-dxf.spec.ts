@@ -35,14 +35,23 @@ describe('panel DXF', () => {
   });
 
   it('has a CIRCLE for every face hole, its centre and radius those of the hole, on its face, diameter, depth and purpose layer', () => {
-    for (const index of [0, 2]) {
-      const { bores, parsed } = read(index);
+    // The left side is drawn in the document's frame; the door hung on it, whose back is face A, is hinged on
+    // the left seen from the front and so on the right seen from behind (common practice, handed parts):
+    // its reference edge and every x then read from the right.
+    for (const [index, onRight] of [
+      [0, false],
+      [2, true],
+    ] as const) {
+      const { panel, bores, parsed } = read(index);
+      const reference = parsed.entities.find((e) => e.layer === 'REFERENCE_EDGE' && e.type === 'LINE')!;
+      expect(reference.vertices!.map((v) => v.x)).toEqual(onRight ? [panel.width, panel.width] : [0, 0]);
+      const drawnX = (x: number) => (onRight ? panel.width - x : x);
       const circles = parsed.entities.filter((e) => e.type === 'CIRCLE');
       const faceBores = bores.filter((b) => b.kind === 'face');
       expect(circles).toHaveLength(faceBores.length);
       for (const bore of faceBores) {
         const layer = holeLayer(bore.face, bore.diameter, bore.through ? 'through' : bore.depth, bore.purpose);
-        const match = circles.find((c) => c.layer === layer && Math.abs(c.center!.x - bore.x) < 0.001 && Math.abs(c.center!.y - bore.y) < 0.001);
+        const match = circles.find((c) => c.layer === layer && Math.abs(c.center!.x - drawnX(bore.x)) < 0.001 && Math.abs(c.center!.y - bore.y) < 0.001);
         expect(match, `circle of ${bore.id}`).toBeDefined();
         expect(Math.abs(match!.radius! - bore.diameter / 2)).toBeLessThan(0.001);
       }

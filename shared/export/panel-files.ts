@@ -36,7 +36,7 @@ export interface PanelFileOptions extends PdfTools {
 export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: string, options: PanelFileOptions): ExportFile[] {
   const { panel } = drilling;
   let maps: Drawing[] | undefined;
-  const faces = mapViews(panel, drilling.holes).map((view) => view.face);
+  const faces = mapViews(drilling).map((view) => view.face);
   const svgs: ExportFile[] = faces.map((face, i) => ({
     name: `${base} face ${face}.svg`,
     label: `${panel.name}: drilling map, face ${face}`,

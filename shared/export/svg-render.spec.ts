@@ -88,6 +88,38 @@ describe('drilling map as SVG', () => {
     expectCircles(parse(faceB), onB, true);
   });
 
+  it('draws a right side as its face is truly seen: the left side’s map turned over, the reference edge on the right', () => {
+    // A carcass's two sides are mirror images (trade-reference §8a, common practice): the same document
+    // coordinates, x from the front edge and y from the lower edge, lie on opposite hands. Looking at a left
+    // side's inside face the front edge is on the left; at a right side's, on the right. A template drawn
+    // the left side's way for a right side lines up with the panel only upside down.
+    const right = exportContext(exportJob());
+    right.job.panels[0].name = 'Base unit, right side';
+    const rightDrilling = jobDrilling(right.job, right.catalog, [])[0];
+    expect(rightDrilling.hand?.hand).toBe('right');
+    const [rightA, rightB] = panelDrillingMaps(right, rightDrilling).map((map) => drawingToSvg(map, createSVGWindow()));
+    expectCircles(parse(rightA), holes.filter((b): b is FaceHole => b.kind === 'face' && b.face === 'A'), true);
+    expectCircles(parse(rightB), holes.filter((b): b is FaceHole => b.kind === 'face' && b.face === 'B'), false);
+    const says = (svg: string) => [...parse(svg).getElementsByTagName('text')].map((t) => t.textContent ?? '').join(' | ');
+    expect(says(rightA)).toContain('reference edge (x = 0) at the right');
+    expect(says(rightB)).toContain('reference edge (x = 0) at the left');
+    expect(says(faceA)).toContain('reference edge (x = 0) at the left');
+  });
+
+  it('draws a door hung on the left side with its hinge edge on the right: its face A is its back, seen from inside', () => {
+    // Common practice (geometry of handed parts): a door hinged on the left as seen from the front has its
+    // hinge edge on the right when its back is looked at.
+    const door = jobDrilling(ctx.job, ctx.catalog, []).find((d) => d.panel.role === 'door')!;
+    expect(door.hand?.hand).toBe('left');
+    const svg = drawingToSvg(panelDrillingMaps(ctx, door)[0], createSVGWindow());
+    const texts = [...parse(svg).getElementsByTagName('text')].map((t) => t.textContent ?? '').join(' | ');
+    expect(texts).toContain('reference edge (x = 0) at the right');
+    expect(texts).toContain('hinged on the LEFT (seen from the front)');
+    const rect = [...parse(svg).getElementsByTagName('rect')].find((r) => num(r, 'width') === door.panel.width && num(r, 'height') === door.panel.height)!;
+    const cups = [...parse(svg).getElementsByTagName('circle')].filter((c) => num(c, 'r') === 17.5);
+    expect(cups.map((c) => num(c, 'cx') - num(rect, 'x'))).toEqual([door.panel.width - 21.5, door.panel.width - 21.5]);
+  });
+
   it('writes names as text, never as markup', () => {
     const doc = parse(faceA);
     expect(doc.getElementsByTagName('script')).toHaveLength(0);

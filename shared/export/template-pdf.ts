@@ -32,7 +32,7 @@ function tilePlan(view: MapView, paper: PaperName): TilePlan {
 
 /** Lays out the templates of each map of a panel on the paper: what the PDF prints. */
 export function panelTemplates(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): MapTemplate[] {
-  return mapViews(drilling.panel, drilling.holes).map((view) => {
+  return mapViews(drilling).map((view) => {
     const figure = mapFigure(view);
     const plan = tilePlan(view, paper);
     const drawing: Drawing = {
@@ -54,7 +54,7 @@ export function templatePageCount(templates: readonly Pick<MapTemplate, 'info' |
 /** How many pages a panel's template file will have, counted without drawing its figures: for the cover sheet. */
 export function templateSheetCount(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): number {
   return templatePageCount(
-    mapViews(drilling.panel, drilling.holes).map((view) => {
+    mapViews(drilling).map((view) => {
       const plan = tilePlan(view, paper);
       return { plan, info: templateInfo(ctx, drilling, view, plan, paper) };
     }),

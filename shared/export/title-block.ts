@@ -38,7 +38,7 @@ export function titleBlock(ctx: ExportContext, drilling: PanelDrilling, face: Fa
     { label: 'Date', value: dateText(ctx.date) },
     { label: 'Version', value: version === undefined ? 'from a job file' : `panel version ${version}` },
     { label: 'Made by', value: `${ctx.generator.name} ${ctx.generator.version}` },
-    { label: 'Side', value: handText(panel, drilling.hand) ?? `not a side (${panel.role})`, span: 2 },
+    { label: 'Hand', value: handText(panel, drilling.hand) ?? `none told (${panel.role})`, span: 2 },
     { label: 'Checks', value: checksText(drilling), span: 3, color: drilling.errors > 0 ? ERROR_RED : INK },
   ];
   const frame = { color: INK, width: 0.35 };

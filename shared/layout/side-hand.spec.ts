@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { makeJob, makePanel } from '../testing/make-job';
 import { planned } from '../testing/planned-carcass';
-import { handText, sideHands } from './side-hand';
+import { doorHands, handText, sideHands } from './side-hand';
 
 const box = { id: 'box', name: 'Box', width: 600, height: 720, depth: 560, material: 'pb18' };
 
@@ -53,5 +53,24 @@ describe('sideHands', () => {
     expect(hands.size).toBe(0);
     expect(handText(job.panels[0], undefined)).toBe('side not told left or right: mark it');
     expect(handText(job.panels[2], undefined)).toBeUndefined();
+  });
+
+  it('gives a door the hand of the side it hangs on, and none when it hangs on no told side', () => {
+    // A door's hinge edge is on the side it hangs on (design.md §3: a door's x runs from its hinge edge).
+    const job = makeJob(
+      [
+        makePanel('l', { name: 'Left side', carcass: 'box' }),
+        makePanel('r', { name: 'Right side', carcass: 'box' }),
+        makePanel('d1', { name: 'Door', role: 'door', carcass: 'box', hang: { on: ['r'], dy: 0 } }),
+        makePanel('d2', { name: 'Door', role: 'door', carcass: 'box' }),
+        makePanel('d3', { name: 'Door', role: 'door', carcass: 'box', hang: { on: ['l', 'r'], dy: 0 } }),
+      ],
+      { carcasses: [box] },
+    );
+    const hands = doorHands(job, sideHands(job));
+    expect(hands.get('d1')).toEqual({ hand: 'right', why: 'it hangs on the right side' });
+    expect(hands.has('d2')).toBe(false);
+    expect(hands.has('d3')).toBe(false);
+    expect(handText(job.panels[2], hands.get('d1'))).toBe('hinged on the RIGHT (seen from the front)');
   });
 });

@@ -60,8 +60,33 @@ export function sideHands(job: JobDocument): Map<string, SideHand> {
   return hands;
 }
 
-/** A side's hand as the bench reads it: `LEFT side (seen from the front)`, or a word to mark it when unknown; nothing for other panels. */
+/**
+ * The hand of every door that hangs on sides of one told hand: a door's hinge edge (its x = 0) is on the side
+ * it hangs on, so a door hung on the left side is hinged on the left as seen from the front.
+ */
+export function doorHands(job: JobDocument, sides: ReadonlyMap<string, SideHand>): Map<string, SideHand> {
+  const hands = new Map<string, SideHand>();
+  for (const door of job.panels.filter((p) => p.role === 'door')) {
+    const told = new Set((door.hang?.on ?? []).flatMap((id) => sides.get(id)?.hand ?? []));
+    if (told.size !== 1) continue;
+    const [hand] = told;
+    hands.set(door.id, { hand, why: `it hangs on the ${hand} side` });
+  }
+  return hands;
+}
+
+/** The hands of a job's sides and of the doors hung on them. */
+export function panelHands(job: JobDocument): Map<string, SideHand> {
+  const sides = sideHands(job);
+  return new Map([...sides, ...doorHands(job, sides)]);
+}
+
+/**
+ * A panel's hand as the bench reads it: `LEFT side (seen from the front)`, a word to mark a side when unknown,
+ * `hinged on the LEFT (seen from the front)` for a door whose hand is known; nothing for other panels.
+ */
 export function handText(panel: Panel, hand: SideHand | undefined): string | undefined {
+  if (panel.role === 'door') return hand ? `hinged on the ${hand.hand.toUpperCase()} (seen from the front)` : undefined;
   if (panel.role !== 'side') return undefined;
   return hand ? `${hand.hand.toUpperCase()} side (seen from the front)` : 'side not told left or right: mark it';
 }

@@ -39,17 +39,29 @@ const jsdomModule = 'jsdom';
 const { JSDOM } = (await import(jsdomModule)) as { JSDOM: new (html: string) => { window: { DOMParser: new () => { parseFromString(text: string, type: string): { documentElement: XmlElement } } } } };
 const xml = new new JSDOM('').window.DOMParser();
 
-/** Where a point of a drawing lies in the panel's frame, from the outline's top left corner (ox, oy) on it. */
-function fromDrawing(panel: Panel, face: string, ox: number, oy: number, cx: number, cy: number, r: number): { face: string; x: number; y: number } | { edge: string; at: number; z: number } {
+/** Where a drawing says the reference edge lies: the one words every map and template page carries. */
+function referenceAtIn(text: string): 'left' | 'right' {
+  const said = /reference edge \(x = 0\) at the (left|right)/.exec(text);
+  expect(said, 'a drawing that says where its reference edge is').not.toBeNull();
+  return said![1] as 'left' | 'right';
+}
+
+/**
+ * Where a point of a drawing lies in the panel's frame, from the outline's top left corner (ox, oy) on it and
+ * the side of the sheet the drawing says the reference edge is on.
+ */
+function fromDrawing(panel: Panel, face: string, referenceAt: 'left' | 'right', ox: number, oy: number, cx: number, cy: number, r: number): { face: string; x: number; y: number } | { edge: string; at: number; z: number } {
   const { width: W, height: H } = panel;
   const u = cx - ox;
   const v = cy - oy;
+  const x = referenceAt === 'left' ? u : W - u;
+  const [leftEdge, rightEdge] = referenceAt === 'left' ? ['x0', 'x1'] : ['x1', 'x0'];
   // Outside the outline: an edge strip, face A's side next to the panel, z running away from it.
-  if (u < -r + 0.001 && v > 0 && v < H) return { edge: 'x0', at: H - v, z: -u - STRIP_GAP };
-  if (u > W + r - 0.001 && v > 0 && v < H) return { edge: 'x1', at: H - v, z: u - W - STRIP_GAP };
-  if (v < -r + 0.001) return { edge: 'y1', at: u, z: -v - STRIP_GAP };
-  if (v > H + r - 0.001) return { edge: 'y0', at: u, z: v - H - STRIP_GAP };
-  return { face, x: face === 'A' ? u : W - u, y: H - v };
+  if (u < -r + 0.001 && v > 0 && v < H) return { edge: leftEdge, at: H - v, z: -u - STRIP_GAP };
+  if (u > W + r - 0.001 && v > 0 && v < H) return { edge: rightEdge, at: H - v, z: u - W - STRIP_GAP };
+  if (v < -r + 0.001) return { edge: 'y1', at: x, z: -v - STRIP_GAP };
+  if (v > H + r - 0.001) return { edge: 'y0', at: x, z: v - H - STRIP_GAP };
+  return { face, x, y: H - v };
 }
 
 /** The SVG maps: each circle of a hole mark with its centre, its radius and the depth its label gives. */
@@ -60,29 +72,38 @@ function svgHoles(panel: Panel, files: Map<string, Uint8Array>, paths: string[])
     const doc = xml.parseFromString(new TextDecoder().decode(files.get(path)), 'image/svg+xml');
     const outline = [...doc.documentElement.getElementsByTagName('rect')].find((r) => Number(r.getAttribute('width')) === panel.width && Number(r.getAttribute('height')) === panel.height)!;
     const [ox, oy] = [Number(outline.getAttribute('x')), Number(outline.getAttribute('y'))];
+    const referenceAt = referenceAtIn([...doc.documentElement.getElementsByTagName('text')].map((t) => t.textContent).join(' '));
     for (const g of [...doc.documentElement.getElementsByTagName('g')].filter((g) => g.getAttribute('data-hole') !== null)) {
       const circle = g.getElementsByTagName('circle')[0];
       const label = g.getElementsByTagName('text')[0].textContent!;
       const depth = / THRU$/.test(label) ? 'THRU' : deep(label.slice(1));
       const r = Number(circle.getAttribute('r'));
-      const at = fromDrawing(panel, face, ox, oy, Number(circle.getAttribute('cx')), Number(circle.getAttribute('cy')), r);
+      const at = fromDrawing(panel, face, referenceAt, ox, oy, Number(circle.getAttribute('cx')), Number(circle.getAttribute('cy')), r);
       holes.push('edge' in at ? edgeHole(at.edge, at.at, at.z, 2 * r, depth) : faceHole(at.face, at.x, at.y, 2 * r, depth));
     }
   }
   return holes;
 }
 
-/** The DXF: each face hole a CIRCLE, each edge hole a rectangle with its words; face and depth from the layer name. */
-function dxfHoles(text: string): Hole[] {
+/**
+ * The DXF: each face hole a CIRCLE, each edge hole a rectangle with its words; face and depth from the layer
+ * name. The reference edge is the line on its own layer: at x = 0 of the drawing, or at the panel's width
+ * when the face is drawn with it on the right, x then reading leftward from it.
+ */
+function dxfHoles(panel: Panel, text: string): Hole[] {
   const { entities } = new DxfParser().parseSync(text) as unknown as { entities: { type: string; layer: string; center?: { x: number; y: number }; radius?: number; vertices?: { x: number; y: number }[]; text?: string }[] };
+  const reference = entities.find((e) => e.layer === 'REFERENCE_EDGE' && e.type === 'LINE') as unknown as { vertices: { x: number }[] };
+  const onRight = Math.abs(reference.vertices[0].x - panel.width) < 0.001;
+  expect(onRight || Math.abs(reference.vertices[0].x) < 0.001, `${panel.id}: the DXF's reference edge on an edge of the outline`).toBe(true);
+  const fromX = (x: number) => (onRight ? panel.width - x : x);
   const holes: Hole[] = [];
   for (const e of entities) {
     const layer = /^(FACE_(A|B)|EDGE_(X0|X1|Y0|Y1))-DIA_([\d.]+)-(DEPTH_([\d.]+)|THROUGH)-[A-Z_]+$/.exec(e.layer);
     if (!layer) continue;
     const depth = layer[6] === undefined ? 'THRU' : deep(layer[6]);
-    if (e.type === 'CIRCLE') holes.push(faceHole(layer[2], e.center!.x, e.center!.y, 2 * e.radius!, depth));
+    if (e.type === 'CIRCLE') holes.push(faceHole(layer[2], fromX(e.center!.x), e.center!.y, 2 * e.radius!, depth));
     if (e.type === 'LWPOLYLINE') {
-      const xs = e.vertices!.map((v) => v.x);
+      const xs = e.vertices!.map((v) => fromX(v.x));
       const ys = e.vertices!.map((v) => v.y);
       const edge = layer[3].toLowerCase();
       const along = edge === 'x0' || edge === 'x1' ? (Math.min(...ys) + Math.max(...ys)) / 2 : (Math.min(...xs) + Math.max(...xs)) / 2;
@@ -144,13 +165,14 @@ async function pdfHoles(panel: Panel, bytes: Uint8Array): Promise<{ drawn: strin
     }
     if (tiled || !/Row 1 of \d+, column 1 of \d+;/.test(text)) continue;
     tiled = true;
+    const referenceAt = referenceAtIn(text);
     const { paths, heightPt } = await readPdfPage(bytes, n);
     const outline = paths.find((p) => !p.curved && Math.abs(p.x1 - p.x0 - panel.width * PT) < 0.01 && Math.abs(p.y1 - p.y0 - panel.height * PT) < 0.01)!;
     expect(outline, `${panel.id}: the outline on page ${n}`).toBeDefined();
     const [ox, oy] = [outline.x0 / PT, (heightPt - outline.y1) / PT];
     for (const c of paths.filter((p) => p.curved)) {
       const r = (c.x1 - c.x0) / PT / 2;
-      const at = fromDrawing(panel, face, ox, oy, (c.x0 + c.x1) / 2 / PT, (heightPt - (c.y0 + c.y1) / 2) / PT, r);
+      const at = fromDrawing(panel, face, referenceAt, ox, oy, (c.x0 + c.x1) / 2 / PT, (heightPt - (c.y0 + c.y1) / 2) / PT, r);
       drawn.push('edge' in at ? `${at.edge} at ${r2(at.at)} z ${r2(at.z)} Ø${r2(2 * r)}` : `${at.face} ${r2(at.x)} ${r2(at.y)} Ø${r2(2 * r)}`);
     }
   }
@@ -179,7 +201,7 @@ async function expectAgreement(job: JobDocument): Promise<number> {
     const dxf = entry.files.find((p) => p.endsWith('.dxf'))!;
     const pdf = entry.files.find((p) => p.endsWith('.pdf'))!;
     const fromCsv = sorted(csvHoles(schedule.data, panel));
-    const fromDxf = sorted(dxfHoles(new TextDecoder().decode(files.get(dxf))));
+    const fromDxf = sorted(dxfHoles(panel, new TextDecoder().decode(files.get(dxf))));
     const fromSvg = sorted(svgHoles(panel, files, entry.files));
     const fromPdf = await pdfHoles(panel, files.get(pdf)!);
     expect(fromDxf, `${panel.id}: DXF against the hole schedule`).toEqual(fromCsv);
