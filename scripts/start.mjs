@@ -2,9 +2,10 @@
 // never built), then runs the server from its compiled bundle (scripts/server-bundle.mjs), so that a
 // restart on an unchanged checkout costs no compiling.
 import { spawnSync } from 'node:child_process';
-import { existsSync, readdirSync, statSync, utimesSync, writeFileSync } from 'node:fs';
+import { utimesSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { builtAfter } from './freshness.mjs';
 import { freshBundle } from './server-bundle.mjs';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -12,20 +13,7 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const APP_INPUTS = ['src', 'shared', 'hardware-catalog', 'angular.json', 'tsconfig.json', 'tsconfig.app.json', 'package-lock.json'];
 const STAMP = join(root, 'dist/borewright/.built-from-sources');
 
-/** The newest modification time under a file or folder. */
-function newest(path) {
-  const stat = statSync(path);
-  if (!stat.isDirectory()) return stat.mtimeMs;
-  return readdirSync(path).reduce((latest, entry) => Math.max(latest, newest(join(path, entry))), stat.mtimeMs);
-}
-
-function appIsFresh() {
-  if (!existsSync(STAMP)) return false;
-  const built = statSync(STAMP).mtimeMs;
-  return APP_INPUTS.every((input) => newest(join(root, input)) <= built);
-}
-
-if (appIsFresh()) {
+if (builtAfter(STAMP, APP_INPUTS, root)) {
   console.log('The app is built and its sources are unchanged: no build needed.');
 } else {
   // The stamp takes the time the build started, so a file changed during the build counts as changed.

@@ -1,15 +1,11 @@
 import { existsSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import path from 'node:path';
-import { createApp, DEFAULT_CLIENT_DIR } from './app';
 import { resolveSessionSecret } from './auth/session-secret';
 import { ConfigError, loadConfig } from './config';
 import { databaseTarget, openDatabase } from './db/client';
 import { acquireDataLock, DataFolderLockedError } from './db/data-lock';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from './demo/greyfield-people';
-import { seedDemoShop } from './demo/seed-demo';
 import { createLogger } from './logger';
-import { startMail } from './mail/mailer';
 
 /** Requests still running get this long after SIGTERM before their connections are cut. */
 const DRAIN_MS = 10_000;
@@ -49,7 +45,16 @@ async function main(): Promise<void> {
     throw err;
   }
   const sessionSecret = resolveSessionSecret(config.sessionSecret, config.dataDir);
-  const database = await openDatabase(target);
+  // The database opens while the rest of the server loads: PGlite compiles its WebAssembly and reads its
+  // files meanwhile, which took as long as loading every route.
+  const opening = openDatabase(target);
+  const [{ createApp, DEFAULT_CLIENT_DIR }, { DEMO_PASSWORD, DEMO_PEOPLE }, { seedDemoShop }, { startMail }] = await Promise.all([
+    import('./app'),
+    import('./demo/greyfield-people'),
+    import('./demo/seed-demo'),
+    import('./mail/mailer'),
+  ]);
+  const database = await opening;
   await database.migrate();
   const seeded = config.demoAccounts && (await seedDemoShop(database.db));
 

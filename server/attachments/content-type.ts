@@ -1,4 +1,3 @@
-import { fileTypeFromBuffer } from 'file-type';
 import { ATTACHMENT_TYPES, type AttachmentType } from '../../shared/api/attachment-contract';
 import { AppError } from '../http/app-error';
 
@@ -33,6 +32,8 @@ const ACCEPTED = 'Attachments may be PNG, JPEG or WebP images or PDF documents, 
  * by its name or the type the browser sent: a file named `.png` that is not a PNG is refused, saying so.
  */
 export async function attachmentType(bytes: Uint8Array, fileName: string, declared: string): Promise<AttachmentType> {
+  // file-type and the readers it brings load with the first upload, not at every start.
+  const { fileTypeFromBuffer } = await import('file-type');
   const found = await fileTypeFromBuffer(bytes);
   if (found && isAllowed(found.mime)) return found.mime;
   const content = found ? `its content is ${found.ext.toUpperCase()} (${found.mime})` : 'its content is not a kind of file Borewright recognises';

@@ -4,10 +4,8 @@ import { fileURLToPath } from 'node:url';
 import { PGlite } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
-import { drizzle as drizzlePostgres } from 'drizzle-orm/node-postgres';
-import { migrate as migratePostgres } from 'drizzle-orm/node-postgres/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
-import pg from 'pg';
+import { migrationsApplied, readJournal } from './migrations-applied';
 import * as schema from './schema';
 
 /**
@@ -24,7 +22,7 @@ export type DatabaseTarget =
 export interface DatabaseHandle {
   readonly db: Database;
   readonly engine: DatabaseTarget['engine'];
-  /** Applies the committed migrations of server/db/migrations that this database has not seen. */
+  /** Applies the committed migrations of server/db/migrations that this database has not seen (none: two queries). */
   migrate(): Promise<void>;
   /** PGlite only: the data folder as a tarball, to start other in-memory databases from (test templates). */
   dumpDataDir?(): Promise<Uint8Array>;
@@ -32,6 +30,11 @@ export interface DatabaseHandle {
 }
 
 const migrationsFolder = fileURLToPath(new URL('./migrations', import.meta.url));
+
+/** Runs the migrator only when the journal holds a migration the database has not applied. */
+async function migrateWhenBehind(db: Database, migrator: () => Promise<void>): Promise<void> {
+  if (!(await migrationsApplied(db, readJournal(migrationsFolder)))) await migrator();
+}
 
 /**
  * The target the configuration names: DATABASE_URL wins over the data folder. PGlite keeps its
@@ -46,12 +49,18 @@ export function databaseTarget(config: { databaseUrl?: string; dataDir: string }
 /** Opens the database the target names. A PGlite data folder must be locked by the caller first (data-lock.ts). */
 export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHandle> {
   if (target.engine === 'postgres') {
+    // Loaded only for a PostgreSQL server: a start on PGlite need not load pg.
+    const [{ default: pg }, { drizzle: drizzlePostgres }, { migrate: migratePostgres }] = await Promise.all([
+      import('pg'),
+      import('drizzle-orm/node-postgres'),
+      import('drizzle-orm/node-postgres/migrator'),
+    ]);
     const pool = new pg.Pool({ connectionString: target.url, max: 10 });
     const db = drizzlePostgres({ client: pool, schema });
     return {
       db,
       engine: 'postgres',
-      migrate: () => migratePostgres(db, { migrationsFolder }),
+      migrate: () => migrateWhenBehind(db, () => migratePostgres(db, { migrationsFolder })),
       close: () => pool.end(),
     };
   }
@@ -65,7 +74,7 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
   return {
     db,
     engine: 'pglite',
-    migrate: () => migratePglite(db, { migrationsFolder }),
+    migrate: () => migrateWhenBehind(db, () => migratePglite(db, { migrationsFolder })),
     dumpDataDir: async () => new Uint8Array(await (await client.dumpDataDir('none')).arrayBuffer()),
     close: () => client.close(),
   };

@@ -1,9 +1,9 @@
 import type { AddressInfo } from 'node:net';
-import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 import type { Database } from '../db/client';
 import type { Logger } from '../logger';
 import { insertOutboxMessage } from './outbox.repository';
+import { parseMail } from './parse-mail';
 
 /** The largest message the catcher takes: a pack goes attached up to 10 MB, which base64 makes about 14. */
 const MAX_MESSAGE_BYTES = 32 * 1024 * 1024;
@@ -36,7 +36,7 @@ export function startCatcher(db: Database, logger: Logger): Promise<Catcher> {
       readAll(stream)
         .then(async (raw) => {
           if (stream.sizeExceeded) throw Object.assign(new Error('The message is too large.'), { responseCode: 552 });
-          const mail = await simpleParser(raw);
+          const mail = await parseMail(raw);
           await insertOutboxMessage(db, {
             sender: mail.from?.text ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ''),
             recipients: session.envelope.rcptTo.map((r) => r.address),

@@ -1,9 +1,9 @@
-import { simpleParser } from 'mailparser';
 import type { MailRecipient, OutboxMessage } from '../../shared/api/pack-contract';
 import { listPeople } from '../auth/users.repository';
 import type { Database } from '../db/client';
 import { notFound } from '../http/app-error';
 import { findOutboxRaw, listOutbox } from './outbox.repository';
+import { parseMail } from './parse-mail';
 
 /** How many messages the Outbox page lists: the recent ones; the catcher is for looking, not for archiving. */
 const LIMIT = 100;
@@ -18,7 +18,7 @@ export async function outboxAttachment(db: Database, id: number, index: number):
   const row = await findOutboxRaw(db, id);
   if (!row) throw notFound(`Message ${id}`);
   if (index >= row.attachments.length) throw notFound(`Attachment ${index} of message ${id}`);
-  const attachment = (await simpleParser(row.raw)).attachments[index];
+  const attachment = (await parseMail(row.raw)).attachments[index];
   return { name: row.attachments[index].name, contentType: attachment.contentType, content: attachment.content };
 }
 
