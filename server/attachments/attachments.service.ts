@@ -4,6 +4,7 @@ import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
 import { notFound } from '../http/app-error';
 import { findJob, touchJob } from '../jobs/jobs.repository';
+import { writableJob } from '../jobs/writable-job';
 import { attachmentType, nameForType } from './content-type';
 import * as repo from './attachments.repository';
 
@@ -35,7 +36,7 @@ export async function uploadAttachment(db: Database, actor: User, jobId: number,
   const contentType = await attachmentType(file.bytes, file.fileName, file.declaredType);
   const filename = nameForType(file.fileName, contentType);
   const id = await db.transaction(async (tx) => {
-    await requireJob(tx, jobId);
+    await writableJob(tx, jobId);
     const inserted = await repo.insertAttachment(tx, { jobId, filename, contentType, size: file.bytes.length, content: file.bytes, uploadedBy: actor.id });
     await touchJob(tx, jobId);
     const details = { attachment: inserted, file: filename, sentAs: file.fileName, type: contentType, size: file.bytes.length };
@@ -56,8 +57,10 @@ export async function attachmentForDownload(db: Database, id: number) {
 /** Removes an attachment from its job, with an activity entry. */
 export async function deleteAttachment(db: Database, actor: User, id: number): Promise<void> {
   await db.transaction(async (tx) => {
-    const deleted = await repo.deleteAttachment(tx, id);
-    if (!deleted) throw notFound(`Attachment ${id}`);
+    const found = await repo.findAttachmentSummary(tx, id);
+    if (!found) throw notFound(`Attachment ${id}`);
+    await writableJob(tx, found.jobId);
+    const deleted = (await repo.deleteAttachment(tx, id))!;
     await touchJob(tx, deleted.jobId);
     await recordActivity(tx, { userId: actor.id, jobId: deleted.jobId, action: 'attachment.deleted', details: { attachment: id, file: deleted.filename } });
   });

@@ -6,9 +6,10 @@ import { MAX_JOB_PANELS } from '../../shared/model/job-document';
 import { recordActivity } from '../activity/activity.repository';
 import type { Database } from '../db/client';
 import { panelDraft } from '../db/job-mapping';
-import { AppError, notFound } from '../http/app-error';
+import { AppError } from '../http/app-error';
 import { nextDocumentId } from '../jobs/document-ids';
-import { findJob, touchJob } from '../jobs/jobs.repository';
+import { touchJob } from '../jobs/jobs.repository';
+import { writableJob } from '../jobs/writable-job';
 import { insertPanel, jobPanelRefs } from '../panels/panels.repository';
 
 /** An uploaded cut list: its bytes and the name the client gave it. */
@@ -35,10 +36,9 @@ function preview(file: CutListFile, list: CutList): CutListPreview {
   return { fileName: file.fileName, ...list, rowsWithErrors: list.rows.filter((r) => r.errors.length > 0).length };
 }
 
-/** What importing the file would create, with every row's errors; writes nothing. */
+/** What importing the file would create, with every row's errors; writes nothing, but an archived job, which cannot import, is told so at once. */
 export async function previewCutList(db: Database, jobId: number, file: CutListFile): Promise<CutListPreview> {
-  const job = await findJob(db, jobId);
-  if (!job) throw notFound(`Job ${jobId}`);
+  const job = await writableJob(db, jobId);
   return preview(file, parseCutList(textOf(file), job.materials));
 }
 
@@ -61,8 +61,7 @@ function refusal(list: CutList): AppError {
 export async function importCutList(db: Database, actor: User, jobId: number, file: CutListFile): Promise<CutListImported> {
   const text = textOf(file);
   return db.transaction(async (tx) => {
-    const job = await findJob(tx, jobId);
-    if (!job) throw notFound(`Job ${jobId}`);
+    const job = await writableJob(tx, jobId);
     const list = parseCutList(text, job.materials);
     if (!isImportable(list)) throw refusal(list);
     const panels = cutListPanels(list.rows);

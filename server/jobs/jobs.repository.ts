@@ -39,6 +39,12 @@ export async function findJob(db: Database, id: number) {
   return row;
 }
 
+/** The job's own row, locked until the transaction ends, so that archiving it waits for a write under way. */
+export async function lockJob(tx: Database, id: number) {
+  const [row] = await tx.select().from(jobs).where(eq(jobs.id, id)).for('update');
+  return row;
+}
+
 /** Everything stored for one job, children in stored order; undefined when there is no such job. */
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
   const job = await findJob(db, id);

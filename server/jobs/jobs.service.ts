@@ -11,6 +11,7 @@ import { AppError, invalidField, notFound, staleVersion } from '../http/app-erro
 import { findNulText, NUL_MESSAGE } from '../http/nul-text';
 import { nextDocumentId } from './document-ids';
 import * as repo from './jobs.repository';
+import { writableJob } from './writable-job';
 
 type Summary = NonNullable<Awaited<ReturnType<typeof repo.findJobSummary>>>;
 
@@ -108,7 +109,8 @@ export function importJob(db: Database, actor: User, doc: JobDocument, fileName?
 export async function updateJob(db: Database, actor: User, jobId: number, body: z.output<typeof jobUpdateBody>): Promise<JobSummary> {
   const { version, ...changes } = body;
   await db.transaction(async (tx) => {
-    const current = await repo.findJob(tx, jobId);
+    // Restoring is the one change an archived job takes; every other goes through the gate.
+    const current = changes.archived === false ? await repo.findJob(tx, jobId) : await writableJob(tx, jobId);
     if (!current) throw notFound(`Job ${jobId}`);
     if (current.version !== version || !(await repo.updateJobAtVersion(tx, jobId, version, changes))) throw staleVersion('this job', current.version);
     const action = changes.archived === true ? 'job.archived' : changes.archived === false ? 'job.unarchived' : 'job.updated';
@@ -120,8 +122,7 @@ export async function updateJob(db: Database, actor: User, jobId: number, body: 
 /** Adds a carcass; its material must be one of the job's, its id (given or made) unique in the job. */
 export async function addCarcass(db: Database, actor: User, jobId: number, body: z.output<typeof carcassCreateBody>): Promise<Carcass> {
   return db.transaction(async (tx) => {
-    const job = await repo.findJob(tx, jobId);
-    if (!job) throw notFound(`Job ${jobId}`);
+    const job = await writableJob(tx, jobId);
     if (!job.materials.some((m) => m.id === body.material)) {
       throw invalidField('material', `this job has no material with id "${body.material}"`);
     }

@@ -8,24 +8,24 @@ import { statusStep } from '../../shared/model/panel-status';
 import { boreDraft, placementDraft, type PanelRow } from '../db/job-mapping';
 import { AppError, invalidField, notFound, staleVersion } from '../http/app-error';
 import { nextDocumentId } from '../jobs/document-ids';
-import { carcassKeys, findJob, touchJob } from '../jobs/jobs.repository';
+import { carcassKeys, touchJob } from '../jobs/jobs.repository';
+import { writableJob } from '../jobs/writable-job';
 import * as repo from './panels.repository';
 
 type BoardFields = Partial<z.output<typeof panelFieldsBody>>;
+type JobRow = Awaited<ReturnType<typeof writableJob>>;
 
 const stale = (current?: number) => staleVersion('this panel', current);
 
 /** Checks board fields against the job (its materials and carcasses) and turns them into column changes. */
-async function boardChanges(tx: Database, jobId: number, fields: BoardFields): Promise<repo.PanelChanges> {
-  const job = await findJob(tx, jobId);
-  if (!job) throw notFound(`Job ${jobId}`);
+async function boardChanges(tx: Database, job: JobRow, fields: BoardFields): Promise<repo.PanelChanges> {
   const { carcass, ...columns } = fields;
   if (columns.material !== undefined && !job.materials.some((m) => m.id === columns.material)) {
     throw invalidField('material', `this job has no material with id "${columns.material}"`);
   }
   if (carcass === undefined) return columns;
   if (carcass === null) return { ...columns, carcassId: null };
-  const carcassId = (await carcassKeys(tx, jobId)).get(carcass);
+  const carcassId = (await carcassKeys(tx, job.id)).get(carcass);
   if (carcassId === undefined) throw invalidField('carcass', `this job has no carcass with id "${carcass}"`);
   return { ...columns, carcassId };
 }
@@ -39,7 +39,7 @@ async function recordOf(tx: Database, panelId: number): Promise<PanelRecord> {
 /** Adds a panel with a fresh id made from its role (`door-3`). */
 export async function addPanel(db: Database, actor: User, jobId: number, body: z.output<typeof panelFieldsBody>): Promise<PanelRecord> {
   return db.transaction(async (tx) => {
-    const changes = await boardChanges(tx, jobId, body);
+    const changes = await boardChanges(tx, await writableJob(tx, jobId), body);
     const taken = new Set((await repo.jobPanelRefs(tx, jobId)).map((p) => p.key));
     const key = nextDocumentId(body.role, taken);
     const panelId = await repo.insertPanel(tx, {
@@ -73,13 +73,14 @@ async function changePanel(
   panelId: number,
   version: number,
   action: string,
-  apply: (tx: Database, current: PanelRow) => Promise<{ changes?: repo.PanelChanges; details: Record<string, unknown> }>,
+  apply: (tx: Database, current: PanelRow, job: JobRow) => Promise<{ changes?: repo.PanelChanges; details: Record<string, unknown> }>,
 ): Promise<PanelRecord> {
   return db.transaction(async (tx) => {
     const current = await repo.findPanel(tx, panelId);
     if (!current) throw notFound(`Panel ${panelId}`);
+    const job = await writableJob(tx, current.jobId);
     if (current.version !== version) throw stale(current.version);
-    const { changes = {}, details } = await apply(tx, current);
+    const { changes = {}, details } = await apply(tx, current, job);
     if (!(await repo.updatePanelAtVersion(tx, panelId, version, changes))) throw stale();
     await touchJob(tx, current.jobId);
     await recordActivity(tx, { userId: actor.id, jobId: current.jobId, panelId, action, details: { panel: current.key, ...details } });
@@ -96,8 +97,8 @@ export function updatePanel(db: Database, actor: User, panelId: number, body: z.
       fields: { '(body)': 'names no field to change' },
     });
   }
-  return changePanel(db, actor, panelId, version, 'panel.updated', async (tx, current) => ({
-    changes: await boardChanges(tx, current.jobId, fields),
+  return changePanel(db, actor, panelId, version, 'panel.updated', async (tx, _current, job) => ({
+    changes: await boardChanges(tx, job, fields),
     details: { fields: named },
   }));
 }
@@ -140,6 +141,7 @@ export async function deletePanel(db: Database, actor: User, panelId: number, ve
   await db.transaction(async (tx) => {
     const current = await repo.findPanel(tx, panelId);
     if (!current) throw notFound(`Panel ${panelId}`);
+    await writableJob(tx, current.jobId);
     if (current.version !== version) throw stale(current.version);
     const hangers = (await repo.jobPanelRefs(tx, current.jobId)).filter((p) => p.hang?.on.includes(current.key));
     if (hangers.length > 0) {

@@ -9,8 +9,9 @@ import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { boreDraft, carcassDraft, panelDraft, placementDraft, toCarcass, type CarcassRow } from '../db/job-mapping';
 import { panels as panelTable } from '../db/schema';
-import { AppError, notFound } from '../http/app-error';
-import { carcassKeys, findJob, insertCarcass, touchJob, updateCarcass } from '../jobs/jobs.repository';
+import { AppError } from '../http/app-error';
+import { carcassKeys, insertCarcass, touchJob, updateCarcass } from '../jobs/jobs.repository';
+import { writableJob } from '../jobs/writable-job';
 import * as panels from '../panels/panels.repository';
 
 /**
@@ -21,8 +22,7 @@ import * as panels from '../panels/panels.repository';
  */
 export async function storePlannedCarcass(db: Database, actor: User, jobId: number, body: unknown, choice?: ChangedPanelChoice): Promise<PlannedCarcass> {
   return db.transaction(async (tx) => {
-    const job = await findJob(tx, jobId);
-    if (!job) throw notFound(`Job ${jobId}`);
+    const job = await writableJob(tx, jobId);
     const description = typeof body === 'object' && body !== null ? body : {};
     const result = planCarcass({ ...description, materials: job.materials, system: job.system, limits: job.limits }, await shopCatalog(tx));
     if (!result.ok) throw new AppError(400, 'invalid-input', `The carcass cannot be planned: ${result.errors[0]}`, { details: result.errors });

@@ -15,6 +15,7 @@ import { toJobDocument, type JobRows } from '../db/job-mapping';
 import { GENERATOR, packTools } from '../export/export-platform';
 import { AppError, notFound } from '../http/app-error';
 import { loadJobRows, touchJob } from '../jobs/jobs.repository';
+import { writableJob } from '../jobs/writable-job';
 import { updatePanelAtVersion } from '../panels/panels.repository';
 import { swapPanelPlacements } from './swap.repository';
 
@@ -80,6 +81,7 @@ function staleSwap(panel: string): AppError {
  */
 export async function applySwapTo(db: Database, actor: User, jobId: number, body: z.output<typeof swapApplyBody>): Promise<SwapApplied> {
   return db.transaction(async (tx) => {
+    await writableJob(tx, jobId);
     const { rows, job, catalog } = await jobAndCatalog(tx, jobId);
     const report = reportOf(job, catalog, body.from, body.to);
     if (report.panels.length === 0) {

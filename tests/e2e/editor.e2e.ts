@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterEach, describe, expect, inject, it } from 'vitest';
+import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import { fitView, toScreen, type Point } from '../../src/app/editor/stage/view';
 import { join } from 'node:path';
 import { openBrowser, screenshot, screenshotDir, signIn } from './browser';
@@ -179,4 +180,39 @@ describe('the panel editor from the keyboard alone', () => {
     expect(await page.locator('bw-properties-form').innerText()).toContain('Select a placement on the panel or in the list');
     await screenshot(page, 'editor-keyboard');
   });
+
+  it('shows a fitting imported while it is open once its tab is back in view, and another when it opens again', async () => {
+    const browser = await openBrowser();
+    close = browser.close;
+    const { page, context } = browser;
+    await signIn(page, baseUrl, 'owner@greyfield.example');
+    await page.getByRole('link', { name: 'Larch Lane kitchen' }).click();
+    await page.getByRole('link', { name: 'Sink base, left side' }).click();
+    await page.waitForURL(/\/panels\/\d+$/);
+    const catalogList = page.locator('bw-catalog-list');
+    await expect.poll(() => catalogList.innerText()).toMatch(/shelf pin/i);
+
+    // Imported elsewhere (another tab, another member) while the editor stays open: a shelf pin of the shop's own.
+    const importPin = async (name: string) => {
+      const token = (await context.cookies()).find((c) => c.name === 'XSRF-TOKEN')?.value ?? '';
+      const pin = { ...builtinCatalog().get('shelf-pin-5')!, id: name.toLowerCase().replace(/\W+/g, '-'), name };
+      const res = await context.request.post(`${baseUrl}/api/catalog/fittings`, { data: pin, headers: { 'X-XSRF-TOKEN': decodeURIComponent(token) } });
+      expect(res.status(), await res.text()).toBe(201);
+    };
+    const stamp = Date.now();
+    const back = `Shop pin, back in view ${stamp}`;
+    await importPin(back);
+    expect(await catalogList.innerText()).not.toContain(back);
+    await page.evaluate(() => document.dispatchEvent(new Event('visibilitychange')));
+    await expect.poll(() => catalogList.innerText()).toContain(back);
+
+    const reopened = `Shop pin, editor reopened ${stamp}`;
+    await importPin(reopened);
+    await page.getByRole('link', { name: 'Back to the job' }).click();
+    await page.waitForURL(/\/jobs\/\d+$/);
+    await page.getByRole('link', { name: 'Sink base, left side' }).click();
+    await page.waitForURL(/\/panels\/\d+$/);
+    await expect.poll(() => catalogList.innerText()).toContain(reopened);
+  });
 });
+

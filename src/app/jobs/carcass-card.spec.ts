@@ -9,9 +9,9 @@ describe('mountingWords', () => {
     expect(mountingWords({ mounting: 'wall' })).toBe('Wall-hung');
   });
 
-  it('offers planning again on screen for a planned carcass with one kind of front, not one in sections', () => {
+  it('offers planning again on screen for every planned carcass, one in sections too', () => {
     expect(replannableOnScreen({ plannedFrom: { fronts: { type: 'doors' } } })).toBe(true);
-    expect(replannableOnScreen({ plannedFrom: { fronts: { type: 'sections', sections: [] } } })).toBe(false);
+    expect(replannableOnScreen({ plannedFrom: { fronts: { type: 'sections', sections: [] } } })).toBe(true);
     expect(replannableOnScreen({})).toBe(false);
   });
 });

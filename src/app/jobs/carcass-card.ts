@@ -1,7 +1,7 @@
 import type { Carcass } from '../../../shared/model/job-document';
 
 /** One field of the description the carcass was planned from: its `type`, if it has one. */
-function planned(carcass: Pick<Carcass, 'plannedFrom'>, key: 'mounting' | 'fronts'): string | undefined {
+function planned(carcass: Pick<Carcass, 'plannedFrom'>, key: 'mounting'): string | undefined {
   const value = carcass.plannedFrom?.[key];
   return typeof value === 'object' && value !== null && 'type' in value && typeof value.type === 'string' ? value.type : undefined;
 }
@@ -15,11 +15,7 @@ export function mountingWords(carcass: Pick<Carcass, 'mounting' | 'plannedFrom'>
   return carcass.mounting === 'wall' ? 'Wall-hung' : 'Floor-standing';
 }
 
-/**
- * Whether the planner screen can plan the carcass again from its description. Its form holds one kind of
- * front per carcass; a carcass divided into sections is planned again from its description file
- * (`borewright plan`), so that the screen never drops its sections.
- */
+/** Whether the planner screen can plan the carcass again: it was planned, and keeps the description it was planned from. */
 export function replannableOnScreen(carcass: Pick<Carcass, 'plannedFrom'>): boolean {
-  return carcass.plannedFrom !== undefined && planned(carcass, 'fronts') !== 'sections';
+  return carcass.plannedFrom !== undefined;
 }

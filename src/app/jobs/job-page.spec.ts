@@ -126,4 +126,17 @@ describe('JobPage', () => {
     http.expectOne('/api/jobs/11/pack.zip?paper=a4');
     expect(page.textContent).toContain('Making the pack…');
   });
+
+  it("says the labels are on their way when the Labels link starts their download, for a viewer too", async () => {
+    await openAs('viewer');
+    const labels = [...page.querySelectorAll<HTMLAnchorElement>('a')].find((a) => accessibleName(a) === 'Labels');
+    expect(labels?.getAttribute('href')).toBe('/api/jobs/11/labels.pdf');
+    expect(labels?.hasAttribute('download')).toBe(true);
+    // The browser's own download is not what this test is about: keep the page where it is.
+    labels!.addEventListener('click', (event) => event.preventDefault());
+    labels!.click();
+    await settle();
+    expect(overlay().textContent).toContain('Labels for 2 panels, 14 to an A4 sheet: the PDF is on its way to your downloads.');
+  });
 });
+

@@ -58,7 +58,8 @@ export class CarcassDrawing {
     const flap = this.plan().flap;
     if (flap) {
       const r = (W - flap.length.value) / 2;
-      fronts.push({ x: r, y: r, w: flap.length.value, h: flap.height.value, kind: 'front' });
+      // A flap hangs from the top: over the whole carcass, or over the top section of one in sections.
+      fronts.push({ x: r, y: H - r - flap.height.value, w: flap.length.value, h: flap.height.value, kind: 'front' });
       cups.push(...flap.hinges.map((h) => ({ x: r + h.cup.value, y: H - r - flap.hinge.cupFromEdge.value })));
     }
     for (const [i, drawer] of this.plan().drawers.entries()) {

@@ -1,5 +1,5 @@
-import { Component, effect, inject, untracked } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { Component, computed, effect, inject, untracked } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -10,14 +10,15 @@ import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatDialog } from '@angular/material/dialog';
 import { Router, RouterLink } from '@angular/router';
-import { map } from 'rxjs';
+import { filter, map } from 'rxjs';
 import { Can } from '../auth/can';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { CatalogStore } from '../catalog/catalog-store';
 import { ApiProblem, describeError } from '../core/api-problem';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
-import { fromPlanInput, plannerForm, toPlanInput } from './planner-form';
+import { FrontFields } from './front-fields';
+import { fillPlannerForm, plannerForm, sectionGroup, sectionProblems, startSections, toPlanInput } from './planner-form';
 import { PlannerStore } from './planner-store';
 import { ReplanDialog } from './replan-dialog';
 
@@ -30,6 +31,7 @@ import { ReplanDialog } from './replan-dialog';
   imports: [
     Can,
     CarcassDrawing,
+    FrontFields,
     MatButtonModule,
     MatButtonToggleModule,
     MatFormFieldModule,
@@ -52,6 +54,15 @@ export class CarcassPlanner {
 
   protected readonly form = plannerForm();
   protected readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
+  /** The planner's messages about each section, shown beside its fields. */
+  protected readonly sectionProblems = computed(() => {
+    const result = this.store.result();
+    return sectionProblems(result && !result.ok ? result.errors : []);
+  });
+  protected readonly hasFlap = computed(() => {
+    const v = this.value();
+    return v.fronts === 'flap' || (v.fronts === 'sections' && v.sections.some((section) => section.front === 'flap'));
+  });
 
   constructor() {
     // The shop's own fittings, so that the plan shown is the plan the server stores.
@@ -60,8 +71,19 @@ export class CarcassPlanner {
     // Planning a carcass again starts from the description it was planned from, once, when it arrives.
     effect(() => {
       const again = this.store.againFrom();
-      if (again) untracked(() => this.form.patchValue(fromPlanInput(again)));
+      if (again) untracked(() => fillPlannerForm(this.form, again));
     });
+    this.form.controls.fronts.valueChanges.pipe(filter((fronts) => fronts === 'sections'), takeUntilDestroyed()).subscribe(() => startSections(this.form));
+  }
+
+  /** A new section goes below the top one, which keeps its front (a flap can only be the top's); its height is asked for. */
+  protected addSection(): void {
+    const { sections } = this.form.controls;
+    sections.insert(sections.length - 1, sectionGroup('doors'));
+  }
+
+  protected removeSection(index: number): void {
+    this.form.controls.sections.removeAt(index);
   }
 
   protected async addToJob(changed?: ChangedPanelChoice): Promise<void> {

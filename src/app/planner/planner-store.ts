@@ -32,14 +32,11 @@ export class PlannerStore {
   readonly job = computed(() => (this.detail.hasValue() ? this.detail.value().job : undefined));
   private readonly settings = computed(() => (this.detail.hasValue() ? this.detail.value() : undefined));
   readonly materials = computed(() => this.settings()?.materials ?? []);
-  /**
-   * The description of the carcass to plan again, once the job has loaded; undefined when there is none to
-   * read, or when it is divided into sections, which the form cannot hold.
-   */
+  /** The description of the carcass to plan again, once the job has loaded; undefined when there is none to read. */
   readonly againFrom = computed(() => {
     const carcass = this.detail.hasValue() ? this.detail.value().carcasses.find((c) => c.id === this.againId()) : undefined;
     const parsed = carcass?.plannedFrom && carcassPlanInput.safeParse(carcass.plannedFrom);
-    return parsed && parsed.success && parsed.data.fronts.type !== 'sections' ? parsed.data : undefined;
+    return parsed && parsed.success ? parsed.data : undefined;
   });
   readonly usedIds = computed(() => new Set(this.detail.hasValue() ? this.detail.value().carcasses.map((c) => c.id) : []));
   readonly result = computed(() => {
