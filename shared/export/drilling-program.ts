@@ -52,6 +52,15 @@ function zeroPoint(view: ProgramView, machine: MachineSettings): TourPoint {
   return { u: machine.origin.endsWith('right') ? view.length : 0, v: machine.origin.startsWith('back') ? view.across : 0 };
 }
 
+/** The tool that drills a hole, or why no program drills it: no tool of its diameter (blind or through), or a through hole with no spoilboard allowance set. */
+export function holeTool(hole: PanelHole, machine: MachineSettings): { tool: MachineTool } | { why: string } {
+  const through = isThrough(hole);
+  const tool = machine.tools.find((t) => sameToolUse(t, { diameter: hole.diameter, through }));
+  if (!tool) return { why: `no tool for ${through ? 'through' : 'blind'} holes of ${lengthText(hole.diameter)} mm in the machine settings` };
+  if (through && machine.breakthrough === null) return { why: 'a through hole: no spoilboard allowance is set in the machine settings' };
+  return { tool };
+}
+
 /**
  * Works out a program for one side: each hole's tool (the one of its diameter, blind or through), its depth
  * (a through hole: the board's thickness and the shop's spoilboard allowance), grouped by tool and depth in
@@ -62,18 +71,13 @@ export function planProgram(view: ProgramView, thickness: number, machine: Machi
   const notDrilled: NotDrilled[] = [];
   const groups = new Map<string, ToolGroup>();
   for (const hole of view.holes) {
-    const through = isThrough(hole);
-    const tool = machine.tools.find((t) => sameToolUse(t, { diameter: hole.diameter, through }));
-    const kind = through ? 'through' : 'blind';
-    if (!tool) {
-      notDrilled.push({ key: hole.key, why: `no tool for ${kind} holes of ${lengthText(hole.diameter)} mm in the machine settings` });
+    const found = holeTool(hole, machine);
+    if ('why' in found) {
+      notDrilled.push({ key: hole.key, why: found.why });
       continue;
     }
-    if (through && machine.breakthrough === null) {
-      notDrilled.push({ key: hole.key, why: 'a through hole: no spoilboard allowance is set in the machine settings' });
-      continue;
-    }
-    const depth = roundTo(through ? thickness + (machine.breakthrough ?? 0) : hole.depth, 0.001);
+    const { tool } = found;
+    const depth = roundTo(isThrough(hole) ? thickness + (machine.breakthrough ?? 0) : hole.depth, 0.001);
     const id = `${tool.tool}:${depth}`;
     let group = groups.get(id);
     if (!group) {

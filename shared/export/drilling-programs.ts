@@ -1,4 +1,4 @@
-import { planProgram, programText, type NotDrilled, type ProgramPlan } from './drilling-program';
+import { holeTool, planProgram, programText, type NotDrilled, type ProgramPlan } from './drilling-program';
 import type { ExportContext } from './export-context';
 import type { MachineSettings } from './machine-settings';
 import type { PanelDrilling } from './panel-drilling';
@@ -14,9 +14,12 @@ export function panelProgramPlans(drilling: PanelDrilling, machine: MachineSetti
   return programViews(drilling.panel, drilling.holes).map((view) => planProgram(view, drilling.panel.thickness, machine));
 }
 
-/** Every hole of a panel that its programs leave out, with the reason: what the pack's notes list. */
-export function notDrilled(drilling: PanelDrilling, machine: MachineSettings): NotDrilled[] {
-  return panelProgramPlans(drilling, machine).flatMap((plan) => plan.notDrilled);
+/** Every hole of a panel that its programs leave out, with the reason, in the hole list's order: what the pack's notes list. */
+export function notDrilled(drilling: Pick<PanelDrilling, 'holes'>, machine: MachineSettings): NotDrilled[] {
+  return drilling.holes.flatMap((hole) => {
+    const found = holeTool(hole, machine);
+    return 'why' in found ? [{ key: hole.key, why: found.why }] : [];
+  });
 }
 
 /** A panel's drilling programs as files of an export, each written when asked for; none for a panel without holes. */

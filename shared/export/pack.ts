@@ -165,7 +165,7 @@ export function planPack(input: PackInput): Pack {
           hasErrors: errors > 0,
           ...(hand ? { side: hand.hand } : {}),
           holes: holes.length,
-          ...(input.machine ? { notDrilled: notDrilled({ panel, holes, errors }, input.machine) } : {}),
+          ...(input.machine ? { notDrilled: notDrilled({ holes }, input.machine) } : {}),
           files: panelEntries.filter((e) => e.panel === panel.id).map((e) => e.path),
         })),
         files: entries.map((e) => recorded.get(e.path) as ManifestFile),

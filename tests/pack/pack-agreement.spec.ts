@@ -235,5 +235,5 @@ describe('one truth across the bench pack: every panel’s DXF, template sheets,
     // Each side's 66 system holes (3 rows of 22) take its plate, pin and runner screws; the door's cups and handle holes are its own.
     const holes = await expectAgreement(job);
     expect(holes).toBeGreaterThan(300 * 20);
-  }, 600_000);
+  }, 900_000);
 });
