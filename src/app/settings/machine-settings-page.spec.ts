@@ -31,7 +31,8 @@ describe('MachineSettingsPage', () => {
     fixture.detectChanges();
     http.expectOne(machineSettingsUrl).flush({ machine: DEFAULT_MACHINE_SETTINGS, updatedAt: null, updatedBy: null });
     await settle();
-  });
+    // The first render compiles Material's form fields and selects: seconds on a busy machine.
+  }, 30_000);
 
   afterEach(() => http.verify());
 
