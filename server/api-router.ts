@@ -17,6 +17,7 @@ import { mailRoutes } from './mail/outbox.routes';
 import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
 import { plannerRoutes } from './planner/planner.routes';
+import { settingsRoutes } from './settings/settings.routes';
 import { swapRoutes } from './swap/swap.routes';
 import { teamRoutes } from './team/team.routes';
 import type { AppDeps } from './app';
@@ -48,7 +49,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

@@ -8,6 +8,7 @@ const needs: Record<Permission, string> = {
   markPanels: 'mark panels',
   manageTeam: 'manage the team',
   manageCatalog: 'import or delete catalog fittings',
+  manageShopSettings: "change the shop's machine settings",
 };
 
 /** 401 when signed out, 403 when the user's role lacks the permission (design.md §1, `permissions` in contract.ts). */

@@ -17,6 +17,8 @@ const files = tempFiles({
   'broken.json': JSON.stringify(broken),
   'garbled.json': '{ "format": "borewright.job/1", ',
   'invalid.json': JSON.stringify({ ...clean, panels: [{ ...clean.panels[0], width: -3 }] }),
+  'machine.json': JSON.stringify({ origin: 'back-left', zZero: 'table', retract: 4, clearance: 30, breakthrough: null, tools: [{ diameter: 5, through: false, tool: 21, feed: 1000, speed: 3000 }] }),
+  'bad-machine.json': JSON.stringify({ origin: 'somewhere', zZero: 'top', retract: 5, clearance: 25, breakthrough: null, tools: [] }),
 });
 const folder = dirname(files['clean.json']);
 
@@ -46,6 +48,31 @@ describe('borewright pack', () => {
       expect(bytes.length).toBe(entry.bytes);
     }
     expect(readdirSync(folder).filter((f) => f.endsWith('.part'))).toEqual([]);
+  });
+
+  it('adds a drilling program beside each DXF with --gcode, following --machine when given', async () => {
+    const out = join(folder, 'gcode.zip');
+    const byDefault = runCli('pack', files['clean.json'], '-o', out, '--gcode');
+    expect(byDefault.code).toBe(0);
+    expect(byDefault.stdout).toContain('Drilling programs (G-code) drill every hole.');
+    let { zip, root, manifest } = await readPack(out);
+    expect(manifest.files.map((f) => f.path)).toContain('no carcass/Left side.face-a.nc');
+    expect(await zip.file(`${root}/no carcass/Left side.face-a.nc`)!.async('string')).toContain('T1 M6');
+    expect(runCli('pack', files['clean.json'], '-o', out, '--gcode', '--machine', files['machine.json']).code).toBe(0);
+    ({ zip, root, manifest } = await readPack(out));
+    const program = await zip.file(`${root}/no carcass/Left side.face-a.nc`)!.async('string');
+    expect(program).toContain('T21 M6');
+    expect(program).toContain('Zero X0 Y0: the back-left corner');
+    expect(manifest.machine?.tools[0].tool).toBe(21);
+  });
+
+  it('exits 2 on machine settings it cannot use, naming the value, or --machine without --gcode', () => {
+    const out = join(folder, 'never.zip');
+    const bad = runCli('pack', files['clean.json'], '-o', out, '--gcode', '--machine', files['bad-machine.json']);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toMatch(/bad-machine\.json: origin: /);
+    expect(runCli('pack', files['clean.json'], '-o', out, '--machine', files['machine.json']).code).toBe(2);
+    expect(existsSync(out)).toBe(false);
   });
 
   it('tiles the templates onto US Letter with --paper letter', async () => {

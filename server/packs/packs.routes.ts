@@ -25,7 +25,7 @@ async function streamPack(res: Response, context: RouteContext, jobId: number, p
   await pipeline(packZipStream(pack, date), res);
 }
 
-/** The bench pack: a panel's drilling map, DXF and template sheets; the job's findings and whole pack; sending it. */
+/** The bench pack: a panel's drilling map, DXF, drilling programs and template sheets; the job's findings and whole pack; sending it. */
 export function packsRoutes(router: Router, context: RouteContext): void {
   const { db, clock } = context;
 
@@ -38,6 +38,14 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/panels/:panelId/drilling-map.dxf', requirePermission('readJobs'), async (req, res) => {
     const { panelId } = panelParams.parse(req.params);
     sendFile(res, await packs.drillingDxf(db, panelId, clock()));
+  });
+
+  router.get('/panels/:panelId/drilling-programs.zip', requirePermission('readJobs'), async (req, res) => {
+    const { panelId } = panelParams.parse(req.params);
+    const date = clock();
+    const { pack, fileName } = await packs.drillingProgramsZip(db, panelId, date);
+    res.attachment(fileName).type('application/zip');
+    await pipeline(packZipStream(pack, date), res);
   });
 
   router.get('/panels/:panelId/template.pdf', requirePermission('readJobs'), async (req, res) => {

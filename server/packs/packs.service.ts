@@ -8,6 +8,7 @@ import { planPack, type Pack } from '../../shared/export/pack';
 import { safeSegment } from '../../shared/export/pack-paths';
 import type { PaperName } from '../../shared/export/paper';
 import { panelDrilling } from '../../shared/export/panel-drilling';
+import { drillingPrograms } from '../../shared/export/drilling-programs';
 import { panelDxf } from '../../shared/export/panel-dxf';
 import { drawingToSvg } from '../../shared/export/svg-render';
 import { panelTemplates, templateSheetsPdf } from '../../shared/export/template-pdf';
@@ -19,6 +20,7 @@ import { GENERATOR, packTools, pdfTools, svgWindows } from '../export/export-pla
 import { AppError, notFound } from '../http/app-error';
 import { loadJobRows } from '../jobs/jobs.repository';
 import { findPanel } from '../panels/panels.repository';
+import { shopMachineSettings } from '../settings/settings.service';
 
 /** A file to send back: its name for Content-Disposition, its type and its bytes. */
 export interface DownloadFile {
@@ -69,6 +71,19 @@ export async function drillingDxf(db: Database, panelId: number, date: Date): Pr
   return { name: `${base}.dxf`, type: 'application/dxf', bytes: panelDxf(ctx, drilling) };
 }
 
+/**
+ * A panel's drilling programs (G-code), one per face and edge with holes, by the shop's machine settings,
+ * as a zip made when the stream reaches each file; 404 for a panel without holes.
+ */
+export async function drillingProgramsZip(db: Database, panelId: number, date: Date): Promise<{ pack: Pack; fileName: string }> {
+  const { ctx, drilling, base } = await panelContext(db, panelId, date);
+  const programs = drillingPrograms(ctx, drilling, base, await shopMachineSettings(db));
+  if (programs.length === 0) throw new AppError(404, 'no-holes', `Panel ${panelId} has no holes, so it has no drilling program.`);
+  const root = `${base} drilling programs`;
+  const files = programs.map((p) => ({ path: `${root}/${p.name}`, compress: p.compress, bytes: p.produce }));
+  return { pack: { root, files, errors: drilling.errors }, fileName: `${root}.zip` };
+}
+
 /** A panel's template sheets, to print at 100 % on the paper asked for. */
 export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date): Promise<DownloadFile> {
   const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
@@ -83,12 +98,13 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
 
 /**
  * A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. Its panel
- * labels' codes open the bench page on each panel at `origin`.
+ * labels' codes open the bench page on each panel at `origin`; its drilling programs follow the shop's
+ * machine settings.
  */
 export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<{ pack: Pack; fileName: string; jobName: string }> {
   const ctx = await jobContext(db, jobId, date);
   const labelLink = (panel: { id: string }) => `${origin}${benchPanelPath(jobId, ctx.panelIds.get(panel.id)!)}`;
-  const pack = planPack({ ctx, paper, labelLink, ...(await packTools()) });
+  const pack = planPack({ ctx, paper, labelLink, machine: await shopMachineSettings(db), ...(await packTools()) });
   return { pack, fileName: `${pack.root}.zip`, jobName: ctx.job.name };
 }
 

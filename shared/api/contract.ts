@@ -18,6 +18,8 @@ export const permissions = {
   manageTeam: ['admin'],
   /** Import a shop's own fittings into the catalog and delete them (design.md §1: the admin does catalog imports). */
   manageCatalog: ['admin'],
+  /** Set the shop's machine conventions, which every drilling program follows; everyone signed in reads them. */
+  manageShopSettings: ['admin'],
 } as const satisfies Record<string, readonly Role[]>;
 export type Permission = keyof typeof permissions;
 

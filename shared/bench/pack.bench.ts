@@ -7,6 +7,7 @@ import { pipeline } from 'node:stream/promises';
 import { GENERATOR, packTools } from '../../server/export/export-platform';
 import { packZipStream } from '../../server/export/pack-zip';
 import { builtinCatalog } from '../catalog/builtin-catalog';
+import { DEFAULT_MACHINE_SETTINGS } from '../export/machine-settings';
 import { planPack, type Pack } from '../export/pack';
 import { generateJob } from './generate-job';
 
@@ -38,14 +39,16 @@ function counter(): { sink: Writable; bytes: () => number } {
 
 const job = generateJob(100);
 const tools = await packTools();
+// With the drilling programs, as the server's pack carries them (by the default machine settings).
+const machine = DEFAULT_MACHINE_SETTINGS;
 const plan = (): Pack =>
-  planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', ...tools });
+  planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', machine, ...tools });
 
 // One small pack first, so that loading and compiling the libraries is not counted.
 {
   const warm = generateJob(1);
   const { sink } = counter();
-  await pipeline(packZipStream(planPack({ ctx: { job: warm, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', ...tools }), new Date()), sink);
+  await pipeline(packZipStream(planPack({ ctx: { job: warm, catalog: builtinCatalog(), date: new Date(), generator: GENERATOR }, paper: 'a4', machine, ...tools }), new Date()), sink);
 }
 
 const before = process.memoryUsage.rss();

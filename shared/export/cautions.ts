@@ -18,6 +18,13 @@ export const CAUTIONS: Readonly<Record<CautionId, string>> = {
   drilling: 'Drilling from printed templates: check the 100 mm bar on every page before drilling; eye and hearing protection at the machine.',
 };
 
+/**
+ * The caution every drilling program carries in its header, and the cover sheet of a pack that holds
+ * programs: a machine does what the program says, so a new one is tried where a mistake costs nothing.
+ */
+export const PROGRAM_CAUTION =
+  "Prove every new drilling program in the air or on scrap first; the machine maker's instructions decide how the machine is set up, guarded and run. Check the zero point, the tools and the heights against the header before the first panel.";
+
 /** What every caution defers to (design.md §8). */
 export const CAUTION_DEFERRAL =
   "These notes do not replace them: the hardware maker's data, local building codes and licensed professionals decide.";

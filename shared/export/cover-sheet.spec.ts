@@ -4,7 +4,7 @@ import { pdfTools } from '../../server/export/export-platform';
 import { checkJob } from '../checks/index';
 import type { JobDocument } from '../model/job-document';
 import { clashPanel, exportContext, exportJob } from '../testing/export-job';
-import { CAUTION_DEFERRAL, cautionsFor } from './cautions';
+import { CAUTION_DEFERRAL, cautionsFor, PROGRAM_CAUTION } from './cautions';
 import { coverSheet } from './cover-sheet';
 import { hardwareList } from './hardware-list';
 import { jobDrilling } from './panel-drilling';
@@ -13,7 +13,7 @@ import { drawingsPdf } from './pdf-document';
 const tools = await pdfTools();
 
 /** The cover sheet's text as pdfjs-dist reads it from the PDF, page after page. */
-async function coverText(job: JobDocument): Promise<{ text: string; pages: number }> {
+async function coverText(job: JobDocument, programs = false): Promise<{ text: string; pages: number }> {
   const ctx = exportContext(job);
   const findings = checkJob(job, ctx.catalog);
   const drilling = jobDrilling(job, ctx.catalog, findings);
@@ -25,6 +25,7 @@ async function coverText(job: JobDocument): Promise<{ text: string; pages: numbe
     hardware: hardwareList(ctx, drilling),
     cautions: cautionsFor(job, ctx.catalog),
     files: { labels: 'panel labels.pdf', readme: 'README.txt', schedule: 'hole schedule.csv', hardware: 'hardware list.csv', manifest: 'manifest.json' },
+    programs,
   });
   const bytes = await drawingsPdf(pages, { ...tools, title: 'cover', date: ctx.date, producer: 'test' });
   const doc = await getDocument({ data: bytes, disableFontFace: true, useSystemFonts: false }).promise;
@@ -49,6 +50,13 @@ describe('cover sheet', () => {
     const { text } = await coverText(exportJob());
     expect(text).not.toContain('CONTAINS ERRORS');
     expect(text).toContain('The checks found nothing to report.');
+  });
+
+  it("carries the drilling programs' caution when the pack holds programs, and not otherwise", async () => {
+    const flat = (await coverText(exportJob(), true)).text.replace(/\s+/g, ' ');
+    expect(flat).toContain(`• Drilling programs (G-code): ${PROGRAM_CAUTION}`);
+    expect(flat).toContain('drilling programs (G-code, .nc)');
+    expect((await coverText(exportJob())).text.replace(/\s+/g, ' ')).not.toContain(PROGRAM_CAUTION);
   });
 
   it('shows the cautions that apply word for word, and what they defer to', async () => {

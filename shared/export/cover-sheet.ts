@@ -1,6 +1,6 @@
 import type { Finding, Severity } from '../checks/finding';
 import { handText } from '../layout/side-hand';
-import { CAUTION_DEFERRAL, type Caution } from './cautions';
+import { CAUTION_DEFERRAL, PROGRAM_CAUTION, type Caution } from './cautions';
 import { text, type Drawing } from './drawing';
 import { carcassName, dateText, type ExportContext } from './export-context';
 import type { HardwareList } from './hardware-list';
@@ -21,6 +21,8 @@ export interface CoverInput {
   cautions: readonly Caution[];
   /** The files at the top of the pack, by name, for the order of work. */
   files: { labels: string; readme: string; schedule: string; hardware: string; manifest: string };
+  /** Whether the pack holds drilling programs (G-code): the order of work names them and the safety notes carry their caution. */
+  programs?: boolean;
 }
 
 /** Findings listed one by one on the cover; the rest are counted. */
@@ -88,7 +90,7 @@ function readMeFirst(flow: PageFlow, input: CoverInput, errors: number): void {
     `Print each panel's template file on ${paper} at actual size (100 %, no "fit to page"). Its first sheet is the panel's information (title block, bore table, legend); measure the 100 mm bars on every sheet before drilling from it.`,
     `Print "${files.labels}" and stick each label on its panel: it names the panel, the face up and, on a side, LEFT or RIGHT as seen from the front, and on a door the side it is hinged on. Never drill two sides of one hand.`,
     `Fetch the hardware below from stores, carcass by carcass: shelf pins are counted four per adjustable shelf, not one per hole.`,
-    `Drill each panel face up as its label and templates say, the templates' reference edge (x = 0) on the panel's reference edge. For a machine, load the panel's DXF; its layers are named as "${files.readme}" explains.`,
+    `Drill each panel face up as its label and templates say, the templates' reference edge (x = 0) on the panel's reference edge. For a machine, load the panel's DXF; its layers are named as "${files.readme}" explains.${input.programs ? ` Or run its drilling programs (G-code, a file per face and edge with holes, such as "<panel>.face-a.nc"), whose headers say how the panel lies and where the zero is; prove each new program in the air or on scrap first.` : ''}`,
     `Check every hole against "${files.schedule}" (each hole once, by its key: x from the reference edge, y from the lower edge), then mark the panel drilled on the bench page.`,
     `"${files.manifest}" lists every file with its SHA-256: a file that does not match it has been changed since the pack was made.`,
   ];
@@ -122,7 +124,7 @@ function contents(flow: PageFlow, input: CoverInput): void {
   const labels = ctx.job.panels.length;
   const { files } = input;
   flow.paragraph(
-    `Beside this cover sheet: "${files.labels}" (${plural(labels, 'label')}), "${files.readme}" (the pack's files and the DXF layer names), "${files.schedule}", "${files.hardware}" and "${files.manifest}"; a folder per carcass holds each panel's drilling maps (SVG), DXF and template sheets (PDF).`,
+    `Beside this cover sheet: "${files.labels}" (${plural(labels, 'label')}), "${files.readme}" (the pack's files and the DXF layer names), "${files.schedule}", "${files.hardware}" and "${files.manifest}"; a folder per carcass holds each panel's drilling maps (SVG), DXF${input.programs ? ', drilling programs (G-code, .nc)' : ''} and template sheets (PDF).`,
     3,
     MUTED,
   );
@@ -163,6 +165,7 @@ export function coverSheet(input: CoverInput): Drawing[] {
 
   flow.heading('Safety: read before drilling and fitting');
   for (const caution of input.cautions) flow.paragraph(`• ${caution.text}`, 3.3);
+  if (input.programs) flow.paragraph(`• Drilling programs (G-code): ${PROGRAM_CAUTION}`, 3.3);
   flow.paragraph(CAUTION_DEFERRAL, 3.3);
 
   findingsSection(flow, findings);

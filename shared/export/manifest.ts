@@ -1,5 +1,7 @@
 import type { FindingCode, Severity } from '../checks/finding';
+import type { NotDrilled } from './drilling-program';
 import type { DXF_LAYER_SCHEME } from './dxf-layers';
+import type { MachineSettings } from './machine-settings';
 import type { Generator } from './export-context';
 import type { PaperName } from './paper';
 
@@ -29,7 +31,12 @@ export interface PackManifest {
   sheets: { cover: string; labels?: string; readme: string; holeSchedule: string; hardwareList: string };
   /** How the DXF files name their layers, and the layers this pack's files use. */
   dxfLayers: typeof DXF_LAYER_SCHEME & { used: string[] };
-  /** Each panel's files; `hasErrors` when its files say "has errors"; `side` for a carcass side whose hand the job tells. */
-  panels: { id: string; name: string; carcass?: string; status: string; hasErrors: boolean; side?: 'left' | 'right'; holes: number; files: string[] }[];
+  /** The machine conventions the drilling programs follow, when the pack holds programs. */
+  machine?: MachineSettings;
+  /**
+   * Each panel's files; `hasErrors` when its files say "has errors"; `side` for a carcass side whose hand the
+   * job tells; `notDrilled`, when the pack holds programs, the holes they leave out and why.
+   */
+  panels: { id: string; name: string; carcass?: string; status: string; hasErrors: boolean; side?: 'left' | 'right'; holes: number; notDrilled?: NotDrilled[]; files: string[] }[];
   files: ManifestFile[];
 }

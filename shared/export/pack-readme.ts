@@ -1,5 +1,9 @@
 import { dateText, type ExportContext } from './export-context';
+import { PROGRAM_CAUTION } from './cautions';
+import type { NotDrilled } from './drilling-program';
+import { PECK_RATIO } from './drilling-program';
 import { DXF_LAYER_SCHEME } from './dxf-layers';
+import type { MachineSettings } from './machine-settings';
 import { PINS_PER_SHELF } from './hardware-list';
 import { PAPER, type PaperName } from './paper';
 
@@ -13,12 +17,45 @@ export interface PackFileNames {
   manifest: string;
 }
 
+/** What the README says of the drilling programs: the conventions they follow and, per panel, the holes they leave out. */
+export interface ReadmePrograms {
+  machine: MachineSettings;
+  notDrilled: { panel: { id: string; name: string }; holes: NotDrilled[] }[];
+}
+
+/** The README's section on the drilling programs: how they are laid out, and every hole they leave out. */
+function programsSection(programs: ReadmePrograms): string[] {
+  const { machine } = programs;
+  const leftOut = programs.notDrilled.filter((p) => p.holes.length > 0);
+  return [
+    'DRILLING PROGRAMS (G-CODE)',
+    'Beside each DXF: <panel>.face-a.nc, <panel>.face-b.nc and <panel>.edge-x0.nc ... (edge-x1, edge-y0, edge-y1), one program per face and',
+    'edge that has holes, in the words of ISO 6983 / RS-274: millimetres (G21), absolute (G90), the canned cycle G81, or G83 pecking',
+    `where a hole is deeper than ${PECK_RATIO} times its diameter, G80 to cancel; holes grouped by tool, each group in nearest-neighbour order.`,
+    'Each header says how the panel lies (a face up as on its drilling map; an edge up with the panel clamped on edge, face A toward',
+    'the front, for a machine that drills that way or a horizontal head its maker says how to program), the zero point, Z zero,',
+    'the heights, the tool table and the holes it leaves out.',
+    `Machine settings: zero at the ${machine.origin} corner of the side up; Z0 ${machine.zZero === 'top' ? 'on the side up' : 'on the table'}; R plane ${machine.retract} mm and clearance ${machine.clearance} mm above the side up;`,
+    `  through holes ${machine.breakthrough === null ? 'NOT drilled (no spoilboard allowance set)' : `the board's thickness and ${machine.breakthrough} mm into the spoilboard`};`,
+    `  tools: ${machine.tools.map((t) => `T${t.tool} ${t.diameter} mm ${t.through ? 'through' : 'blind'}`).join(', ') || 'none'}.`,
+    ...(leftOut.length === 0
+      ? ['Every hole of every panel is in a program.']
+      : [
+          `HOLES NO PROGRAM DRILLS (${leftOut.reduce((sum, p) => sum + p.holes.length, 0)}): drill them from the templates, or add the tool or allowance in the machine settings.`,
+          ...leftOut.flatMap((p) => [`  ${p.panel.name} (${p.panel.id}):`, ...p.holes.map((h) => `    ${h.key}: ${h.why}`)]),
+        ]),
+    `CAUTION: ${PROGRAM_CAUTION}`,
+    '',
+  ];
+}
+
 /**
  * The pack's README sheet, plain text for any machine: what each file is, the order to use them in, how
  * holes are named across the files, and our DXF layer names field by field, so that a shop maps them to
- * its tools once in its own machine software. `errors` is how many errors the checks found.
+ * its tools once in its own machine software; with `programs`, the drilling programs' conventions and the
+ * holes they leave out. `errors` is how many errors the checks found.
  */
-export function packReadme(ctx: ExportContext, paper: PaperName, files: PackFileNames, errors: number): string {
+export function packReadme(ctx: ExportContext, paper: PaperName, files: PackFileNames, errors: number, programs?: ReadmePrograms): string {
   const layers = DXF_LAYER_SCHEME;
   const lines = [
     `${ctx.job.name}: bench pack of ${dateText(ctx.date)}, made by ${ctx.generator.name} ${ctx.generator.version}`,
@@ -36,8 +73,10 @@ export function packReadme(ctx: ExportContext, paper: PaperName, files: PackFile
     '  <panel> face A.svg, <panel> face B.svg  drilling maps at full size (face B only when it has holes of its own)',
     '  <panel>.dxf                             the holes for a machine, millimetres, face A as it lies face up',
     `  <panel> templates ${PAPER[paper].name}.pdf          an information sheet, then the panel tiled onto pages at 1:1`,
+    ...(programs ? ['  <panel>.face-a.nc and others            drilling programs (G-code), one per face and edge with holes: see below'] : []),
     `${files.manifest} lists every file with its size and SHA-256, the findings and the DXF layer scheme.`,
     '',
+    ...(programs ? programsSection(programs) : []),
     'ONE HOLE, ONE KEY',
     'A hole needed by two fittings (a plate screw in a line-bored system hole) is drilled once and listed once.',
     'Its key is the same in every file: the SVG maps (data-hole), the hole schedule (column "hole"), and by its',

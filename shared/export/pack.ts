@@ -4,6 +4,7 @@ import type { Panel } from '../model/job-document';
 import { carcassOrder } from '../model/panel-order';
 import { cautionsFor } from './cautions';
 import { coverSheet } from './cover-sheet';
+import { notDrilled } from './drilling-programs';
 import { DXF_LAYER_SCHEME } from './dxf-layers';
 import { type ExportContext } from './export-context';
 import { hardwareList, hardwareListCsv } from './hardware-list';
@@ -67,7 +68,8 @@ const FIXED: PackFileNames = {
 
 /**
  * Plans the bench pack of a job: a folder per carcass (and `no carcass`) with each panel's drilling maps
- * (SVG), DXF and template sheets (PDF), all drawn from the panel's one hole list; the cover sheet and the
+ * (SVG), DXF, drilling programs (G-code, when the input carries the shop's machine settings) and template
+ * sheets (PDF), all drawn from the panel's one hole list; the cover sheet and the
  * panel labels (PDF, on the pack's paper); the README sheet (what the files are, the DXF layer names); the
  * hole schedule and hardware list (CSV); and manifest.json with the SHA-256 of every other file. A job
  * with error findings still gets its pack: the cover, the README and the manifest carry the findings and
@@ -106,7 +108,7 @@ export function planPack(input: PackInput): Pack {
     fixed(FIXED.cover, 'cover sheet', false, () => {
       // The sheets to print, counted as the template files lay them out.
       const panels = drilling.map((d) => ({ drilling: d, sheets: templateSheetCount(ctx, d, input.paper) }));
-      const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels, files: FIXED });
+      const pages = coverSheet({ ctx, paper: input.paper, findings, hardware, cautions: cautionsFor(job, catalog), panels, files: FIXED, programs: input.machine !== undefined });
       return drawingsPdf(pages, pdfOptions('cover sheet'));
     }),
     // A pack of no panels (a retrofit that needs none) has nothing to label.
@@ -117,7 +119,10 @@ export function planPack(input: PackInput): Pack {
             labelsPdf({ ctx, panels: carcassOrder(job.carcasses, job.panels), paper: input.paper, ...(input.labelLink ? { link: input.labelLink } : {}) }, pdfOptions('panel labels')),
           ),
         ]),
-    fixed(FIXED.readme, 'README', true, async () => utf8Bytes(packReadme(ctx, input.paper, FIXED, tally('error')))),
+    fixed(FIXED.readme, 'README', true, async () => {
+      const programs = input.machine && { machine: input.machine, notDrilled: drilling.map((d) => ({ panel: d.panel, holes: notDrilled(d, input.machine!) })) };
+      return utf8Bytes(packReadme(ctx, input.paper, FIXED, tally('error'), programs));
+    }),
     fixed(FIXED.schedule, 'hole schedule', true, async () => utf8Bytes(holeScheduleCsv(ctx, drilling))),
     fixed(FIXED.hardware, 'hardware list', true, async () => utf8Bytes(hardwareListCsv(hardware))),
     ...panelEntries,
@@ -151,6 +156,7 @@ export function planPack(input: PackInput): Pack {
         findingList: findings.map(({ severity, code, panel, message }) => ({ severity, code, panel, message })),
         sheets: { cover: FIXED.cover, ...(job.panels.length > 0 ? { labels: FIXED.labels } : {}), readme: FIXED.readme, holeSchedule: FIXED.schedule, hardwareList: FIXED.hardware },
         dxfLayers: { ...DXF_LAYER_SCHEME, used: [...new Set(drilling.flatMap((d) => d.holes.map(layerOf)))].sort() },
+        ...(input.machine ? { machine: input.machine } : {}),
         panels: drilling.map(({ panel, holes, errors, hand }) => ({
           id: panel.id,
           name: panel.name,
@@ -159,6 +165,7 @@ export function planPack(input: PackInput): Pack {
           hasErrors: errors > 0,
           ...(hand ? { side: hand.hand } : {}),
           holes: holes.length,
+          ...(input.machine ? { notDrilled: notDrilled({ holes }, input.machine) } : {}),
           files: panelEntries.filter((e) => e.panel === panel.id).map((e) => e.path),
         })),
         files: entries.map((e) => recorded.get(e.path) as ManifestFile),

@@ -2,6 +2,8 @@ import type { Drawing } from './drawing';
 import { panelDrillingMaps } from './drilling-map';
 import type { ExportContext } from './export-context';
 import { mapViews } from './map-view';
+import { drillingPrograms } from './drilling-programs';
+import type { MachineSettings } from './machine-settings';
 import { panelDxf } from './panel-dxf';
 import type { PanelDrilling } from './panel-drilling';
 import { PAPER, type PaperName } from './paper';
@@ -26,11 +28,14 @@ export interface PanelFileOptions extends PdfTools {
   paper: PaperName;
   /** A fresh SVG window for each drawing (svgdom's on the server). */
   svgWindow: () => SvgWindow;
+  /** The shop's machine conventions: when given, a drilling program (G-code) per face and edge with holes. */
+  machine?: MachineSettings;
 }
 
 /**
- * A panel's files: its drilling map as SVG (face A, and face B when it has holes of its own), its DXF, and
- * its template sheets as PDF, all drawn from the panel's one hole list. Names start with `base`. The maps
+ * A panel's files: its drilling map as SVG (face A, and face B when it has holes of its own), its DXF, its
+ * drilling programs when the options carry machine settings, and its template sheets as PDF, all drawn
+ * from the panel's one hole list. Names start with `base`. The maps
  * are laid out when the first SVG asks for them and let go after the last.
  */
 export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: string, options: PanelFileOptions): ExportFile[] {
@@ -51,6 +56,7 @@ export function panelFiles(ctx: ExportContext, drilling: PanelDrilling, base: st
   return [
     ...svgs,
     { name: `${base}.dxf`, label: `${panel.name}: DXF`, compress: true, produce: async () => utf8Bytes(panelDxf(ctx, drilling)) },
+    ...(options.machine ? drillingPrograms(ctx, drilling, base, options.machine) : []),
     {
       name: `${base} templates ${paper}.pdf`,
       label: `${panel.name}: template sheets`,

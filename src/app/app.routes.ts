@@ -33,6 +33,7 @@ export const routes: Routes = [
       { path: 'bench', loadChildren: () => import('./bench/bench.routes') },
       { path: 'team', loadChildren: () => import('./team/team.routes') },
       { path: 'how-it-works', loadChildren: () => import('./help/help.routes') },
+      { path: 'settings', loadChildren: () => import('./settings/settings.routes') },
       { path: 'jobs/:jobId/plan', loadChildren: () => import('./planner/planner.routes') },
       { path: 'jobs/:jobId/swap', loadChildren: () => import('./swap/swap.routes') },
     ],

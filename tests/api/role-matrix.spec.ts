@@ -9,6 +9,7 @@ import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '..
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 import { CATALOG_ROUTES } from './role-matrix.catalog';
 import { BENCH_ROUTES } from './role-matrix.bench';
+import { SETTINGS_ROUTES } from './role-matrix.settings';
 import { SWAP_ROUTES } from './role-matrix.swap';
 import { TEAM_ROUTES } from './role-matrix.team';
 import { UPLOADS_ROUTES } from './role-matrix.uploads';
@@ -98,6 +99,7 @@ const ROUTES: Record<string, Row> = {
   ...UPLOADS_ROUTES,
   ...SWAP_ROUTES,
   ...BENCH_ROUTES,
+  ...SETTINGS_ROUTES,
 };
 
 describe('role matrix', () => {

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as z from 'zod';
 import { carcassCreateBody, jobCreateBody, jobUpdateBody, panelDrillingBody, panelFieldsBody, panelStatusBody, panelUpdateBody, signInBody } from '../../shared/api/contract';
 import { packSendBody } from '../../shared/api/pack-contract';
+import { machineSettingsBody } from '../../shared/api/settings-contract';
 import { swapApplyBody } from '../../shared/api/swap-contract';
 import { acceptInvitationBody, invitationBody, memberUpdateBody, passwordResetBody, passwordResetRequestBody } from '../../shared/api/team-contract';
 import { fitting } from '../../shared/catalog/fitting';
@@ -74,6 +75,7 @@ const WRITE_ROUTES: Record<string, WriteRoute> = {
   'POST /api/team/invitations': { body: { json: invitationBody } },
   'DELETE /api/team/invitations/:invitationId': { body: 'none' },
   'PATCH /api/team/members/:userId': { body: { json: memberUpdateBody } },
+  'PUT /api/settings/machine': { body: { json: machineSettingsBody } },
 };
 
 describe('API fuzz', () => {

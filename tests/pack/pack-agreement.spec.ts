@@ -1,6 +1,7 @@
-// The four files of every panel of a pack agree hole for hole, each read by a general-purpose reader of its
+// The five files of every panel of a pack agree hole for hole, each read by a general-purpose reader of its
 // format from npm: the DXF by dxf-parser, the template sheets by pdfjs-dist (Mozilla's PDF reader), the SVG
-// maps by jsdom's XML parser and the hole schedule by papaparse. Nothing here reads our own hole list.
+// maps by jsdom's XML parser, the hole schedule by papaparse and the drilling programs by gcode-parser
+// (gcode-reader.ts), which agree on the holes of each face and edge. Nothing here reads our own hole list.
 import DxfParser from 'dxf-parser';
 import Papa from 'papaparse';
 import { getDocument } from 'pdfjs-dist/legacy/build/pdf.mjs';
@@ -10,10 +11,12 @@ import { DEMO_JOBS } from '../../server/demo/seed-demo';
 import { generateJob } from '../../shared/bench/generate-job';
 import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import type { PackManifest } from '../../shared/export/manifest';
+import { DEFAULT_MACHINE_SETTINGS } from '../../shared/export/machine-settings';
 import { planPack } from '../../shared/export/pack';
 import type { JobDocument, Panel } from '../../shared/model/job-document';
 import { parseJobDocument } from '../../shared/model/parse-job';
 import { readPdfPage } from '../../shared/testing/pdf-page';
+import { readProgram } from './gcode-reader';
 
 const tools = await packTools();
 const PT = 72 / 25.4;
@@ -187,9 +190,25 @@ function tableEntry(hole: Hole): string {
 
 const sorted = (list: readonly string[]) => [...list].sort();
 
-/** Makes the pack of a job and checks every panel's four files against each other. */
+/** The drilling programs: per face or edge (`face-a`, `edge-x0` …), the holes each drills and the holes its header names as left out. */
+function programHoles(files: Map<string, Uint8Array>, paths: string[]): Map<string, { drilled: number; named: number }> {
+  const sides = new Map<string, { drilled: number; named: number }>();
+  for (const path of paths.filter((p) => p.endsWith('.nc'))) {
+    // Any surface height will do for counting; the read-back test checks the heights.
+    const read = readProgram(new TextDecoder().decode(files.get(path)), -1000);
+    const named = read.comments.filter((c) => /^\s*\S+: (no tool|a through hole)/.test(c)).length;
+    sides.set(/\.([a-z0-9-]+)\.nc$/.exec(path)![1], { drilled: read.drilled.length, named });
+  }
+  return sides;
+}
+
+/** Where the hole schedule says a hole is drilled from, as a program's file names it. */
+const sideOfHole = (hole: Hole) => (hole.split(' ')[1] === 'at' ? `edge-${hole.split(' ')[0]}` : `face-${hole.split(' ')[0].toLowerCase()}`);
+
+/** Makes the pack of a job, with drilling programs by the default machine settings, and checks every panel's five files against each other. */
 async function expectAgreement(job: JobDocument): Promise<number> {
-  const pack = planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date('2026-03-14T09:30:00Z'), generator: { name: 'Borewright', version: '0.0.0-test' } }, paper: 'a4', ...tools });
+  const machine = DEFAULT_MACHINE_SETTINGS;
+  const pack = planPack({ ctx: { job, catalog: builtinCatalog(), date: new Date('2026-03-14T09:30:00Z'), generator: { name: 'Borewright', version: '0.0.0-test' } }, paper: 'a4', machine, ...tools });
   const files = new Map<string, Uint8Array>();
   for (const file of pack.files) files.set(file.path.slice(pack.root.length + 1), await file.bytes());
   const manifest = JSON.parse(new TextDecoder().decode(files.get('manifest.json'))) as PackManifest;
@@ -211,12 +230,19 @@ async function expectAgreement(job: JobDocument): Promise<number> {
     // No hole twice: one bore drilled once, whoever needs it.
     expect(new Set(fromCsv).size, `${panel.id}: a hole listed twice`).toBe(fromCsv.length);
     expect(entry.holes).toBe(fromCsv.length);
+    // The programs: one per face and edge with holes, each drilling or naming every hole of its side once.
+    const programs = programHoles(files, entry.files);
+    const bySide = new Map<string, number>();
+    for (const hole of fromCsv) bySide.set(sideOfHole(hole), (bySide.get(sideOfHole(hole)) ?? 0) + 1);
+    expect(sorted([...programs.keys()]), `${panel.id}: a program per face and edge with holes`).toEqual(sorted([...bySide.keys()]));
+    for (const [side, count] of bySide) expect(programs.get(side)!.drilled + programs.get(side)!.named, `${panel.id} ${side}: holes drilled or named by its program`).toBe(count);
+    expect(entry.notDrilled!.length).toBe([...programs.values()].reduce((sum, p) => sum + p.named, 0));
     holes += fromCsv.length;
   }
   return holes;
 }
 
-describe('one truth across the bench pack: every panel’s DXF, template sheets, SVG maps and hole schedule agree', () => {
+describe('one truth across the bench pack: every panel’s DXF, template sheets, SVG maps, hole schedule and drilling programs agree', () => {
   for (const input of DEMO_JOBS) {
     it(`on every panel of the demo job ${input.name}`, async () => {
       const parsed = parseJobDocument(input);
@@ -231,5 +257,5 @@ describe('one truth across the bench pack: every panel’s DXF, template sheets,
     // Each side's 66 system holes (3 rows of 22) take its plate, pin and runner screws; the door's cups and handle holes are its own.
     const holes = await expectAgreement(job);
     expect(holes).toBeGreaterThan(300 * 20);
-  }, 600_000);
+  }, 900_000);
 });

@@ -12,3 +12,4 @@ export { mailTokens } from './mail-tokens';
 export { shopFittings } from './shop-fittings';
 export { attachments } from './attachments';
 export { signInAttempts, signInAddresses } from './sign-in-attempts';
+export { shopSettings } from './shop-settings';

@@ -15,10 +15,16 @@ export function hasFaceB(panel: PanelRecord): boolean {
   return panel.bores.some((b) => !isEdgeBore(b) && b.face === 'B') || panel.placements.some((p) => p.face === 'B');
 }
 
+/** Whether a panel has holes to drill, loose or from a fitting: only then has it drilling programs. */
+export function hasHoles(panel: PanelRecord): boolean {
+  return panel.bores.length + panel.placements.length > 0;
+}
+
 /** A panel's downloads; the browser fetches them itself (plain links), as they are small and quick. */
 export const panelFileUrls = (panelDbId: number) => ({
   svg: (face: 'A' | 'B') => `/api/panels/${panelDbId}/drilling-map.svg?face=${face}`,
   dxf: `/api/panels/${panelDbId}/drilling-map.dxf`,
+  programs: `/api/panels/${panelDbId}/drilling-programs.zip`,
   pdf: (paper: PaperName) => `/api/panels/${panelDbId}/template.pdf?paper=${paper}`,
 });
 

@@ -4,11 +4,12 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import { PanelRecord } from '../../../shared/api/contract';
-import { hasFaceB, panelFileUrls } from './pack-api';
+import { hasFaceB, hasHoles, panelFileUrls } from './pack-api';
 
 /**
  * A panel's drilling files behind one button: its maps (face B only when it has bores there), the CNC
- * drawing and the template sheets on either paper. The server makes them from the panel as saved.
+ * drawing, its drilling programs by the shop's machine settings (when it has holes) and the template
+ * sheets on either paper. The server makes them from the panel as saved.
  */
 @Component({
   selector: 'bw-panel-downloads',
@@ -27,6 +28,9 @@ import { hasFaceB, panelFileUrls } from './pack-api';
         <a mat-menu-item [href]="u.svg('B')" download><mat-icon>flip</mat-icon>Drilling map, face B (SVG)</a>
       }
       <a mat-menu-item [href]="u.dxf" download><mat-icon>architecture</mat-icon>CNC drawing (DXF)</a>
+      @if (holes()) {
+        <a mat-menu-item [href]="u.programs" download><mat-icon>precision_manufacturing</mat-icon>Drilling programs, G-code (zip)</a>
+      }
       <a mat-menu-item [href]="u.pdf('a4')" download><mat-icon>print</mat-icon>Template sheets, A4 (PDF)</a>
       <a mat-menu-item [href]="u.pdf('letter')" download><mat-icon>print</mat-icon>Template sheets, US Letter (PDF)</a>
     </mat-menu>
@@ -47,4 +51,5 @@ export class PanelDownloads {
 
   protected readonly urls = computed(() => panelFileUrls(this.panel().dbId));
   protected readonly faceB = computed(() => hasFaceB(this.panel()));
+  protected readonly holes = computed(() => hasHoles(this.panel()));
 }
