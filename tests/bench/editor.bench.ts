@@ -151,6 +151,9 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
   const moved = await page.locator('bw-placement-list .placement').first().textContent();
   if (moved?.includes(`y ${PLATE.y},`)) throw new Error(`the drag did not move the plate: ${moved}`);
   await page.keyboard.press('Control+z');
+  // On a busy machine autosave may have stored the moved plate before the undo: wait until the undo is
+  // stored too, so that the next run finds the plate where it began.
+  await page.getByText('All changes saved').waitFor({ timeout: 60_000 });
   return { frames, taskPerMove, cpuPerMove };
 }
 
