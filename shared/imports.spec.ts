@@ -5,7 +5,7 @@ import { describe, expect, it } from 'vitest';
 // shared/ runs in the browser, on the server and in the CLI alike (design.md §5), so its code may import
 // only itself, the hardware catalog and the framework-free packages listed here. Specs, benchmarks and test
 // builders run in Node and may import more.
-const allowedPackages = ['zod', 'flatbush', '@svgdotjs/svg.js', '@tarikjabiri/dxf', 'pdf-lib', '@pdf-lib/fontkit', 'jszip', 'papaparse', 'qrcode'];
+const allowedPackages = ['zod', 'zod/mini', 'flatbush', '@svgdotjs/svg.js', '@tarikjabiri/dxf', 'pdf-lib', '@pdf-lib/fontkit', 'jszip', 'papaparse', 'qrcode'];
 const root = new URL('.', import.meta.url).pathname;
 
 function sources(dir: string): string[] {

@@ -6,26 +6,7 @@ import { bore, carcass, displayName, material, panel, panelRole, panelStatus, pl
  * The HTTP API's bodies and answers, shared by the server (which validates what comes in) and the
  * client (which validates what comes back). Paths are listed in DEVELOPERS.md.
  */
-
-export const role = z.enum(['admin', 'designer', 'bench', 'viewer']);
-export type Role = z.output<typeof role>;
-
-/** What each role may do (design.md §1); the server enforces it, the client hides what is not allowed. */
-export const permissions = {
-  readJobs: ['admin', 'designer', 'bench', 'viewer'],
-  editJobs: ['admin', 'designer'],
-  markPanels: ['admin', 'designer', 'bench'],
-  manageTeam: ['admin'],
-  /** Import a shop's own fittings into the catalog and delete them (design.md §1: the admin does catalog imports). */
-  manageCatalog: ['admin'],
-  /** Set the shop's machine conventions, which every drilling program follows; everyone signed in reads them. */
-  manageShopSettings: ['admin'],
-} as const satisfies Record<string, readonly Role[]>;
-export type Permission = keyof typeof permissions;
-
-export function can(userRole: Role | undefined, permission: Permission): boolean {
-  return userRole !== undefined && (permissions[permission] as readonly Role[]).includes(userRole);
-}
+export * from './session-contract';
 
 /** UTF-8 length without TextEncoder, which shared/'s platform-free lib does not declare. */
 export function utf8Length(text: string): number {
@@ -47,14 +28,6 @@ export const signInBody = z.object({
   email: z.string().trim().toLowerCase().email('must be an e-mail address').max(254),
   password: z.string().min(1, 'must not be empty').max(1024),
 });
-
-export const user = z.object({
-  id: z.number().int(),
-  email: z.string(),
-  name: z.string(),
-  role,
-});
-export type User = z.output<typeof user>;
 
 export const jobSummary = z.object({
   id: z.number().int(),
@@ -131,19 +104,6 @@ export const panelUpdateBody = panelFieldsBody.partial().extend({
 
 export const panelStatusBody = z.object({ status: panelStatus, version: z.number().int().min(1) });
 
-/** Every error answer of the API has this shape. */
-export const apiError = z.object({
-  error: z.object({
-    code: z.string(),
-    message: z.string(),
-    /** Field messages by path, for 400s. */
-    fields: z.record(z.string(), z.string()).optional(),
-    /** Every problem of an uploaded document, one line each, led by its path. */
-    details: z.array(z.string()).optional(),
-  }),
-});
-export type ApiError = z.output<typeof apiError>;
-
 /** A database id as it appears in a URL path or query: a positive whole number that fits an integer column. */
 export const dbId = z
   .string()
@@ -171,9 +131,6 @@ export const panelDeleteQuery = z.object({
 
 export const activityQuery = z.object({ jobId: dbId.optional() });
 
-export const userAnswer = z.object({ user });
-/** GET /api/auth/session: who is signed in, or null. */
-export const sessionAnswer = z.object({ user: user.nullable() });
 export const jobList = z.object({ jobs: z.array(jobSummary) });
 
 /** Saving a panel's drilling from the editor: the whole lists replace the stored ones. */

@@ -51,7 +51,7 @@ export const invitationParams = z.object({ invitationId: dbId });
 export const memberParams = z.object({ userId: dbId });
 
 export const memberUpdateBody = z
-  .object({ role: role.optional(), active: z.boolean('must be true or false').optional() })
+  .object({ role: z.optional(role), active: z.boolean('must be true or false').optional() })
   .refine((b) => b.role !== undefined || b.active !== undefined, 'name a role or whether the member is active');
 export type MemberUpdate = z.input<typeof memberUpdateBody>;
 

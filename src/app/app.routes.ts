@@ -1,6 +1,5 @@
 import { Routes } from '@angular/router';
 import { authGuard } from './auth/auth-guard';
-import { Shell } from './layout/shell';
 
 export const routes: Routes = [
   { path: 'sign-in', loadChildren: () => import('./auth/auth.routes') },
@@ -22,7 +21,8 @@ export const routes: Routes = [
   },
   {
     path: '',
-    component: Shell,
+    // Loaded with the first signed-in page, not before: the sign-in page needs none of its Material widgets.
+    loadComponent: () => import('./layout/shell').then((m) => m.Shell),
     canActivate: [authGuard],
     children: [
       { path: '', pathMatch: 'full', redirectTo: 'jobs' },

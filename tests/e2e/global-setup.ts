@@ -30,7 +30,8 @@ async function waitForHealth(url: string, server: ChildProcess, seconds: number)
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   const root = process.cwd();
   if (!process.env['E2E_SKIP_BUILD'] || !existsSync(join(root, 'dist/borewright/browser/index.html'))) {
-    execFileSync('npx', ['ng', 'build'], { cwd: root, stdio: 'inherit', env: { ...process.env, NG_CLI_ANALYTICS: 'false' } });
+    // `npm run build`: the icon font cut to the icons the sources name, then `ng build`.
+    execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'inherit', env: { ...process.env, NG_CLI_ANALYTICS: 'false' } });
   }
   const dataDir = mkdtempSync(join(tmpdir(), 'borewright-e2e-'));
   const port = await freePort();

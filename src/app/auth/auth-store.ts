@@ -1,10 +1,14 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { can, Permission, User, sessionAnswer, userAnswer } from '../../../shared/api/contract';
+import { can, type Permission } from '../../../shared/api/roles';
+import type { User } from '../../../shared/api/session-contract';
 import { ApiProblem } from '../core/api-problem';
 
-/** Who is signed in, and what their role lets them do (contract.ts `permissions`). */
+/** The answers' schemas, loaded beside the first request rather than in the first page (session-contract.ts). */
+const answers = () => import('../../../shared/api/session-contract');
+
+/** Who is signed in, and what their role lets them do (roles.ts `permissions`). */
 @Injectable({ providedIn: 'root' })
 export class AuthStore {
   private readonly http = inject(HttpClient);
@@ -26,8 +30,8 @@ export class AuthStore {
    * change needs, so the app makes it at start.
    */
   restoreSession(): Promise<User | null> {
-    this.restoring ??= firstValueFrom(this.http.get('/api/auth/session'))
-      .then((raw) => sessionAnswer.parse(raw).user)
+    this.restoring ??= Promise.all([firstValueFrom(this.http.get('/api/auth/session')), answers()])
+      .then(([raw, { sessionAnswer }]) => sessionAnswer.parse(raw).user)
       .then(
         (who) => this.remember(who),
         () => this.remember(null),
@@ -39,7 +43,7 @@ export class AuthStore {
   async signIn(email: string, password: string): Promise<User> {
     // The sign-in POST needs the XSRF token of the current session; asking who is signed in hands it out.
     await this.restoreSession();
-    const raw = await firstValueFrom(this.http.post('/api/auth/sign-in', { email, password }));
+    const [raw, { userAnswer }] = await Promise.all([firstValueFrom(this.http.post('/api/auth/sign-in', { email, password })), answers()]);
     const { user: who } = userAnswer.parse(raw);
     this.remember(who);
     return who;

@@ -1,9 +1,9 @@
 import { Directive, effect, inject, input, TemplateRef, ViewContainerRef } from '@angular/core';
-import { Permission } from '../../../shared/api/contract';
+import type { Permission } from '../../../shared/api/roles';
 import { AuthStore } from './auth-store';
 
 /**
- * Shows its element only to roles that hold the permission (contract.ts `permissions`), so nobody
+ * Shows its element only to roles that hold the permission (roles.ts `permissions`), so nobody
  * sees a control they may not use: `<button *bwCan="'editJobs'">`.
  */
 @Directive({ selector: '[bwCan]' })

@@ -1,6 +1,4 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ZodError } from 'zod';
-import { apiError } from '../../../shared/api/contract';
 
 /**
  * What went wrong with an API call, in words a user can act on. The error interceptor turns every
@@ -20,7 +18,9 @@ export class ApiProblem extends Error {
     this.name = 'ApiProblem';
   }
 
-  static fromResponse(response: HttpErrorResponse): ApiProblem {
+  /** Reads the API's error answer; its schema loads on the first failure, not with the first page. */
+  static async fromResponse(response: HttpErrorResponse): Promise<ApiProblem> {
+    const { apiError } = await import('../../../shared/api/session-contract');
     const body = apiError.safeParse(response.error);
     if (body.success) {
       const { code, message, fields, details } = body.data.error;
@@ -43,7 +43,8 @@ function fallbackMessage(status: number): string {
 /** One readable sentence for anything a request or its validation can throw. */
 export function describeError(error: unknown): string {
   if (error instanceof ApiProblem) return error.message;
-  if (error instanceof ZodError)
+  // zod's errors by name (ZodError, and $ZodError from zod/mini), so that the first page carries no zod.
+  if (error instanceof Error && /^\$?ZodError$/.test(error.name))
     return 'The server answered in a shape this page does not understand. Reload the page; if it persists, the app and server versions differ.';
   if (error instanceof Error && error.message !== '') return error.message;
   return 'Something went wrong. Try again.';

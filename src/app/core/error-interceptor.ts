@@ -1,7 +1,7 @@
 import { HttpErrorResponse, HttpInterceptorFn } from '@angular/common/http';
 import { inject } from '@angular/core';
 import { Router } from '@angular/router';
-import { catchError, throwError } from 'rxjs';
+import { catchError, from, switchMap, throwError } from 'rxjs';
 import { AuthStore } from '../auth/auth-store';
 import { ApiProblem } from './api-problem';
 
@@ -22,7 +22,7 @@ export const errorInterceptor: HttpInterceptorFn = (request, next) => {
         auth.forgetSession();
         void router.navigate(['/sign-in'], { queryParams: { returnUrl: router.url } });
       }
-      return throwError(() => ApiProblem.fromResponse(error));
+      return from(ApiProblem.fromResponse(error)).pipe(switchMap((problem) => throwError(() => problem)));
     }),
   );
 };

@@ -1,4 +1,4 @@
-import { Component, computed, effect, inject, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -37,6 +37,8 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
 
 /** The panel editor: the catalog, the stage and what is selected, found and placed, with saving. */
 @Component({
+  // A drag changes the panel on every pointer move: only the views whose signals changed are checked again.
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-panel-editor',
   imports: [
     CatalogList,
@@ -77,11 +79,15 @@ export class PanelEditor implements LeavesSafely {
   });
   protected readonly frame = computed(() => panelFrame(this.store.panel()?.role ?? 'loose'));
   /** The cautions of this panel's unit (a flap's, its sides'), for every role. */
-  protected readonly cautions = computed(() => {
-    const job = this.store.job();
-    const panel = this.store.panel();
-    return job && panel ? cautionsOfUnits(job, this.store.catalog(), panel) : [];
-  });
+  protected readonly cautions = computed(
+    () => {
+      const job = this.store.job();
+      const panel = this.store.panel();
+      return job && panel ? cautionsOfUnits(job, this.store.catalog(), panel) : [];
+    },
+    // The same list on every move of a drag: the list beside the stage is not drawn again for it.
+    { equal: (a, b) => a.length === b.length && a.every((id, i) => id === b[i]) },
+  );
   protected readonly zoomPercent = computed(() => {
     const view = this.stage()?.view();
     return view ? `${Math.round(view.scale * 100)} %` : '';

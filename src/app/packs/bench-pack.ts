@@ -12,6 +12,7 @@ import { PaperName } from '../../../shared/export/paper';
 import { Can } from '../auth/can';
 import { JobFindingsStore } from '../jobs/job-findings-store';
 import { ConfirmDialog } from '../ui/confirm-dialog';
+import type { IconName } from '../ui/icon-name';
 import { PackDownloadStore } from './pack-download-store';
 import { PackSendDialog, PackSendRequest } from './pack-send-dialog';
 import { saveBlob } from './save-blob';
@@ -37,7 +38,7 @@ export class BenchPack {
   protected readonly paper = signal<PaperName>('a4');
   protected readonly findings = inject(JobFindingsStore);
   protected readonly errors = computed(() => this.findings.value()?.errors ?? 0);
-  protected readonly verdictIcon = computed(() => {
+  protected readonly verdictIcon = computed((): IconName | null => {
     const findings = this.findings.value();
     if (!findings) return null;
     const { errors, warnings } = findings;

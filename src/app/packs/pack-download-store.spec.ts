@@ -1,6 +1,7 @@
 import { HttpEventType, HttpHeaders, provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
+import { vi } from 'vitest';
 import { provideRouter } from '@angular/router';
 import { errorInterceptor } from '../core/error-interceptor';
 import { attachmentName } from './pack-api';
@@ -37,11 +38,12 @@ describe('PackDownloadStore', () => {
     expect(store.busy()).toBe(false);
   });
 
-  it('says why a download failed', () => {
+  it('says why a download failed', async () => {
     store.start(11, 'a4');
     http.expectOne('/api/jobs/11/pack.zip?paper=a4').flush(new Blob(['{}']), { status: 404, statusText: 'Not Found' });
 
-    expect(store.state()).toEqual({ step: 'failed', message: 'This was not found. It may have been deleted.' });
+    // The error answer's schema loads on the first failure (api-problem.ts), so the words come a moment later.
+    await vi.waitFor(() => expect(store.state()).toEqual({ step: 'failed', message: 'This was not found. It may have been deleted.' }));
   });
 
   it('drops the download under way when cancelled', () => {

@@ -1,8 +1,9 @@
 import { Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
 import { CAUTION_DEFERRAL, CAUTIONS, type CautionId } from '../../../shared/export/cautions';
+import type { IconName } from './icon-name';
 
-const ICONS: Record<CautionId, string> = {
+const ICONS: Record<CautionId, IconName> = {
   'wall-hung': 'home_repair_service',
   'lift-mechanism': 'compress',
   'tall-unit': 'warning',

@@ -1,4 +1,4 @@
-import { Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
@@ -9,6 +9,7 @@ import { FITTING_DRAG_TYPE } from '../stage/panel-stage';
 
 /** The fittings of the catalog, searchable by name and kind; a click places one, a drag drops one on the panel. */
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-catalog-list',
   imports: [MatFormFieldModule, MatIconModule, MatInputModule],
   templateUrl: './catalog-list.html',

@@ -1,4 +1,4 @@
-import { Component, computed, inject, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import type { Finding } from '../../../../shared/checks';
@@ -18,6 +18,7 @@ import { SEVERITY_ICONS } from '../../ui/severity-icons';
  * undoable step.
  */
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-findings-list',
   imports: [MatButtonModule, MatIconModule],
   templateUrl: './findings-list.html',

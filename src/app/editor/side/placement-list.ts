@@ -1,4 +1,4 @@
-import { Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { PURPOSE_STYLES } from '../../../../shared/export/palette';
 import type { Placement } from '../../../../shared/model/job-document';
 import { selectionOf, unionSelection } from '../document/selection';
@@ -6,6 +6,7 @@ import { EditorStore } from '../editor-store';
 
 /** Every placement in words, for keyboard and screen-reader users: choosing one selects it on the stage. */
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-placement-list',
   templateUrl: './placement-list.html',
   styleUrl: './placement-list.scss',

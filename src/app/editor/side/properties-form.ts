@@ -1,4 +1,4 @@
-import { Component, computed, inject, linkedSignal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, linkedSignal } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -10,6 +10,7 @@ import { placementFields, readNumber, type NumberField } from './placement-field
 
 /** The selected placement's position, face, turn and fitting parameters; a change is one undoable step. */
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-properties-form',
   imports: [MatButtonToggleModule, MatFormFieldModule, MatInputModule, MatSelectModule],
   templateUrl: './properties-form.html',

@@ -1,4 +1,4 @@
-import { Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component } from '@angular/core';
 
 /** The editor's keys, in one place, so that every action can be found without a mouse. */
 export const SHORTCUTS: readonly { keys: string; action: string }[] = [
@@ -18,6 +18,7 @@ export const SHORTCUTS: readonly { keys: string; action: string }[] = [
 ];
 
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-shortcut-list',
   templateUrl: './shortcut-list.html',
   styleUrl: './shortcut-list.scss',

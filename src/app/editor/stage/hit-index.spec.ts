@@ -15,7 +15,14 @@ describe('HitIndex', () => {
     }),
   ]);
   const panel = job.panels[0];
-  const index = new HitIndex(hitItems(panel, layoutPanel(panel, builtinCatalog(), job.system)));
+  const layout = layoutPanel(panel, builtinCatalog(), job.system);
+  const index = new HitIndex(hitItems(panel, layout));
+
+  it("gives a selection's items as the whole list has them", () => {
+    const all = hitItems(panel, layout);
+    expect(hitItems(panel, layout, { placements: new Set(['plate']), bores: new Set(['b1']) })).toEqual(all.filter((h) => h.id !== 'lost'));
+    expect(hitItems(panel, layout, { placements: new Set(['lost']), bores: new Set() })).toEqual(all.filter((h) => h.id === 'lost'));
+  });
 
   it('picks the item on the face shown before one on the other face', () => {
     expect(index.pick(37, 121, 1, 'A')?.id).toBe('plate');

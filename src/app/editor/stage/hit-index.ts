@@ -18,17 +18,22 @@ function union(boxes: Box[]): Box {
   return boxes.reduce<Box>((u, b) => [Math.min(u[0], b[0]), Math.min(u[1], b[1]), Math.max(u[2], b[2]), Math.max(u[3], b[3])], [Infinity, Infinity, -Infinity, -Infinity]);
 }
 
-/** Every item the pointer can pick on a panel, with its plan box in mm. */
-export function hitItems(panel: Panel, layout: PanelLayout): Hit[] {
+/**
+ * Every item the pointer can pick on a panel, with its plan box in mm; or only those of `only` (the
+ * selection, outlined on every move of a drag without boxing the panel's other bores).
+ */
+export function hitItems(panel: Panel, layout: PanelLayout, only?: { placements: ReadonlySet<string>; bores: ReadonlySet<string> }): Hit[] {
   const items: Hit[] = [];
   for (const bore of layout.bores)
-    if (!bore.placement) items.push({ kind: 'bore', id: bore.id, face: bore.kind === 'face' ? bore.face : 'edge', box: planBox(bore, panel) });
+    if (!bore.placement && (!only || only.bores.has(bore.id))) items.push({ kind: 'bore', id: bore.id, face: bore.kind === 'face' ? bore.face : 'edge', box: planBox(bore, panel) });
   for (const placed of layout.placed) {
+    if (only && !only.placements.has(placed.placement.id)) continue;
     const boxes = [...placed.bores.map((b) => planBox(b, panel)), ...placed.keepOuts.map((k) => k.box)];
     items.push({ kind: 'placement', id: placed.placement.id, face: placed.placement.face, box: union(boxes) });
   }
   for (const p of layout.unknown)
-    items.push({ kind: 'placement', id: p.id, face: p.face, box: [p.x - PLACEHOLDER_HALF, p.y - PLACEHOLDER_HALF, p.x + PLACEHOLDER_HALF, p.y + PLACEHOLDER_HALF] });
+    if (!only || only.placements.has(p.id))
+      items.push({ kind: 'placement', id: p.id, face: p.face, box: [p.x - PLACEHOLDER_HALF, p.y - PLACEHOLDER_HALF, p.x + PLACEHOLDER_HALF, p.y + PLACEHOLDER_HALF] });
   return items;
 }
 

@@ -48,7 +48,9 @@ function dimensions(layer: Konva.Layer, view: View, anchor: Point): void {
 /** Rings around every bore a finding concerns, and around a missing fitting's placeholder. */
 function findingRings(layer: Konva.Layer, scene: OverlayScene): void {
   const { view, layout } = scene;
-  const bores = new Map(layout.bores.map((b) => [b.id, b]));
+  // Only the bores the findings name, found in one pass: a map of every bore would cost each move of a drag.
+  const named = new Set(scene.findings.flatMap((f) => f.bores));
+  const bores = new Map(named.size === 0 ? [] : layout.bores.filter((b) => named.has(b.id)).map((b) => [b.id, b]));
   const unknown = new Map(layout.unknown.map((p) => [p.id, p]));
   const placed = new Map(layout.placed.map((p) => [p.placement.id, p]));
   for (const finding of scene.findings) {

@@ -1,4 +1,4 @@
-import { afterNextRender, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, untracked, viewChild } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, untracked, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
 import { fromEvent, map } from 'rxjs';
@@ -31,6 +31,7 @@ export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
  * gestures into the store's commands.
  */
 @Component({
+  changeDetection: ChangeDetectionStrategy.OnPush,
   selector: 'bw-panel-stage',
   templateUrl: './panel-stage.html',
   styleUrl: './panel-stage.scss',
@@ -72,8 +73,9 @@ export class PanelStage {
   });
   private readonly index = computed(() => new HitIndex(this.items()));
   private readonly selected = computed(() => {
-    const { placements, bores } = this.store.selection();
-    return this.items().filter((h) => (h.kind === 'placement' ? placements : bores).has(h.id));
+    const panel = this.store.panel();
+    const layout = this.store.layout();
+    return panel && layout ? hitItems(panel, layout, this.store.selection()) : [];
   });
   /** The first selected item's anchor, dimensioned from the reference and lower edges. */
   private readonly anchor = computed((): Point | undefined => {

@@ -14,6 +14,12 @@ describe('moveItems', () => {
     expect(next.bores[1]).toMatchObject({ edge: 'x0', at: 200.2 });
   });
 
+  it('keeps the loose bores themselves when only placements move, so a drag of a plate leaves the holes as drawn', () => {
+    const next = moveItems(panel, { selection: selectionOf(['plate-0-1']), dx: 0, dy: 32 });
+    expect(next.bores).toBe(panel.bores);
+    expect(next.placements[0]).toMatchObject({ x: 37, y: 137 });
+  });
+
   it('leaves the panel it was given alone', () => {
     moveItems(panel, { selection: selectionOf(['plate-0-1']), dx: 32, dy: 0 });
     expect(panel.placements[0].x).toBe(37);

@@ -20,13 +20,16 @@ export function moveBore(bore: Bore, dx: number, dy: number): Bore {
   return { ...bore, at: roundMm(bore.at + along) };
 }
 
-/** Moves the selected placements and loose bores by (dx, dy) in the panel's frame. */
+/**
+ * Moves the selected placements and loose bores by (dx, dy) in the panel's frame. The loose bores stay
+ * the same array when none of them moves, so that the stage sees at once that the panel's holes did not.
+ */
 export function moveItems(panel: Panel, { selection, dx, dy }: MoveParams): Panel {
   return {
     ...panel,
     placements: panel.placements.map((p) =>
       selection.placements.has(p.id) ? { ...p, x: roundMm(p.x + dx), y: roundMm(p.y + dy) } : p,
     ),
-    bores: panel.bores.map((b) => (selection.bores.has(b.id) ? moveBore(b, dx, dy) : b)),
+    bores: selection.bores.size === 0 ? panel.bores : panel.bores.map((b) => (selection.bores.has(b.id) ? moveBore(b, dx, dy) : b)),
   };
 }

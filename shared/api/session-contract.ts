@@ -1,0 +1,38 @@
+import * as z from 'zod/mini';
+import { ROLES } from './roles';
+
+/**
+ * The answers the app reads at its start (who is signed in, an error answer), in zod's tree-shakable
+ * `zod/mini` form: the first page loads them on demand (auth-store.ts, api-problem.ts) beside its first
+ * request, and carries no zod itself. contract.ts re-exports them; zod's classic schemas take them as
+ * parts like any other.
+ */
+
+export * from './roles';
+
+export const role = z.enum(ROLES);
+
+export const user = z.object({
+  id: z.number().check(z.int()),
+  email: z.string(),
+  name: z.string(),
+  role,
+});
+export type User = z.output<typeof user>;
+
+export const userAnswer = z.object({ user });
+/** GET /api/auth/session: who is signed in, or null. */
+export const sessionAnswer = z.object({ user: z.nullable(user) });
+
+/** Every error answer of the API has this shape. */
+export const apiError = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    /** Field messages by path, for 400s. */
+    fields: z.optional(z.record(z.string(), z.string())),
+    /** Every problem of an uploaded document, one line each, led by its path. */
+    details: z.optional(z.array(z.string())),
+  }),
+});
+export type ApiError = z.output<typeof apiError>;
