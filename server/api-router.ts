@@ -37,7 +37,7 @@ export function createApiRouter(deps: AppDeps): Router {
     mailer: deps.mailer,
     sessionSecret: deps.sessionSecret,
     // A pool starts no thread until a pack is asked for.
-    packPool: deps.packPool ?? new PackPool(),
+    packPool: deps.packPool ?? new PackPool(deps.logger),
     packProgress: new PackProgressBoard(),
   };
   const router = Router();

@@ -55,7 +55,7 @@ async function main(): Promise<void> {
   const seeded = config.demoAccounts && (await seedDemoShop(database.db));
 
   const mail = await startMail(config, database.db, logger);
-  const packPool = new PackPool();
+  const packPool = new PackPool(logger);
   const server = createServer(createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer, packPool }));
   await listen(server, config.port, config.host).catch((err: NodeJS.ErrnoException) =>
     fail(`Borewright cannot listen on ${config.host}:${config.port}: ${err.code === 'EADDRINUSE' ? 'the port is taken (set PORT)' : err.message}`),

@@ -9,6 +9,7 @@ import type { JobDocument } from '../../shared/model/job-document';
 import { larchLaneKitchen } from '../demo/larch-lane-kitchen';
 import { GENERATOR, packTools } from '../export/export-platform';
 import { packZipStream } from '../export/pack-zip';
+import { createLogger } from '../logger';
 import type { PackOrder, PackProgress } from './pack-order';
 import { PackPool } from './pack-pool';
 
@@ -29,7 +30,7 @@ async function collect(stream: NodeJS.ReadableStream): Promise<Buffer> {
 }
 
 describe('the pack worker pool', () => {
-  const pool = new PackPool(1);
+  const pool = new PackPool(createLogger('silent'), 1);
   afterAll(() => pool.close());
 
   it('gives the same zip, byte for byte, as the pack made on the request thread, and tells each panel it reaches', async () => {

@@ -2,6 +2,7 @@ import { availableParallelism } from 'node:os';
 import { Readable } from 'node:stream';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
+import type { Logger } from '../logger';
 import type { PackMessage, PackOrder, PackProgress } from './pack-order';
 
 declare const BUNDLED_WORKERS_URL: string | undefined;
@@ -12,8 +13,8 @@ declare const BUNDLED_WORKERS_URL: string | undefined;
  */
 function workerModule(): { filename: string; execArgv: string[] } {
   if (typeof BUNDLED_WORKERS_URL === 'string') return { filename: new URL('pack-worker.mjs', BUNDLED_WORKERS_URL).href, execArgv: [] };
-  const tsx = process.execArgv.some((arg, i, all) => /tsx/.test(arg) && /^--(import|loader|require)$/.test(all[i - 1] ?? ''));
-  return { filename: new URL('./pack-worker.ts', import.meta.url).href, execArgv: tsx ? [] : ['--import', 'tsx'] };
+  // Only the loader: a worker takes none of the process's own flags (a profiler's, say) once given these.
+  return { filename: new URL('./pack-worker.ts', import.meta.url).href, execArgv: ['--import', 'tsx'] };
 }
 
 /** What a pack being made gives: its name and error count once checked, the zip as a stream. */
@@ -30,9 +31,11 @@ export interface PackInMaking {
 export class PackPool {
   private readonly pool: Piscina;
 
-  constructor(threads = Math.max(1, Math.min(2, availableParallelism() - 1))) {
+  constructor(logger: Logger, threads = Math.max(1, Math.min(2, availableParallelism() - 1))) {
     const { filename, execArgv } = workerModule();
     this.pool = new Piscina({ filename, execArgv, minThreads: 0, maxThreads: threads, idleTimeout: 60_000 });
+    // A worker that fails outside a task (its module does not load, say): the task waiting on it fails too.
+    this.pool.on('error', (err: unknown) => logger.error({ err }, 'a pack worker failed'));
   }
 
   /**

@@ -1,8 +1,13 @@
+import { constants, setPriority } from 'node:os';
 import type { MessagePort } from 'node:worker_threads';
 import { planPack } from '../../shared/export/pack';
 import { GENERATOR, packTools } from '../export/export-platform';
 import { packZipStream } from '../export/pack-zip';
 import type { PackMessage, PackOrder } from './pack-order';
+
+// On Linux each thread has its own niceness, and 0 names the calling thread: a pack gives way to the
+// thread that answers requests when the cores are busy. Elsewhere 0 names the whole process, so not there.
+if (process.platform === 'linux') setPriority(0, constants.priority.PRIORITY_BELOW_NORMAL);
 
 /** Chunks of the zip sent and not yet taken by the response: the worker waits beyond this many. */
 const WINDOW = 8;

@@ -32,7 +32,7 @@ export async function createTestApp(
   const config = testConfig(options.config);
   const logger = options.logger ?? createLogger('silent');
   const mail = await startMail(config, database.db, logger);
-  const packPool = new PackPool(1);
+  const packPool = new PackPool(logger, 1);
   // A clock that stands still unless the test moves it: a slow machine cannot make a session time out.
   const start = Date.now();
   let offset = 0;
