@@ -37,7 +37,8 @@ describe('pack progress', () => {
     expect(reached).toEqual([...reached].sort((a, b) => a - b));
     expect(reached.some((panel) => panel > 0 && panel <= kitchen.panelCount)).toBe(true);
     expect((await viewer.get(`/api/pack-progress/${ticket}`).expect(404)).body.error.code).toBe('no-such-pack');
-  });
+    // A whole pack on a busy machine: more time than a plain request's test is given.
+  }, 120_000);
 
   it('refuses a ticket of the wrong form, and asks who is there first', async () => {
     const res = await viewer.get('/api/jobs/1/pack.zip?progress=short').expect(400);
