@@ -50,7 +50,8 @@ function line(run: Run, health: Run): string {
 
 async function main(): Promise<void> {
   const profile = process.argv.includes('--cpu-prof');
-  const server = await startThrowawayServer({ logLevel: 'error', nodeArgs: profile ? ['--cpu-prof', '--cpu-prof-dir=bench-profiles'] : [] });
+  // A busy machine can take minutes to migrate and seed a fresh data folder.
+  const server = await startThrowawayServer({ logLevel: 'error', seconds: 300, nodeArgs: profile ? ['--cpu-prof', '--cpu-prof-dir=bench-profiles'] : [] });
   const { baseUrl } = server;
   try {
     const session = new ApiSession(baseUrl);
