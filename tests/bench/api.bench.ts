@@ -30,8 +30,9 @@ async function load(label: string, url: string, headers: Record<string, string>,
   const result = await autocannon({ url, connections: CONNECTIONS, duration: seconds, headers });
   const counts = { '2xx': result['2xx'], '3xx': result['3xx'], '4xx': result['4xx'], '5xx': result['5xx'] };
   const wanted = `${String(expect)[0]}xx` as keyof typeof counts;
+  // Timeouts (10 s) are counted and shown, not fatal: on a crowded machine they are the figure.
   const others = result.requests.total - counts[wanted];
-  if (result.errors > 0 || others > CONNECTIONS) {
+  if (result.errors > result.timeouts || others > CONNECTIONS) {
     throw new Error(`${label}: expected ${expect} answers, got ${JSON.stringify(counts)}, ${result.errors} errors, ${result.timeouts} timeouts`);
   }
   return {
@@ -39,7 +40,7 @@ async function load(label: string, url: string, headers: Record<string, string>,
     rps: result.requests.average,
     p50: result.latency.p50,
     p99: result.latency.p99,
-    statuses: Object.entries(counts).filter(([, n]) => n > 0).map(([k, n]) => `${k} ${n}`).join(', '),
+    statuses: [...Object.entries(counts).filter(([, n]) => n > 0).map(([k, n]) => `${k} ${n}`), ...(result.timeouts ? [`timeouts ${result.timeouts}`] : [])].join(', '),
   };
 }
 
@@ -83,6 +84,7 @@ async function main(): Promise<void> {
     let packing = true;
     let packs = 0;
     const packUrl = `${baseUrl}/api/jobs/${imported.body.id}/pack.zip`;
+    // Its failure is reported after the reads, never left unheard.
     const downloader = (async () => {
       while (packing) {
         const res = await fetch(packUrl, { headers: cookie });
@@ -92,8 +94,8 @@ async function main(): Promise<void> {
       }
     })();
     await new Promise((r) => setTimeout(r, 500));
-    const underPack = await load('job, whole answer, a 300-panel pack running', jobUrl, cookie, 200);
-    packing = false;
+    downloader.catch(() => undefined);
+    const underPack = await load('job, whole answer, a 300-panel pack running', jobUrl, cookie, 200).finally(() => (packing = false));
     await downloader;
 
     console.log(line(health, health));
