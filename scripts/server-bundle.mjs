@@ -14,6 +14,12 @@ const outRoot = join(root, 'dist/server');
 export const ENTRIES = { main: 'server/main.ts', cli: 'server/cli/main.ts' };
 
 /**
+ * Worker threads' modules built beside a bundle's entry point, by their file name. The bundle's code finds
+ * them through BUNDLED_WORKERS_URL, its own folder's address (server/packs/pack-pool.ts).
+ */
+const WORKERS = { main: { 'pack-worker': 'server/packs/pack-worker.ts' } };
+
+/**
  * Sources find their files (fonts, migrations, the built app) relative to themselves: each keeps its own
  * import.meta.url inside the bundle, as the file it was compiled from.
  */
@@ -89,7 +95,11 @@ export async function buildBundle(name) {
   rmSync(fresh, { recursive: true, force: true });
   const result = await build({
     absWorkingDir: root,
-    entryPoints: { [name]: join(root, ENTRIES[name]) },
+    entryPoints: {
+      [name]: join(root, ENTRIES[name]),
+      ...Object.fromEntries(Object.entries(WORKERS[name] ?? {}).map(([file, source]) => [file, join(root, source)])),
+    },
+    define: { BUNDLED_WORKERS_URL: JSON.stringify(pathToFileURL(`${dir}/`).href) },
     // Split, so that what a command imports only when it runs (pdf-lib for a pack, say) loads only then.
     outdir: fresh,
     entryNames: '[name]',

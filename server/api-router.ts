@@ -14,6 +14,8 @@ import type { RouteContext } from './http/route-context';
 import { jobsRoutes } from './jobs/jobs.routes';
 import { labelsRoutes } from './labels/labels.routes';
 import { mailRoutes } from './mail/outbox.routes';
+import { PackPool } from './packs/pack-pool';
+import { PackProgressBoard } from './packs/pack-progress';
 import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
 import { plannerRoutes } from './planner/planner.routes';
@@ -35,6 +37,9 @@ export function createApiRouter(deps: AppDeps): Router {
     authenticator: createAuthenticator(db, config.demoAccounts),
     mailer: deps.mailer,
     sessionSecret: deps.sessionSecret,
+    // A pool starts no thread until a pack is asked for.
+    packPool: deps.packPool ?? new PackPool(deps.logger),
+    packProgress: new PackProgressBoard(),
   };
   const router = Router();
   router.use((_req, res, next) => {

@@ -10,6 +10,7 @@ import { loggedUrl } from './http/logged-url';
 import { securityHeaders } from './http/security-headers';
 import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
+import type { PackPool } from './packs/pack-pool';
 
 /** Where `ng build` puts the browser app. */
 export const DEFAULT_CLIENT_DIR = fileURLToPath(new URL('../dist/borewright/browser', import.meta.url));
@@ -22,6 +23,8 @@ export interface AppDeps {
   logger: Logger;
   /** Where the features' mail goes: the local catcher or the SMTP_URL server (mail/mailer.ts). */
   mailer: Mailer;
+  /** The worker threads that make bench packs; main.ts ends them at shutdown. A pool of its own when not given. */
+  packPool?: PackPool;
   /** The time sessions are judged by; tests move it forward instead of waiting. */
   clock?: () => Date;
   clientDir?: string;

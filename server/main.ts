@@ -6,6 +6,7 @@ import { ConfigError, loadConfig } from './config';
 import { databaseTarget, openDatabase } from './db/client';
 import { acquireDataLock, DataFolderLockedError } from './db/data-lock';
 import { createLogger } from './logger';
+import { PackPool } from './packs/pack-pool';
 
 /** Requests still running get this long after SIGTERM before their connections are cut. */
 const DRAIN_MS = 10_000;
@@ -59,7 +60,8 @@ async function main(): Promise<void> {
   const seeded = config.demoAccounts && (await seedDemoShop(database.db));
 
   const mail = await startMail(config, database.db, logger);
-  const server = createServer(createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer }));
+  const packPool = new PackPool(logger);
+  const server = createServer(createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer, packPool }));
   await listen(server, config.port, config.host).catch((err: NodeJS.ErrnoException) =>
     fail(`Borewright cannot listen on ${config.host}:${config.port}: ${err.code === 'EADDRINUSE' ? 'the port is taken (set PORT)' : err.message}`),
   );
@@ -90,8 +92,9 @@ async function main(): Promise<void> {
     logger.info({ signal }, 'stopping: no new connections, finishing requests');
     setTimeout(() => server.closeAllConnections(), DRAIN_MS).unref();
     server.close(() => {
-      mail
+      packPool
         .close()
+        .then(() => mail.close())
         .then(() => database.close())
         .then(() => {
           lock?.release();
@@ -99,7 +102,7 @@ async function main(): Promise<void> {
           process.exit(0);
         })
         .catch((err: unknown) => {
-          logger.error({ err }, 'closing the mail catcher or the database failed');
+          logger.error({ err }, 'ending the pack workers, the mail catcher or the database failed');
           process.exit(1);
         });
     });

@@ -9,6 +9,7 @@ const call = <T>(fn: (cb: (err: unknown, value?: T) => void) => void) =>
   new Promise<T | undefined>((resolve, reject) => fn((err, value) => (err ? reject(err) : resolve(value))));
 
 const session = (expires: Date, user = 7) => ({ cookie: { expires: expires.toISOString(), originalMaxAge: 1000 }, passport: { user } }) as unknown as SessionData;
+const signedOut = (expires: Date) => ({ cookie: { expires: expires.toISOString(), originalMaxAge: 1000 }, csrfToken: 't' }) as unknown as SessionData;
 
 describe('DrizzleSessionStore', () => {
   let database: DatabaseHandle;
@@ -26,12 +27,21 @@ describe('DrizzleSessionStore', () => {
     expect(await call<SessionData | null>((cb) => store.get('a', cb))).toMatchObject({ passport: { user: 7 } });
     await call((cb) => store.set('a', session(later(), 8), cb));
     expect(await call<SessionData | null>((cb) => store.get('a', cb))).toMatchObject({ passport: { user: 8 } });
-    const extended = new Date(Date.now() + 7_200_000);
-    await call((cb) => store.touch('a', session(extended, 8), cb));
-    const [row] = await database.db.select().from(sessions);
-    expect(row.expire.getTime()).toBe(extended.getTime());
     await call((cb) => store.destroy('a', cb));
     expect(await call((cb) => store.get('a', cb))).toBeNull();
+  });
+
+  it('moves the expiry of a session not signed in when touched, and leaves a signed-in one to its recorded requests', async () => {
+    const expiry = async (sid: string) => (await database.db.select().from(sessions)).find((r) => r.sid === sid)!.expire.getTime();
+    const extended = new Date(Date.now() + 7_200_000);
+    await call((cb) => store.set('visitor', signedOut(later()), cb));
+    await call((cb) => store.touch('visitor', signedOut(extended), cb));
+    expect(await expiry('visitor')).toBe(extended.getTime());
+    const written = later();
+    await call((cb) => store.set('member', session(written), cb));
+    await call((cb) => store.touch('member', session(extended), cb));
+    expect(await expiry('member')).toBe(written.getTime());
+    for (const sid of ['visitor', 'member']) await call((cb) => store.destroy(sid, cb));
   });
 
   it('never returns an expired session, and prunes expired rows', async () => {

@@ -49,7 +49,16 @@ export class DrizzleSessionStore extends Store {
     );
   }
 
+  /**
+   * Called on every answer that left the session unchanged (the cookie rolls). A signed-in session's row
+   * is written whenever its last request is recorded (session-timeouts.ts), with an expiry no earlier than
+   * the idle timeout would end it, so only a session that is not signed in needs the write.
+   */
   override touch(sid: string, sess: SessionData, callback?: Callback): void {
+    if (sess.passport?.user !== undefined) {
+      callback?.();
+      return;
+    }
     this.settle(this.db.update(sessions).set({ expire: DrizzleSessionStore.expiry(sess) }).where(eq(sessions.sid, sid)), callback);
   }
 

@@ -56,11 +56,13 @@ function present<T>(value: T | null, column: string): T {
 }
 
 /**
- * jsonb keeps object keys in its own order (shortest first); a document people read should list
- * them as the schema does. The value was valid when stored, so parsing only reorders.
+ * jsonb keeps object keys in its own order (shortest first); a document people read should list them as
+ * the schema does. The value was validated when it was stored, so it is reordered, not parsed again.
  */
-function inSchemaOrder<T>(schema: { parse(value: unknown): T }, value: T): T {
-  return schema.parse(value);
+function inSchemaOrder<T extends object>(schema: { shape: Record<string, unknown> }, value: T): T {
+  const ordered: Record<string, unknown> = {};
+  for (const key of Object.keys(schema.shape)) if (key in value) ordered[key] = value[key as keyof T];
+  return ordered as T;
 }
 
 const byId = <T extends { id: number }>(rows: readonly T[]) => [...rows].sort((a, b) => a.id - b.id);

@@ -2,6 +2,8 @@ import type { Authenticator } from '../auth/passport';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
 import type { Mailer } from '../mail/mailer';
+import type { PackPool } from '../packs/pack-pool';
+import type { PackProgressBoard } from '../packs/pack-progress';
 
 /** What every feature's routes may use. */
 export interface RouteContext {
@@ -12,4 +14,8 @@ export interface RouteContext {
   mailer: Mailer;
   /** Signs session cookies, and the pack links that work without signing in. */
   sessionSecret: string;
+  /** The worker threads that make bench packs. */
+  packPool: PackPool;
+  /** How far each pack being made here has got, by its download's ticket. */
+  packProgress: PackProgressBoard;
 }

@@ -45,26 +45,42 @@ export async function lockJob(tx: Database, id: number) {
   return row;
 }
 
-/** Everything stored for one job, children in stored order; undefined when there is no such job. */
+/**
+ * What identifies the job's stored state: its version and the transaction that last wrote its row. Every
+ * change to the job or anything in it writes the row (`touchJob` in the same transaction), so any change
+ * gives a new stamp, and a database restored or rebuilt gives a new `updatedAt` too.
+ */
+export async function findJobStamp(db: Database, id: number): Promise<{ version: number; writtenBy: string; updatedAt: string } | undefined> {
+  const [row] = await db
+    .select({ version: jobs.version, writtenBy: sql<string>`${jobs}.xmin::text`, updatedAt: sql<string>`(extract(epoch from ${jobs.updatedAt}) * 1000000)::bigint::text` })
+    .from(jobs)
+    .where(eq(jobs.id, id));
+  return row;
+}
+
+/**
+ * Everything stored for one job, children in stored order; undefined when there is no such job. One query
+ * per table; a panel's `statusBy` member comes with its row.
+ */
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
   const job = await findJob(db, id);
   if (!job) return undefined;
   const panelIds = db.select({ id: panels.id }).from(panels).where(eq(panels.jobId, id));
-  const markedBy = db.select({ id: panels.statusBy }).from(panels).where(eq(panels.jobId, id));
-  const [carcassRows, panelRows, placementRows, boreRows, people] = await Promise.all([
+  const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
     db.select().from(carcasses).where(eq(carcasses.jobId, id)).orderBy(asc(carcasses.id)),
-    db.select().from(panels).where(eq(panels.jobId, id)).orderBy(asc(panels.id)),
+    db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(eq(panels.jobId, id)).orderBy(asc(panels.id)),
     db.select().from(placements).where(inArray(placements.panelId, panelIds)).orderBy(asc(placements.id)),
     db.select().from(bores).where(inArray(bores.panelId, panelIds)).orderBy(asc(bores.id)),
-    db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, markedBy)),
   ]);
+  const people = new Map<number, string>();
+  for (const { panel, statusByName } of panelRows) if (panel.statusBy !== null && statusByName !== null) people.set(panel.statusBy, statusByName);
   return {
     job,
     carcasses: carcassRows,
-    panels: panelRows,
+    panels: panelRows.map((r) => r.panel),
     placements: placementRows,
     bores: boreRows,
-    people: new Map(people.map((p) => [p.id, p.name])),
+    people,
   };
 }
 

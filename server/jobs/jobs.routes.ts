@@ -5,10 +5,12 @@ import { invalidField } from '../http/app-error';
 import { fileUpload, jsonBody, uploadedFileName } from '../http/body';
 import type { RouteContext } from '../http/route-context';
 import { documentFileName } from './document-file-name';
+import { JobDetailReads } from './job-detail-reads';
 import * as jobs from './jobs.service';
 
 /** The jobs: list, create, import, read, change, download as a document, add carcasses. */
 export function jobsRoutes(router: Router, { db }: RouteContext): void {
+  const details = new JobDetailReads();
   router.get('/jobs', requirePermission('readJobs'), async (req, res) => {
     const { archived } = jobListQuery.parse(req.query);
     res.json({ jobs: await jobs.listJobs(db, archived) });
@@ -24,9 +26,13 @@ export function jobsRoutes(router: Router, { db }: RouteContext): void {
     res.status(201).json(await jobs.importJob(db, req.user!, doc, uploadedFileName(req.file)));
   });
 
+  // After the permission check: a 304 tells that the job is unchanged, which only a reader may learn.
   router.get('/jobs/:jobId', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
-    res.json(await jobs.jobDetail(db, jobId));
+    const etag = await details.etag(db, jobId);
+    res.set('ETag', etag);
+    if (req.fresh) res.status(304).end();
+    else res.type('json').send(await details.body(db, jobId, etag));
   });
 
   router.patch('/jobs/:jobId', requirePermission('editJobs'), jsonBody, async (req, res) => {

@@ -37,12 +37,13 @@ async function jobRows(db: Database, jobId: number) {
   return rows;
 }
 
-/** A job with its materials, carcasses and panels, for the job page. */
+/** A job with its materials, carcasses and panels, for the job page; its counts are those of the rows read. */
 export async function jobDetail(db: Database, jobId: number): Promise<JobDetail> {
   const rows = await jobRows(db, jobId);
   const { materials, system, limits, carcasses } = toJobDocument(rows);
+  const { id, name, client, notes, archived, version, updatedAt } = rows.job;
   return {
-    job: { ...(await jobSummary(db, jobId)), notes: rows.job.notes },
+    job: { id, name, client, archived, version, carcassCount: rows.carcasses.length, panelCount: rows.panels.length, updatedAt: updatedAt.toISOString(), notes },
     materials,
     system,
     limits,

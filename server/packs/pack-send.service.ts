@@ -1,22 +1,21 @@
-import { Readable } from 'node:stream';
+import type { Readable } from 'node:stream';
 import type { z } from 'zod';
 import type { User } from '../../shared/api/contract';
 import type { PackSent, packSendBody } from '../../shared/api/pack-contract';
 import { PAPER } from '../../shared/export/paper';
 import { recordActivity } from '../activity/activity.repository';
-import { packZipStream } from '../export/pack-zip';
 import type { RouteContext } from '../http/route-context';
 import { PACK_LINK_DAYS, signPackLink } from './pack-links';
-import { jobPack } from './packs.service';
+import { jobPackOrder } from './packs.service';
 
 const megabytes = (bytes: number) => `${(bytes / 1e6).toFixed(1)} MB`;
 
 /** The zip's bytes when it is at most `limit` long; undefined, and the zipping stopped, as soon as it is longer. */
-async function zipUpTo(zip: NodeJS.ReadableStream, limit: number): Promise<Buffer | undefined> {
+async function zipUpTo(zip: Readable, limit: number): Promise<Buffer | undefined> {
   const chunks: Buffer[] = [];
   let size = 0;
-  // jszip's stream is of an older kind; wrapped, it can be read with for-await and stopped by leaving the loop.
-  for await (const chunk of new Readable().wrap(zip)) {
+  // Leaving the loop destroys the stream, which stops the worker making the pack.
+  for await (const chunk of zip) {
     size += (chunk as Buffer).length;
     if (size > limit) return undefined;
     chunks.push(chunk as Buffer);
@@ -30,8 +29,12 @@ async function zipUpTo(zip: NodeJS.ReadableStream, limit: number): Promise<Buffe
  */
 export async function sendPack(context: RouteContext, actor: User, jobId: number, body: z.output<typeof packSendBody>, origin: string): Promise<PackSent> {
   const date = context.clock();
-  const { pack, fileName, jobName } = await jobPack(context.db, jobId, body.paper, date, origin);
-  const zip = await zipUpTo(packZipStream(pack, date), context.config.packAttachLimitBytes);
+  const order = await jobPackOrder(context.db, jobId, body.paper, date, origin);
+  const making = context.packPool.make(order);
+  const { root, errors } = await making.planned;
+  const fileName = `${root}.zip`;
+  const jobName = order.job.name;
+  const zip = await zipUpTo(making.zip, context.config.packAttachLimitBytes);
   const expiresAt = new Date(date.getTime() + PACK_LINK_DAYS * 86_400_000);
   const link = zip ? undefined : `${origin}/api/pack-links/${signPackLink(context.sessionSecret, { jobId, paper: body.paper, expiresAt: expiresAt.getTime() })}`;
 
@@ -42,7 +45,7 @@ export async function sendPack(context: RouteContext, actor: User, jobId: number
     zip
       ? `The pack is attached: ${fileName} (${megabytes(zip.length)}).`
       : `The pack is too large to attach. Download it here until ${expiresAt.toISOString().slice(0, 10)}; it is made from the job as it is when you download it:\n${link}`,
-    ...(pack.errors > 0 ? ['', `The checks found ${pack.errors} error${pack.errors === 1 ? '' : 's'} in this job; the cover sheet says so. Do not drill what they concern until it is put right.`] : []),
+    ...(errors > 0 ? ['', `The checks found ${errors} error${errors === 1 ? '' : 's'} in this job; the cover sheet says so. Do not drill what they concern until it is put right.`] : []),
     '',
     'Before drilling from a printed template, check the 100 mm bar on every page.',
   ];

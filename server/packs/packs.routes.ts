@@ -1,9 +1,10 @@
 import type { Response, Router } from 'express';
 import { pipeline } from 'node:stream/promises';
 import { jobParams, panelParams } from '../../shared/api/contract';
-import { drillingMapQuery, packSendBody, paperQuery } from '../../shared/api/pack-contract';
-import { packZipStream } from '../export/pack-zip';
+import { drillingMapQuery, packQuery, packSendBody, paperQuery } from '../../shared/api/pack-contract';
 import { requirePermission } from '../auth/require-permission';
+import { packZipStream } from '../export/pack-zip';
+import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
 import type { RouteContext } from '../http/route-context';
 import { verifyPackLink } from './pack-links';
@@ -15,14 +16,22 @@ function sendFile(res: Response, file: packs.DownloadFile): void {
   res.attachment(file.name).type(file.type).send(typeof file.bytes === 'string' ? file.bytes : Buffer.from(file.bytes));
 }
 
-/** Streams a job's pack as a zip; each file is made when the zip reaches it, so no length is known up front. */
-async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string): Promise<void> {
-  const date = context.clock();
-  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date, origin);
-  res.attachment(fileName).type('application/zip');
-  // Once the first bytes are out, a failure can only cut the download short; the error handler then
-  // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
-  await pipeline(packZipStream(pack, date), res);
+/**
+ * Streams a job's pack as a zip, made by a pack worker, each file when the zip reaches it, so no length is
+ * known up front. With a progress ticket, /api/pack-progress/:ticket tells how far it has got meanwhile.
+ */
+async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string, ticket?: string): Promise<void> {
+  const order = await packs.jobPackOrder(context.db, jobId, paper, context.clock(), origin);
+  const making = context.packPool.make(order, ticket ? context.packProgress.start(ticket, order.job.panels.length) : undefined);
+  try {
+    const { root } = await making.planned;
+    res.attachment(`${root}.zip`).type('application/zip');
+    // Once the first bytes are out, a failure can only cut the download short; the error handler then
+    // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
+    await pipeline(making.zip, res);
+  } finally {
+    if (ticket) context.packProgress.finish(ticket);
+  }
 }
 
 /** The bench pack: a panel's drilling map, DXF, drilling programs and template sheets; the job's findings and whole pack; sending it. */
@@ -61,8 +70,14 @@ export function packsRoutes(router: Router, context: RouteContext): void {
 
   router.get('/jobs/:jobId/pack.zip', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
-    const { paper } = paperQuery.parse(req.query);
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req));
+    const { paper, progress } = packQuery.parse(req.query);
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req), progress);
+  });
+
+  router.get('/pack-progress/:ticket', requirePermission('readJobs'), (req, res) => {
+    const progress = context.packProgress.get(String(req.params.ticket));
+    if (!progress) throw new AppError(404, 'no-such-pack', 'No pack is being made under this ticket: it has finished, or never started here.');
+    res.json(progress);
   });
 
   router.post('/jobs/:jobId/pack/send', requirePermission('editJobs'), jsonBody, async (req, res) => {

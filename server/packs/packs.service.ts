@@ -4,8 +4,8 @@ import { checkJob, checkPanel } from '../../shared/checks/index';
 import { panelDrillingMaps } from '../../shared/export/drilling-map';
 import type { ExportContext } from '../../shared/export/export-context';
 import { mapViews } from '../../shared/export/map-view';
-import { planPack, type Pack } from '../../shared/export/pack';
 import { safeSegment } from '../../shared/export/pack-paths';
+import type { Pack } from '../../shared/export/pack';
 import type { PaperName } from '../../shared/export/paper';
 import { panelDrilling } from '../../shared/export/panel-drilling';
 import { drillingPrograms } from '../../shared/export/drilling-programs';
@@ -21,6 +21,7 @@ import { AppError, notFound } from '../http/app-error';
 import { loadJobRows } from '../jobs/jobs.repository';
 import { findPanel } from '../panels/panels.repository';
 import { shopMachineSettings } from '../settings/settings.service';
+import type { PackOrder } from './pack-order';
 
 /** A file to send back: its name for Content-Disposition, its type and its bytes. */
 export interface DownloadFile {
@@ -97,15 +98,15 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
 }
 
 /**
- * A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. Its panel
- * labels' codes open the bench page on each panel at `origin`; its drilling programs follow the shop's
- * machine settings.
+ * What a job's bench pack is made from, for a pack worker (pack-pool.ts): the job as stored, the shop's
+ * catalog and machine settings (its drilling programs follow them), each panel's version, and the address
+ * each panel label's code opens (the bench page on that panel at `origin`).
  */
-export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<{ pack: Pack; fileName: string; jobName: string }> {
+export async function jobPackOrder(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<PackOrder> {
   const ctx = await jobContext(db, jobId, date);
-  const labelLink = (panel: { id: string }) => `${origin}${benchPanelPath(jobId, ctx.panelIds.get(panel.id)!)}`;
-  const pack = planPack({ ctx, paper, labelLink, machine: await shopMachineSettings(db), ...(await packTools()) });
-  return { pack, fileName: `${pack.root}.zip`, jobName: ctx.job.name };
+  const panelVersions = Object.fromEntries(ctx.job.panels.map((p) => [p.id, ctx.panelVersion!(p.id)!]));
+  const labelLinks = Object.fromEntries(ctx.job.panels.map((p) => [p.id, `${origin}${benchPanelPath(jobId, ctx.panelIds.get(p.id)!)}`]));
+  return { job: ctx.job, catalog: ctx.catalog, date, paper, panelVersions, labelLinks, machine: await shopMachineSettings(db) };
 }
 
 /** The checks' findings of a job, counted by severity, for a screen that asks before packing a job with errors. */

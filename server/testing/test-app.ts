@@ -3,6 +3,7 @@ import { loadConfig, type Config } from '../config';
 import type { DatabaseHandle } from '../db/client';
 import { createLogger, type Logger } from '../logger';
 import { startMail, type Mailer } from '../mail/mailer';
+import { PackPool } from '../packs/pack-pool';
 import { openTestDatabase } from './test-database';
 
 /** The session secret of every test app: tests sign pack links with it. */
@@ -31,6 +32,7 @@ export async function createTestApp(
   const config = testConfig(options.config);
   const logger = options.logger ?? createLogger('silent');
   const mail = await startMail(config, database.db, logger);
+  const packPool = new PackPool(logger, 1);
   // A clock that stands still unless the test moves it: a slow machine cannot make a session time out.
   const start = Date.now();
   let offset = 0;
@@ -40,6 +42,7 @@ export async function createTestApp(
     sessionSecret: TEST_SESSION_SECRET,
     logger,
     mailer: mail.mailer,
+    packPool,
     clock: () => new Date(start + offset),
     clientDir: options.clientDir,
   });
@@ -51,6 +54,7 @@ export async function createTestApp(
       offset += ms;
     },
     close: async () => {
+      await packPool.close();
       await mail.close();
       await database.close();
     },

@@ -11,6 +11,18 @@ import { dbId } from './contract';
 /** The paper the template sheets are tiled onto; A4 unless asked. */
 export const paperQuery = z.object({ paper: z.enum(['a4', 'letter'], 'must be "a4" or "letter"').default('a4') });
 
+/**
+ * The bench pack's download: the paper, and a ticket the client makes up to follow the pack's progress
+ * at /api/pack-progress/:ticket while it downloads.
+ */
+export const packQuery = paperQuery.extend({
+  progress: z.string().regex(/^[A-Za-z0-9_-]{16,64}$/, 'must be 16 to 64 letters, digits, "-" or "_"').optional(),
+});
+
+/** A pack being made: the panel whose files are being made (0 while the cover and lists are), of how many. */
+export const packProgress = z.object({ panel: z.number().int(), panels: z.number().int() });
+export type PackProgressAnswer = z.output<typeof packProgress>;
+
 /** Which face's drilling map: A always exists, B when the panel has face B bores. */
 export const drillingMapQuery = z.object({ face: z.enum(['A', 'B'], 'must be "A" or "B"').default('A') });
 

@@ -34,8 +34,8 @@ export interface PackInput extends PanelFileOptions {
    * server that has one; labels made without it carry no code.
    */
   labelLink?: (panel: Panel) => string;
-  /** Told after each file is made: how many are done, of how many, and what the last one was. */
-  onProgress?: (done: number, total: number, label: string) => void;
+  /** Told after each file is made: how many are done, of how many, what the last one was and, for a panel's file, the panel's id. */
+  onProgress?: (done: number, total: number, label: string, panel?: string) => void;
 }
 
 /** A file of the pack: its path in the zip and its bytes, made when asked for. */
@@ -104,7 +104,7 @@ export function planPack(input: PackInput): Pack {
   }
 
   const fixed = (name: string, label: string, compress: boolean, produce: () => Promise<Uint8Array>) => ({ path: name, file: { name, label, compress, produce } });
-  const entries: { path: string; file: ExportFile }[] = [
+  const entries: { path: string; file: ExportFile; panel?: string }[] = [
     fixed(FIXED.cover, 'cover sheet', false, () => {
       // The sheets to print, counted as the template files lay them out.
       const panels = drilling.map((d) => ({ drilling: d, sheets: templateSheetCount(ctx, d, input.paper) }));
@@ -130,13 +130,13 @@ export function planPack(input: PackInput): Pack {
 
   const total = entries.length + 1;
   const recorded = new Map<string, ManifestFile>();
-  const files: PackFile[] = entries.map(({ path, file }) => ({
+  const files: PackFile[] = entries.map(({ path, file, panel }) => ({
     path: `${root}/${path}`,
     compress: file.compress,
     bytes: async () => {
       const bytes = await file.produce();
       recorded.set(path, { path, bytes: bytes.length, sha256: await input.sha256(bytes) });
-      input.onProgress?.(recorded.size, total, file.label);
+      input.onProgress?.(recorded.size, total, file.label, panel);
       return bytes;
     },
   }));

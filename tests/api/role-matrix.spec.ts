@@ -85,6 +85,8 @@ const ROUTES: Record<string, Row> = {
   'GET /api/panels/:panelId/template.pdf': { request: (c, f) => c.get(`/api/panels/${f.panel.dbId}/template.pdf?paper=letter`), expect: [401, 200, 200, 200, 200] },
   'GET /api/jobs/:jobId/findings': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/findings`), expect: [401, 200, 200, 200, 200] },
   'GET /api/jobs/:jobId/pack.zip': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/pack.zip`), expect: [401, 200, 200, 200, 200] },
+  // No pack is being made under this ticket: a reader hears so, anyone else is refused first.
+  'GET /api/pack-progress/:ticket': { request: (c) => c.get('/api/pack-progress/no-such-pack-0123456789'), expect: [401, 404, 404, 404, 404] },
   'POST /api/jobs/:jobId/pack/send': {
     request: (c, f) => c.post(`/api/jobs/${f.jobId}/pack/send`).send({ to: ['bench@greyfield.example'], paper: 'a4' }),
     expect: [401, 200, 200, 403, 403],

@@ -12,40 +12,12 @@ import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { XSRF_COOKIE, XSRF_HEADER } from '../../server/auth/csrf';
-import { DEMO_PASSWORD } from '../../server/demo/greyfield-people';
+import { ApiSession } from '../api-session';
 import { freePort } from '../free-port';
 
 const ROUNDS = Number(process.env.CRASH_ROUNDS ?? 20);
 const WORKERS = 6;
 const root = path.resolve(import.meta.dirname, '../..');
-
-/** A browser's view of the API: one cookie jar, the XSRF token echoed on writes. */
-class Client {
-  private cookies = new Map<string, string>();
-  constructor(private readonly base: string) {}
-
-  async request(method: string, url: string, body?: unknown): Promise<{ status: number; body: any }> {
-    const headers: Record<string, string> = { cookie: [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ') };
-    const token = this.cookies.get(XSRF_COOKIE);
-    if (method !== 'GET' && token) headers[XSRF_HEADER] = decodeURIComponent(token);
-    if (body !== undefined) headers['content-type'] = 'application/json';
-    const res = await fetch(`${this.base}${url}`, { method, headers, body: body === undefined ? undefined : JSON.stringify(body) });
-    for (const cookie of res.headers.getSetCookie()) {
-      const [pair] = cookie.split(';');
-      const at = pair.indexOf('=');
-      this.cookies.set(pair.slice(0, at), pair.slice(at + 1));
-    }
-    const text = await res.text();
-    return { status: res.status, body: text.startsWith('{') ? JSON.parse(text) : text };
-  }
-
-  async signIn(email: string): Promise<void> {
-    await this.request('GET', '/api/auth/me');
-    const res = await this.request('POST', '/api/auth/sign-in', { email, password: DEMO_PASSWORD });
-    if (res.status !== 200) throw new Error(`sign-in answered ${res.status}: ${JSON.stringify(res.body)}`);
-  }
-}
 
 function startServer(dataDir: string, port: number): ChildProcess {
   // Node itself with tsx as its loader: SIGKILL then reaches the server, not a wrapper.
@@ -97,7 +69,7 @@ async function main(): Promise<void> {
   try {
     if (!(await opened(base, server, 120))) throw new Error('the server did not start on a fresh data folder');
     for (let round = 1; round <= ROUNDS; round++) {
-      const client = new Client(base);
+      const client = new ApiSession(base);
       await client.signIn('designer@greyfield.example');
       while (chains.length < WORKERS) {
         const { body } = await client.request('POST', '/api/jobs', { name: `Notes chain ${chains.length + 1}` });
@@ -138,7 +110,7 @@ async function main(): Promise<void> {
         continue;
       }
       reopened++;
-      const reader = new Client(base);
+      const reader = new ApiSession(base);
       await reader.signIn('designer@greyfield.example');
       const listed = new Map<number, string>((await reader.request('GET', '/api/jobs?archived=false')).body.jobs.map((j: { id: number; name: string }) => [j.id, j.name]));
       for (const [id, name] of jobs) {

@@ -1,8 +1,8 @@
 import { HttpClient, HttpEvent } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import { firstValueFrom, Observable } from 'rxjs';
+import { catchError, firstValueFrom, map, Observable, of, throwError } from 'rxjs';
 import { PanelRecord } from '../../../shared/api/contract';
-import { PackSendBody, packSent, PackSent } from '../../../shared/api/pack-contract';
+import { packProgress, PackProgressAnswer, PackSendBody, packSent, PackSent } from '../../../shared/api/pack-contract';
 import { PaperName } from '../../../shared/export/paper';
 import { isEdgeBore } from '../../../shared/model/job-document';
 
@@ -40,9 +40,21 @@ export function attachmentName(header: string | null, fallback: string): string 
 export class PackApi {
   private readonly http = inject(HttpClient);
 
-  /** The pack as a Blob; the events carry the bytes received so far (the total is not known while it streams). */
-  downloadPack(jobId: number, paper: PaperName): Observable<HttpEvent<Blob>> {
-    return this.http.get(packUrl(jobId), { params: { paper }, responseType: 'blob', reportProgress: true, observe: 'events' });
+  /**
+   * The pack as a Blob; the events carry the bytes received so far (the total is not known while it streams).
+   * `ticket` names the pack for `packProgress` while the server makes it.
+   */
+  downloadPack(jobId: number, paper: PaperName, ticket: string): Observable<HttpEvent<Blob>> {
+    return this.http.get(packUrl(jobId), { params: { paper, progress: ticket }, responseType: 'blob', reportProgress: true, observe: 'events' });
+  }
+
+  /** How far the server has got with the pack of `ticket`; null before it starts and once it is done. */
+  packProgress(ticket: string): Observable<PackProgressAnswer | null> {
+    return this.http.get(`/api/pack-progress/${ticket}`).pipe(
+      map((body) => packProgress.parse(body)),
+      // 404 (an ApiProblem past the error interceptor): no pack of this ticket is being made now.
+      catchError((error: unknown) => ((error as { status?: number }).status === 404 ? of(null) : throwError(() => error))),
+    );
   }
 
   async sendPack(jobId: number, body: PackSendBody): Promise<PackSent> {

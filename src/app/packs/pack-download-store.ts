@@ -1,19 +1,27 @@
 import { HttpEvent, HttpEventType } from '@angular/common/http';
 import { computed, inject, Injectable } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { catchError, filter, map, Observable, of, startWith, Subject, switchMap } from 'rxjs';
+import { catchError, endWith, exhaustMap, filter, ignoreElements, map, merge, Observable, of, scan, share, startWith, Subject, switchMap, takeUntil, timer } from 'rxjs';
+import { PackProgressAnswer } from '../../../shared/api/pack-contract';
 import { PaperName } from '../../../shared/export/paper';
 import { describeError } from '../core/api-problem';
 import { attachmentName, PackApi } from './pack-api';
 
 export type DownloadState =
   | { step: 'idle' }
-  /** The server makes each file as the zip reaches it, so only the bytes so far are known. */
-  | { step: 'downloading'; received: number }
+  /**
+   * The server makes each file as the zip reaches it, so only the bytes so far are known, and, once the
+   * server says, the panel it has reached.
+   */
+  | { step: 'downloading'; received: number; packed?: PackProgressAnswer }
   | { step: 'done'; fileName: string; blob: Blob }
   | { step: 'failed'; message: string };
 
 const idle: DownloadState = { step: 'idle' };
+const starting: DownloadState = { step: 'downloading', received: 0 };
+
+/** How often the server is asked how far the pack has got, while it downloads. */
+export const PROGRESS_POLL_MS = 500;
 
 /** One pack download at a time: starting another or cancelling drops the one under way. */
 @Injectable()
@@ -37,10 +45,24 @@ export class PackDownloadStore {
   }
 
   private download(jobId: number, paper: PaperName): Observable<DownloadState> {
-    return this.api.downloadPack(jobId, paper).pipe(
+    const ticket = crypto.randomUUID();
+    const download = this.api.downloadPack(jobId, paper, ticket).pipe(
       map(stateOf),
       filter((state): state is DownloadState => state !== null),
-      startWith<DownloadState>({ step: 'downloading', received: 0 }),
+      share(),
+    );
+    // Asked one at a time (a slow answer is not asked again over), until the download ends.
+    const packed = timer(PROGRESS_POLL_MS, PROGRESS_POLL_MS).pipe(
+      exhaustMap(() => this.api.packProgress(ticket)),
+      filter((progress): progress is PackProgressAnswer => progress !== null),
+      takeUntil(download.pipe(ignoreElements(), endWith(true))),
+    );
+    return merge(download, packed).pipe(
+      scan((state: DownloadState, next: DownloadState | PackProgressAnswer): DownloadState => {
+        if (!('step' in next)) return state.step === 'downloading' ? { ...state, packed: next } : state;
+        return next.step === 'downloading' && state.step === 'downloading' && state.packed ? { ...next, packed: state.packed } : next;
+      }, starting),
+      startWith(starting),
       catchError((error: unknown) => of<DownloadState>({ step: 'failed', message: describeError(error) })),
     );
   }

@@ -1,0 +1,48 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { packProgress, type PackProgressAnswer } from '../../shared/api/pack-contract';
+import { ApiClient, signedIn } from '../testing/api-client';
+import { binaryBody } from '../testing/binary-body';
+import { createTestApp, type TestApp } from '../testing/test-app';
+
+describe('pack progress', () => {
+  let t: TestApp;
+  let viewer: ApiClient;
+  beforeAll(async () => {
+    t = await createTestApp();
+    viewer = await signedIn(t.app, 'viewer@greyfield.example');
+  });
+  afterAll(() => t.close());
+
+  it('tells which panel the pack has reached while it downloads, and forgets the ticket once it is done', async () => {
+    const { body } = await viewer.get('/api/jobs').expect(200);
+    const kitchen = body.jobs.find((j: { name: string }) => j.name === 'Larch Lane kitchen') as { id: number; panelCount: number };
+    const ticket = 'kitchen-pack-0123456789';
+    const heard: PackProgressAnswer[] = [];
+    let done = false;
+    const download = viewer
+      .get(`/api/jobs/${kitchen.id}/pack.zip?progress=${ticket}`)
+      .buffer(true)
+      .parse(binaryBody)
+      .then((res) => ((done = true), res));
+    // The request thread answers while a worker makes the pack.
+    while (!done) {
+      const res = await viewer.get(`/api/pack-progress/${ticket}`);
+      if (res.status === 200) heard.push(packProgress.parse(res.body));
+      await new Promise((r) => setTimeout(r, 10));
+    }
+    expect((await download).status).toBe(200);
+    expect(heard.length).toBeGreaterThan(0);
+    for (const progress of heard) expect(progress.panels).toBe(kitchen.panelCount);
+    const reached = heard.map((p) => p.panel);
+    expect(reached).toEqual([...reached].sort((a, b) => a - b));
+    expect(reached.some((panel) => panel > 0 && panel <= kitchen.panelCount)).toBe(true);
+    expect((await viewer.get(`/api/pack-progress/${ticket}`).expect(404)).body.error.code).toBe('no-such-pack');
+    // A whole pack on a busy machine: more time than a plain request's test is given.
+  }, 120_000);
+
+  it('refuses a ticket of the wrong form, and asks who is there first', async () => {
+    const res = await viewer.get('/api/jobs/1/pack.zip?progress=short').expect(400);
+    expect(res.body.error.fields).toHaveProperty('progress');
+    await new ApiClient(t.app).get('/api/pack-progress/kitchen-pack-0123456789').expect(401);
+  });
+});
