@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { text } from '../model/well-formed-text';
+import { lengthUnit } from '../units/length-unit';
 import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement, shopLimits, systemSettings } from '../model/job-document';
 
 /**
@@ -51,8 +52,13 @@ export const user = z.object({
   email: z.string(),
   name: z.string(),
   role,
+  /** How this user reads and types lengths; the data stays in mm. */
+  units: lengthUnit,
 });
 export type User = z.output<typeof user>;
+
+/** What a signed-in user changes about themself (PATCH /api/auth/me/preferences). */
+export const preferencesBody = z.object({ units: lengthUnit });
 
 export const jobSummary = z.object({
   id: z.number().int(),
