@@ -11,12 +11,12 @@ export type LengthUnit = z.output<typeof lengthUnit>;
 /** The international inch: exactly 25.4 mm (the 1959 international yard and pound agreement; NIST SP 811). */
 export const MM_PER_INCH = 25.4;
 
-/** The choices as a menu names them. */
+/** The choices as a menu names them, short enough for a phone's top bar. */
 export const LENGTH_UNIT_NAMES: Record<LengthUnit, string> = {
-  mm: 'Millimetres',
-  in: 'Decimal inches',
-  'in-32': 'Inches to 1/32',
-  'in-64': 'Inches to 1/64',
+  mm: 'mm',
+  in: 'in 0.001',
+  'in-32': 'in 1/32',
+  'in-64': 'in 1/64',
 };
 
 /** Whether a unit is one of the inch forms (a bare number typed by such a user means inches). */

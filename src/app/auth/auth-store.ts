@@ -2,6 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { can, Permission, User, sessionAnswer, userAnswer } from '../../../shared/api/contract';
+import type { LengthUnit } from '../../../shared/units/length-unit';
 import { ApiProblem } from '../core/api-problem';
 
 /** Who is signed in, and what their role lets them do (contract.ts `permissions`). */
@@ -16,6 +17,8 @@ export class AuthStore {
   readonly user = computed(() => this.current() ?? null);
   readonly role = computed(() => this.current()?.role);
   readonly signedIn = computed(() => this.user() !== null);
+  /** How the signed-in user reads lengths; millimetres when nobody is signed in. */
+  readonly units = computed<LengthUnit>(() => this.current()?.units ?? 'mm');
 
   can(permission: Permission): boolean {
     return can(this.role(), permission);
@@ -56,6 +59,12 @@ export class AuthStore {
       if (!(error instanceof ApiProblem && error.status === 401)) throw error;
     }
     this.forgetSession();
+  }
+
+  /** Stores the user's own choice of units; every length on screen follows it at once. Rejects with an ApiProblem. */
+  async chooseUnits(units: LengthUnit): Promise<void> {
+    const raw = await firstValueFrom(this.http.patch('/api/auth/me/preferences', { units }));
+    this.remember(userAnswer.parse(raw).user);
   }
 
   /** A session the server started itself, by accepting an invitation: the app is signed in as its user. */

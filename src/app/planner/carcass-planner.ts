@@ -15,6 +15,8 @@ import { Can } from '../auth/can';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { CatalogStore } from '../catalog/catalog-store';
 import { ApiProblem, describeError } from '../core/api-problem';
+import { Lengths } from '../ui/lengths';
+import { LengthInput } from '../ui/length-input';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
 import { fromPlanInput, plannerForm, toPlanInput } from './planner-form';
@@ -28,6 +30,7 @@ import { ReplanDialog } from './replan-dialog';
 @Component({
   selector: 'bw-carcass-planner',
   imports: [
+    LengthInput,
     Can,
     CarcassDrawing,
     MatButtonModule,
@@ -49,6 +52,7 @@ export class CarcassPlanner {
   private readonly snackBar = inject(MatSnackBar);
   private readonly dialog = inject(MatDialog);
   protected readonly store = inject(PlannerStore);
+  protected readonly lengths = inject(Lengths);
 
   protected readonly form = plannerForm();
   protected readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });
