@@ -30,7 +30,7 @@ async function zipUpTo(zip: NodeJS.ReadableStream, limit: number): Promise<Buffe
  */
 export async function sendPack(context: RouteContext, actor: User, jobId: number, body: z.output<typeof packSendBody>, origin: string): Promise<PackSent> {
   const date = context.clock();
-  const { pack, fileName, jobName } = await jobPack(context.db, jobId, body.paper, date, origin);
+  const { pack, fileName, jobName } = await jobPack(context.db, jobId, body.paper, date, origin, 'mm');
   const zip = await zipUpTo(packZipStream(pack, date), context.config.packAttachLimitBytes);
   const expiresAt = new Date(date.getTime() + PACK_LINK_DAYS * 86_400_000);
   const link = zip ? undefined : `${origin}/api/pack-links/${signPackLink(context.sessionSecret, { jobId, paper: body.paper, expiresAt: expiresAt.getTime() })}`;

@@ -2,6 +2,7 @@ import type { Response, Router } from 'express';
 import { pipeline } from 'node:stream/promises';
 import { jobParams, panelParams } from '../../shared/api/contract';
 import { drillingMapQuery, packSendBody, paperQuery } from '../../shared/api/pack-contract';
+import type { LengthUnit } from '../../shared/units/length-unit';
 import { packZipStream } from '../export/pack-zip';
 import { requirePermission } from '../auth/require-permission';
 import { jsonBody } from '../http/body';
@@ -16,9 +17,9 @@ function sendFile(res: Response, file: packs.DownloadFile): void {
 }
 
 /** Streams a job's pack as a zip; each file is made when the zip reaches it, so no length is known up front. */
-async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string): Promise<void> {
+async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string, unit: LengthUnit): Promise<void> {
   const date = context.clock();
-  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date, origin);
+  const { pack, fileName } = await packs.jobPack(context.db, jobId, paper, date, origin, unit);
   res.attachment(fileName).type('application/zip');
   // Once the first bytes are out, a failure can only cut the download short; the error handler then
   // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
@@ -32,7 +33,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/panels/:panelId/drilling-map.svg', requirePermission('readJobs'), async (req, res) => {
     const { panelId } = panelParams.parse(req.params);
     const { face } = drillingMapQuery.parse(req.query);
-    sendFile(res, await packs.drillingMapSvg(db, panelId, face, clock()));
+    sendFile(res, await packs.drillingMapSvg(db, panelId, face, clock(), req.user!.units));
   });
 
   router.get('/panels/:panelId/drilling-map.dxf', requirePermission('readJobs'), async (req, res) => {
@@ -43,18 +44,18 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/panels/:panelId/template.pdf', requirePermission('readJobs'), async (req, res) => {
     const { panelId } = panelParams.parse(req.params);
     const { paper } = paperQuery.parse(req.query);
-    sendFile(res, await packs.templateSheets(db, panelId, paper, clock()));
+    sendFile(res, await packs.templateSheets(db, panelId, paper, clock(), req.user!.units));
   });
 
   router.get('/jobs/:jobId/findings', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
-    res.json(await packs.jobFindings(db, jobId));
+    res.json(await packs.jobFindings(db, jobId, req.user!.units));
   });
 
   router.get('/jobs/:jobId/pack.zip', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
     const { paper } = paperQuery.parse(req.query);
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req));
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req), req.user!.units);
   });
 
   router.post('/jobs/:jobId/pack/send', requirePermission('editJobs'), jsonBody, async (req, res) => {
@@ -65,6 +66,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   // No sign-in: the signed token is the permission, for a recipient without an account.
   router.get('/pack-links/:token', async (req, res) => {
     const { jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config));
+    // Whoever opens a mailed link has told us no units: the pack is in millimetres, as the job is.
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config), 'mm');
   });
 }

@@ -12,6 +12,7 @@ import { panelDxf } from '../../shared/export/panel-dxf';
 import { drawingToSvg } from '../../shared/export/svg-render';
 import { panelTemplates, templateSheetsPdf } from '../../shared/export/template-pdf';
 import type { Face } from '../../shared/model/job-document';
+import type { LengthUnit } from '../../shared/units/length-unit';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument } from '../db/job-mapping';
@@ -29,24 +30,25 @@ export interface DownloadFile {
 
 /**
  * The export context of a stored job: the job as a document, the shop's catalog (the built-in fittings and
- * the shop's own), now, and each panel's stored version for the title blocks; with each panel's database id.
+ * the shop's own), now, each panel's stored version for the title blocks and the unit of whoever asked for
+ * the files (drawings in inches for someone who reads them); with each panel's database id.
  */
-async function jobContext(db: Database, jobId: number, date: Date): Promise<ExportContext & { panelIds: ReadonlyMap<string, number> }> {
+async function jobContext(db: Database, jobId: number, date: Date, unit: LengthUnit): Promise<ExportContext & { panelIds: ReadonlyMap<string, number> }> {
   const rows = await loadJobRows(db, jobId);
   if (!rows) throw notFound(`Job ${jobId}`);
   const versions = new Map(rows.panels.map((p) => [p.key, p.version]));
   const panelIds = new Map(rows.panels.map((p) => [p.key, p.id]));
-  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key), panelIds };
+  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key), unit, panelIds };
 }
 
 /**
  * One stored panel with its job's export context and its holes laid out, with the errors the checks find
  * on it (its files then say "has errors") and, for a side, its hand.
  */
-async function panelContext(db: Database, panelId: number, date: Date) {
+async function panelContext(db: Database, panelId: number, date: Date, unit: LengthUnit = 'mm') {
   const row = await findPanel(db, panelId);
   if (!row) throw notFound(`Panel ${panelId}`);
-  const ctx = await jobContext(db, row.jobId, date);
+  const ctx = await jobContext(db, row.jobId, date, unit);
   const panel = ctx.job.panels.find((p) => p.id === row.key);
   if (!panel) throw notFound(`Panel ${panelId}`);
   const drilling = panelDrilling(ctx.job, ctx.catalog, panel, checkPanel(ctx.job, panel, ctx.catalog));
@@ -54,8 +56,8 @@ async function panelContext(db: Database, panelId: number, date: Date) {
 }
 
 /** A panel's drilling map of one face as SVG, full size; face B only when the panel has face B holes. */
-export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date, unit: LengthUnit): Promise<DownloadFile> {
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date, unit);
   const index = mapViews(panel, drilling.holes).findIndex((view) => view.face === face);
   if (index < 0) throw new AppError(404, 'no-such-map', `Panel ${panelId} has no bores on face ${face}, so it has no drilling map of that face.`);
   const newWindow = await svgWindows();
@@ -70,8 +72,8 @@ export async function drillingDxf(db: Database, panelId: number, date: Date): Pr
 }
 
 /** A panel's template sheets, to print at 100 % on the paper asked for. */
-export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date, unit: LengthUnit): Promise<DownloadFile> {
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date, unit);
   const bytes = await templateSheetsPdf(panelTemplates(ctx, drilling, paper), {
     ...(await pdfTools()),
     title: `${ctx.job.name}: ${panel.name}, template sheets`,
@@ -83,19 +85,20 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
 
 /**
  * A job's bench pack, planned: its files are made one at a time as the zip stream reaches them. Its panel
- * labels' codes open the bench page on each panel at `origin`.
+ * labels' codes open the bench page on each panel at `origin`. Its drawings, labels and hole schedule
+ * follow `unit`; a pack sent by mail is in mm, as whoever opens it has not said what they read.
  */
-export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<{ pack: Pack; fileName: string; jobName: string }> {
-  const ctx = await jobContext(db, jobId, date);
+export async function jobPack(db: Database, jobId: number, paper: PaperName, date: Date, origin: string, unit: LengthUnit): Promise<{ pack: Pack; fileName: string; jobName: string }> {
+  const ctx = await jobContext(db, jobId, date, unit);
   const labelLink = (panel: { id: string }) => `${origin}${benchPanelPath(jobId, ctx.panelIds.get(panel.id)!)}`;
   const pack = planPack({ ctx, paper, labelLink, ...(await packTools()) });
   return { pack, fileName: `${pack.root}.zip`, jobName: ctx.job.name };
 }
 
-/** The checks' findings of a job, counted by severity, for a screen that asks before packing a job with errors. */
-export async function jobFindings(db: Database, jobId: number): Promise<JobFindings> {
-  const { job, catalog } = await jobContext(db, jobId, new Date());
-  const findings = checkJob(job, catalog);
+/** The checks' findings of a job, counted by severity, their messages in the reader's unit, for the job page. */
+export async function jobFindings(db: Database, jobId: number, unit: LengthUnit): Promise<JobFindings> {
+  const { job, catalog } = await jobContext(db, jobId, new Date(), unit);
+  const findings = checkJob(job, catalog, { unit });
   const count = (severity: string) => findings.filter((f) => f.severity === severity).length;
   return { errors: count('error'), warnings: count('warning'), notes: count('note'), findings };
 }

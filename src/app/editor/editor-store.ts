@@ -87,7 +87,7 @@ export class EditorStore {
     const job = this.job();
     const panel = this.panel();
     // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor).
-    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false }) : [];
+    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() }) : [];
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
@@ -160,7 +160,7 @@ export class EditorStore {
   fixesFor(finding: Finding): Finding | undefined {
     const job = this.job();
     const panel = this.panel();
-    return job && panel ? fixesFor(job, panel, this.catalog(), finding) : undefined;
+    return job && panel ? fixesFor(job, panel, this.catalog(), finding, { unit: this.auth.units() }) : undefined;
   }
 
   /** Applies a finding's fix as one undoable step and selects what it moved. */
