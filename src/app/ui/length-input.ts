@@ -5,7 +5,8 @@ import { Lengths } from './lengths';
 /**
  * A text input for a length of a reactive form: the control holds millimetres, the input shows them in the
  * user's unit and reads either unit (`12 3/8"`, `314.3 mm`, a bare number in the user's own) through the
- * shared parser. What does not read as a length leaves the control NaN with the error `length: message`.
+ * shared parser. What does not read as a length leaves the control NaN with the error `length: message`;
+ * an empty field leaves it null.
  */
 @Directive({
   selector: 'input[bwLength]',
@@ -20,7 +21,7 @@ export class LengthInput implements ControlValueAccessor, Validator {
   private readonly lengths = inject(Lengths);
   private value: number | null = null;
   private problem: string | null = null;
-  private changed: (mm: number) => void = () => undefined;
+  private changed: (mm: number | null) => void = () => undefined;
   private touched: () => void = () => undefined;
 
   constructor() {
@@ -39,7 +40,7 @@ export class LengthInput implements ControlValueAccessor, Validator {
     this.show();
   }
 
-  registerOnChange(fn: (mm: number) => void): void {
+  registerOnChange(fn: (mm: number | null) => void): void {
     this.changed = fn;
   }
 
@@ -56,6 +57,13 @@ export class LengthInput implements ControlValueAccessor, Validator {
   }
 
   protected read(text: string): void {
+    // An empty field is no length at all: the control's own `required` says so.
+    if (text.trim() === '') {
+      this.problem = null;
+      this.value = null;
+      this.changed(null);
+      return;
+    }
     const parsed = this.lengths.parse(text);
     this.problem = parsed.ok ? null : parsed.error;
     this.value = parsed.ok ? parsed.mm : Number.NaN;
