@@ -1,11 +1,12 @@
 import type { Router } from 'express';
-import { signInBody } from '../../shared/api/contract';
+import { preferencesBody, signInBody } from '../../shared/api/contract';
 import { linkParams, passwordResetBody, passwordResetRequestBody } from '../../shared/api/team-contract';
 import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
 import { linkOrigin } from '../http/request-origin';
 import type { RouteContext } from '../http/route-context';
 import { issueCsrfToken } from './csrf';
+import { changePreferences } from './auth.service';
 import { authenticateLocal } from './passport';
 import { passwordResetFor, requestPasswordResetLater, resetPassword } from './password-reset.service';
 import { passwordResetLimits } from './password-reset-limits';
@@ -28,6 +29,12 @@ export function authRoutes(router: Router, context: RouteContext): void {
   router.get('/auth/session', (req, res) => {
     issueCsrfToken(req, res, cookie);
     res.json({ user: req.user ?? null });
+  });
+
+  // Every role chooses for themself how lengths read; nobody changes another's.
+  router.patch('/auth/me/preferences', jsonBody, async (req, res) => {
+    if (!req.user) throw new AppError(401, 'unauthenticated', 'Sign in first.');
+    res.json({ user: await changePreferences(context.db, req.user.id, preferencesBody.parse(req.body)) });
   });
 
   router.post('/auth/sign-in', jsonBody, async (req, res) => {

@@ -1,12 +1,13 @@
-import type { User } from '../../shared/api/contract';
+import type { preferencesBody, User } from '../../shared/api/contract';
+import type * as z from 'zod';
 import type { Database } from '../db/client';
 import { AppError } from '../http/app-error';
 import { spendComparisonTime, verifyPassword } from './passwords';
-import { findAccount, findAccountByEmail } from './users.repository';
+import { findAccount, findAccountByEmail, updateUnits } from './users.repository';
 
 type Account = User & { demo: boolean; active: boolean };
 
-const toUser = ({ id, email, name, role }: Account): User => ({ id, email, name, role });
+const toUser = ({ id, email, name, role, units }: Account): User => ({ id, email, name, role, units });
 
 /** Why a sign-in was refused; the route turns it into the answer. */
 export type SignInRefusal = 'bad-credentials' | 'demo-accounts-off' | 'account-deactivated';
@@ -52,4 +53,11 @@ export function refusal(reason: SignInRefusal): AppError {
   if (reason === 'demo-accounts-off') return new AppError(403, 'demo-accounts-off', 'Demo accounts are switched off on this server (NODE_ENV=production).');
   if (reason === 'account-deactivated') return new AppError(403, 'account-deactivated', 'This account has been deactivated. Ask an admin of your shop if you need it again.');
   return new AppError(401, 'bad-credentials', 'That e-mail address and password do not match an account.');
+}
+
+/** A user's own choices (their units); the user as they are now. */
+export async function changePreferences(db: Database, id: number, preferences: z.output<typeof preferencesBody>): Promise<User> {
+  const account = await updateUnits(db, id, preferences.units);
+  if (!account) throw new AppError(401, 'unauthenticated', 'Sign in first.');
+  return toUser(account);
 }

@@ -25,7 +25,7 @@ describe('sign-in and sessions', () => {
     const before = client.xsrfToken;
     const res = await client.signIn('Designer@Greyfield.example');
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ user: { id: expect.any(Number), email: 'designer@greyfield.example', name: 'Tomas Ward', role: 'designer' } });
+    expect(res.body).toEqual({ user: { id: expect.any(Number), email: 'designer@greyfield.example', name: 'Tomas Ward', role: 'designer', units: 'mm' } });
     expect(client.xsrfToken).toBeDefined();
     expect(client.xsrfToken).not.toBe(before);
     const cookie = ([] as string[]).concat(res.headers['set-cookie']).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
@@ -33,6 +33,31 @@ describe('sign-in and sessions', () => {
     expect(cookie).toMatch(/SameSite=Lax/);
     expect(cookie).not.toMatch(/Secure/);
     expect((await client.me()).body.user.role).toBe('designer');
+  });
+
+  it("lets each member choose their own units, kept across sign-ins and sent with the session's user", async () => {
+    const bench = await signedIn(t.app, 'bench@greyfield.example');
+    const res = await bench.patch('/api/auth/me/preferences').send({ units: 'in-32' });
+    expect(res.status).toBe(200);
+    expect(res.body.user).toMatchObject({ email: 'bench@greyfield.example', units: 'in-32' });
+    expect((await bench.get('/api/auth/session')).body.user.units).toBe('in-32');
+    const again = new ApiClient(t.app);
+    await again.me();
+    expect((await again.signIn('bench@greyfield.example')).body.user.units).toBe('in-32');
+    // Nobody else's choice moves with it.
+    const viewer = await signedIn(t.app, 'viewer@greyfield.example');
+    expect((await viewer.get('/api/auth/session')).body.user.units).toBe('mm');
+    await bench.patch('/api/auth/me/preferences').send({ units: 'mm' }).expect(200);
+  });
+
+  it('refuses units it does not know, and a preference change from nobody', async () => {
+    const viewer = await signedIn(t.app, 'viewer@greyfield.example');
+    const bad = await viewer.patch('/api/auth/me/preferences').send({ units: 'cubits' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['units']);
+    const stranger = new ApiClient(t.app);
+    await stranger.me();
+    expect((await stranger.patch('/api/auth/me/preferences').send({ units: 'in' })).status).toBe(401);
   });
 
   it('refuses a wrong password and an unknown address alike', async () => {

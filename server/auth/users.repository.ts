@@ -1,8 +1,9 @@
 import { count, eq, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { users } from '../db/schema';
+import type { LengthUnit } from '../../shared/units/length-unit';
 
-const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, demo: users.demo, active: users.active };
+const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active };
 
 /** The account with this address (any case), with its password hash. */
 export async function findAccountByEmail(db: Database, email: string) {
@@ -33,4 +34,10 @@ export async function insertUsers(db: Database, rows: (typeof users.$inferInsert
 /** The active members' names and addresses, by name: the people mail can be sent to without typing an address (a deactivated member is no longer one of them). */
 export function listPeople(db: Database) {
   return db.select({ name: users.name, email: users.email }).from(users).where(eq(users.active, true)).orderBy(users.name);
+}
+
+/** Sets how an account reads lengths; the account with its new choice, or undefined when it is gone. */
+export async function updateUnits(db: Database, id: number, units: LengthUnit) {
+  const [row] = await db.update(users).set({ units }).where(eq(users.id, id)).returning(accountColumns);
+  return row;
 }

@@ -26,7 +26,7 @@ export async function seedDemoShop(db: Database): Promise<boolean> {
   for (const input of DEMO_JOBS) {
     const parsed = parseJobDocument(input);
     if (!parsed.ok) throw new Error(`demo job "${input.name}" is not a valid document:\n${parsed.errors.join('\n')}`);
-    await importJob(db, { id: owner.id, email: owner.email, name: owner.name, role: owner.role }, parsed.value);
+    await importJob(db, { id: owner.id, email: owner.email, name: owner.name, role: owner.role, units: owner.units }, parsed.value);
   }
   return true;
 }

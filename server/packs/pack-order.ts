@@ -2,6 +2,7 @@ import type { Catalog } from '../../shared/catalog/fitting';
 import type { MachineSettings } from '../../shared/export/machine-settings';
 import type { PaperName } from '../../shared/export/paper';
 import type { JobDocument } from '../../shared/model/job-document';
+import type { LengthUnit } from '../../shared/units/length-unit';
 
 /** What a pack is made from, as plain data that can be sent to a worker thread. */
 export interface PackOrder {
@@ -9,6 +10,8 @@ export interface PackOrder {
   catalog: Catalog;
   date: Date;
   paper: PaperName;
+  /** The unit the drawings, labels and hole schedule give lengths in. */
+  unit: LengthUnit;
   /** Each panel's stored version, by the panel's document id, for the title blocks. */
   panelVersions: Record<string, number>;
   /** The address each panel's label code opens, by the panel's document id; none without a server address. */

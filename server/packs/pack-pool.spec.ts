@@ -19,6 +19,7 @@ const order: PackOrder = {
   catalog: builtinCatalog(),
   date: new Date('2026-03-14T09:00:00Z'),
   paper: 'a4',
+  unit: 'mm',
   panelVersions: Object.fromEntries(job.panels.map((p, i) => [p.id, i + 1])),
   labelLinks: Object.fromEntries(job.panels.map((p, i) => [p.id, `https://shop.example/bench?job=1&panel=${i + 1}`])),
 };

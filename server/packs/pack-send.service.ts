@@ -29,7 +29,7 @@ async function zipUpTo(zip: Readable, limit: number): Promise<Buffer | undefined
  */
 export async function sendPack(context: RouteContext, actor: User, jobId: number, body: z.output<typeof packSendBody>, origin: string): Promise<PackSent> {
   const date = context.clock();
-  const order = await jobPackOrder(context.db, jobId, body.paper, date, origin);
+  const order = await jobPackOrder(context.db, jobId, body.paper, date, origin, 'mm');
   const making = context.packPool.make(order);
   const { root, errors } = await making.planned;
   const fileName = `${root}.zip`;

@@ -22,7 +22,7 @@ export default async function makePack({ order, port }: { order: PackOrder; port
   const { labelLinks } = order;
   const panels = new Set<string>();
   const pack = planPack({
-    ctx: { job: order.job, catalog: order.catalog, date: order.date, generator: GENERATOR, panelVersion: (id) => order.panelVersions[id] },
+    ctx: { job: order.job, catalog: order.catalog, date: order.date, generator: GENERATOR, panelVersion: (id) => order.panelVersions[id], unit: order.unit },
     paper: order.paper,
     ...(labelLinks ? { labelLink: (panel) => labelLinks[panel.id] } : {}),
     ...(order.machine ? { machine: order.machine } : {}),

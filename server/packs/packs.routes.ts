@@ -2,6 +2,7 @@ import type { Response, Router } from 'express';
 import { pipeline } from 'node:stream/promises';
 import { jobParams, panelParams } from '../../shared/api/contract';
 import { drillingMapQuery, packQuery, packSendBody, paperQuery } from '../../shared/api/pack-contract';
+import type { LengthUnit } from '../../shared/units/length-unit';
 import { requirePermission } from '../auth/require-permission';
 import { packZipStream } from '../export/pack-zip';
 import { AppError } from '../http/app-error';
@@ -20,8 +21,8 @@ function sendFile(res: Response, file: packs.DownloadFile): void {
  * Streams a job's pack as a zip, made by a pack worker, each file when the zip reaches it, so no length is
  * known up front. With a progress ticket, /api/pack-progress/:ticket tells how far it has got meanwhile.
  */
-async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string, ticket?: string): Promise<void> {
-  const order = await packs.jobPackOrder(context.db, jobId, paper, context.clock(), origin);
+async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string, unit: LengthUnit, ticket?: string): Promise<void> {
+  const order = await packs.jobPackOrder(context.db, jobId, paper, context.clock(), origin, unit);
   const making = context.packPool.make(order, ticket ? context.packProgress.start(ticket, order.job.panels.length) : undefined);
   try {
     const { root } = await making.planned;
@@ -41,7 +42,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/panels/:panelId/drilling-map.svg', requirePermission('readJobs'), async (req, res) => {
     const { panelId } = panelParams.parse(req.params);
     const { face } = drillingMapQuery.parse(req.query);
-    sendFile(res, await packs.drillingMapSvg(db, panelId, face, clock()));
+    sendFile(res, await packs.drillingMapSvg(db, panelId, face, clock(), req.user!.units));
   });
 
   router.get('/panels/:panelId/drilling-map.dxf', requirePermission('readJobs'), async (req, res) => {
@@ -60,18 +61,18 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   router.get('/panels/:panelId/template.pdf', requirePermission('readJobs'), async (req, res) => {
     const { panelId } = panelParams.parse(req.params);
     const { paper } = paperQuery.parse(req.query);
-    sendFile(res, await packs.templateSheets(db, panelId, paper, clock()));
+    sendFile(res, await packs.templateSheets(db, panelId, paper, clock(), req.user!.units));
   });
 
   router.get('/jobs/:jobId/findings', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
-    res.json(await packs.jobFindings(db, jobId));
+    res.json(await packs.jobFindings(db, jobId, req.user!.units));
   });
 
   router.get('/jobs/:jobId/pack.zip', requirePermission('readJobs'), async (req, res) => {
     const { jobId } = jobParams.parse(req.params);
     const { paper, progress } = packQuery.parse(req.query);
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req), progress);
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config, req), req.user!.units, progress);
   });
 
   router.get('/pack-progress/:ticket', requirePermission('readJobs'), (req, res) => {
@@ -88,6 +89,7 @@ export function packsRoutes(router: Router, context: RouteContext): void {
   // No sign-in: the signed token is the permission, for a recipient without an account.
   router.get('/pack-links/:token', async (req, res) => {
     const { jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config));
+    // Whoever opens a mailed link has told us no units: the pack is in millimetres, as the job is.
+    await streamPack(res, context, jobId, paper, linkOrigin(context.config), 'mm');
   });
 }

@@ -13,6 +13,7 @@ import { panelDxf } from '../../shared/export/panel-dxf';
 import { drawingToSvg } from '../../shared/export/svg-render';
 import { panelTemplates, templateSheetsPdf } from '../../shared/export/template-pdf';
 import type { Face } from '../../shared/model/job-document';
+import type { LengthUnit } from '../../shared/units/length-unit';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
 import { toJobDocument } from '../db/job-mapping';
@@ -32,24 +33,25 @@ export interface DownloadFile {
 
 /**
  * The export context of a stored job: the job as a document, the shop's catalog (the built-in fittings and
- * the shop's own), now, and each panel's stored version for the title blocks; with each panel's database id.
+ * the shop's own), now, each panel's stored version for the title blocks and the unit of whoever asked for
+ * the files (drawings in inches for someone who reads them); with each panel's database id.
  */
-async function jobContext(db: Database, jobId: number, date: Date): Promise<ExportContext & { panelIds: ReadonlyMap<string, number> }> {
+async function jobContext(db: Database, jobId: number, date: Date, unit: LengthUnit): Promise<ExportContext & { panelIds: ReadonlyMap<string, number> }> {
   const rows = await loadJobRows(db, jobId);
   if (!rows) throw notFound(`Job ${jobId}`);
   const versions = new Map(rows.panels.map((p) => [p.key, p.version]));
   const panelIds = new Map(rows.panels.map((p) => [p.key, p.id]));
-  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key), panelIds };
+  return { job: toJobDocument(rows), catalog: await shopCatalog(db), date, generator: GENERATOR, panelVersion: (key) => versions.get(key), unit, panelIds };
 }
 
 /**
  * One stored panel with its job's export context and its holes laid out, with the errors the checks find
  * on it (its files then say "has errors") and, for a side, its hand.
  */
-async function panelContext(db: Database, panelId: number, date: Date) {
+async function panelContext(db: Database, panelId: number, date: Date, unit: LengthUnit = 'mm') {
   const row = await findPanel(db, panelId);
   if (!row) throw notFound(`Panel ${panelId}`);
-  const ctx = await jobContext(db, row.jobId, date);
+  const ctx = await jobContext(db, row.jobId, date, unit);
   const panel = ctx.job.panels.find((p) => p.id === row.key);
   if (!panel) throw notFound(`Panel ${panelId}`);
   const drilling = panelDrilling(ctx.job, ctx.catalog, panel, checkPanel(ctx.job, panel, ctx.catalog));
@@ -57,8 +59,8 @@ async function panelContext(db: Database, panelId: number, date: Date) {
 }
 
 /** A panel's drilling map of one face as SVG, full size; face B only when the panel has face B holes. */
-export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+export async function drillingMapSvg(db: Database, panelId: number, face: Face, date: Date, unit: LengthUnit): Promise<DownloadFile> {
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date, unit);
   const index = mapViews(drilling).findIndex((view) => view.face === face);
   if (index < 0) throw new AppError(404, 'no-such-map', `Panel ${panelId} has no bores on face ${face}, so it has no drilling map of that face.`);
   const newWindow = await svgWindows();
@@ -86,8 +88,8 @@ export async function drillingProgramsZip(db: Database, panelId: number, date: D
 }
 
 /** A panel's template sheets, to print at 100 % on the paper asked for. */
-export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date): Promise<DownloadFile> {
-  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date);
+export async function templateSheets(db: Database, panelId: number, paper: PaperName, date: Date, unit: LengthUnit): Promise<DownloadFile> {
+  const { ctx, panel, drilling, base } = await panelContext(db, panelId, date, unit);
   const bytes = await templateSheetsPdf(panelTemplates(ctx, drilling, paper), {
     ...(await pdfTools()),
     title: `${ctx.job.name}: ${panel.name}, template sheets`,
@@ -100,19 +102,20 @@ export async function templateSheets(db: Database, panelId: number, paper: Paper
 /**
  * What a job's bench pack is made from, for a pack worker (pack-pool.ts): the job as stored, the shop's
  * catalog and machine settings (its drilling programs follow them), each panel's version, and the address
- * each panel label's code opens (the bench page on that panel at `origin`).
+ * each panel label's code opens (the bench page on that panel at `origin`). Its drawings, labels and hole
+ * schedule follow `unit`; a pack sent by mail is in mm, as whoever opens it has not said what they read.
  */
-export async function jobPackOrder(db: Database, jobId: number, paper: PaperName, date: Date, origin: string): Promise<PackOrder> {
-  const ctx = await jobContext(db, jobId, date);
+export async function jobPackOrder(db: Database, jobId: number, paper: PaperName, date: Date, origin: string, unit: LengthUnit): Promise<PackOrder> {
+  const ctx = await jobContext(db, jobId, date, unit);
   const panelVersions = Object.fromEntries(ctx.job.panels.map((p) => [p.id, ctx.panelVersion!(p.id)!]));
   const labelLinks = Object.fromEntries(ctx.job.panels.map((p) => [p.id, `${origin}${benchPanelPath(jobId, ctx.panelIds.get(p.id)!)}`]));
-  return { job: ctx.job, catalog: ctx.catalog, date, paper, panelVersions, labelLinks, machine: await shopMachineSettings(db) };
+  return { job: ctx.job, catalog: ctx.catalog, date, paper, panelVersions, labelLinks, unit, machine: await shopMachineSettings(db) };
 }
 
-/** The checks' findings of a job, counted by severity, for a screen that asks before packing a job with errors. */
-export async function jobFindings(db: Database, jobId: number): Promise<JobFindings> {
-  const { job, catalog } = await jobContext(db, jobId, new Date());
-  const findings = checkJob(job, catalog);
+/** The checks' findings of a job, counted by severity, their messages in the reader's unit, for the job page. */
+export async function jobFindings(db: Database, jobId: number, unit: LengthUnit): Promise<JobFindings> {
+  const { job, catalog } = await jobContext(db, jobId, new Date(), unit);
+  const findings = checkJob(job, catalog, { unit });
   const count = (severity: string) => findings.filter((f) => f.severity === severity).length;
   return { errors: count('error'), warnings: count('warning'), notes: count('note'), findings };
 }

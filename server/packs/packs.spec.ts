@@ -96,4 +96,31 @@ describe('bench pack downloads', () => {
     const manifest = JSON.parse(await (await JSZip.loadAsync(res.body)).file('Clash - job bench pack/manifest.json')!.async('string')) as PackManifest;
     expect(manifest.findings.error).toBe(findings.errors);
   }, 60_000);
+
+  it("makes the files and words the findings in the units of whoever asks", async () => {
+    const designer = await signedIn(t.app, 'designer@greyfield.example');
+    const doc = exportJob({ name: 'Inch job' }, [clashPanel()]);
+    const { body: job } = await designer.post('/api/jobs/import').attach('file', Buffer.from(JSON.stringify(doc)), 'inch.json').expect(201);
+    const bench = await signedIn(t.app, 'bench@greyfield.example');
+    await bench.patch('/api/auth/me/preferences').send({ units: 'in-32' }).expect(200);
+    const get = (url: string) => bench.get(url).buffer(true).parse(binaryBody);
+
+    // Two Ø10 bores 2 mm apart overlap by 8 mm; with the international inch of 25.4 mm (NIST SP 811,
+    // published) 8 mm = 0.315 in = 10.08/32 → 10/32 = 5/16.
+    const findings = jobFindings.parse((await bench.get(`/api/jobs/${job.id}/findings`).expect(200)).body);
+    expect(findings.findings.find((f) => f.code === 'bores-overlap')!.message).toContain('overlap by 5/16"');
+    expect(jobFindings.parse((await viewer.get(`/api/jobs/${job.id}/findings`).expect(200)).body).findings.find((f) => f.code === 'bores-overlap')!.message).toContain('overlap by 8 mm');
+
+    // The 200 mm panel is 7.874 in = 251.97/32 → 252/32 = 7 7/8; its bore at 50 mm is 1.9685 in = 62.99/32 → 63/32 = 1 31/32.
+    const clashId = (await bench.get(`/api/jobs/${job.id}`).expect(200)).body.panels.find((p: { name: string }) => p.name === 'Clash').dbId;
+    const svg = (await get(`/api/panels/${clashId}/drilling-map.svg`).expect(200)).body.toString('utf8');
+    expect(svg).toContain('7 7/8&quot; × 7 7/8&quot;');
+    expect(svg).toContain('1 31/32&quot;');
+
+    const zip = await JSZip.loadAsync((await get(`/api/jobs/${job.id}/pack.zip`).expect(200)).body);
+    const schedule = await zip.file('Inch job bench pack/hole schedule.csv')!.async('string');
+    expect(schedule.split('\r\n')[0]).toMatch(/,x in inches,y in inches,z from face A in inches$/);
+    expect(schedule).toContain('"1 31/32"""');
+    await bench.patch('/api/auth/me/preferences').send({ units: 'mm' }).expect(200);
+  }, 60_000);
 });

@@ -33,6 +33,7 @@ export async function acceptInvitation({ db, clock }: RouteContext, token: strin
     const member = await repo.insertMember(tx, { email: invitation.email, name: body.name, role: invitation.role!, passwordHash });
     await repo.linkInvitation(tx, invitation.id, member.id);
     await recordActivity(tx, { userId: member.id, action: 'member.joined', details: { email: member.email, role: member.role, invitedBy: invitation.createdBy } });
-    return { id: member.id, email: member.email, name: member.name, role: member.role };
+    // A new member reads millimetres (the column's default) until they choose otherwise.
+    return { id: member.id, email: member.email, name: member.name, role: member.role, units: 'mm' };
   });
 }

@@ -63,7 +63,7 @@ describe('invitations', () => {
     expect(shown).toEqual({ email: 'new.fitter@example.com', role: 'bench', expiresAt: sent.expiresAt });
 
     const accepted = await browser.post(`/api/invitations/${mail.token}/accept`).send({ name: ' Nia Holt ', password: NEW_PASSWORD }).expect(201);
-    expect(accepted.body.user).toEqual({ id: expect.any(Number), email: 'new.fitter@example.com', name: 'Nia Holt', role: 'bench' });
+    expect(accepted.body.user).toEqual({ id: expect.any(Number), email: 'new.fitter@example.com', name: 'Nia Holt', role: 'bench', units: 'mm' });
     expect((await browser.me().expect(200)).body.user.name).toBe('Nia Holt');
     await browser.get('/api/jobs').expect(200);
     // The new session has its own XSRF token, and changes go through with it.

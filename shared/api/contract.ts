@@ -1,5 +1,6 @@
 import * as z from 'zod';
 import { text } from '../model/well-formed-text';
+import { lengthUnit } from './session-contract';
 import { bore, carcass, displayName, material, panel, panelRole, panelStatus, placement, shopLimits, systemSettings } from '../model/job-document';
 
 /**
@@ -28,6 +29,9 @@ export const signInBody = z.object({
   email: z.string().trim().toLowerCase().email('must be an e-mail address').max(254),
   password: z.string().min(1, 'must not be empty').max(1024),
 });
+
+/** What a signed-in user changes about themself (PATCH /api/auth/me/preferences). */
+export const preferencesBody = z.object({ units: lengthUnit });
 
 export const jobSummary = z.object({
   id: z.number().int(),

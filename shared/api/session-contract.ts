@@ -1,4 +1,5 @@
 import * as z from 'zod/mini';
+import { LENGTH_UNITS } from '../units/length-unit';
 import { ROLES } from './roles';
 
 /**
@@ -12,11 +13,16 @@ export * from './roles';
 
 export const role = z.enum(ROLES);
 
+/** How a user reads and types lengths (shared/units/length-unit.ts). */
+export const lengthUnit = z.enum(LENGTH_UNITS);
+
 export const user = z.object({
   id: z.number().check(z.int()),
   email: z.string(),
   name: z.string(),
   role,
+  /** How this user reads and types lengths; the data stays in mm. */
+  units: lengthUnit,
 });
 export type User = z.output<typeof user>;
 

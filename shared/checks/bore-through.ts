@@ -1,7 +1,7 @@
 import type { PanelFaceBore } from '../layout/bore';
 import type { DraftFinding } from './finding';
 import { collect, report, type PanelSite } from './panel-site';
-import { boreName, capitalize, mm } from './wording';
+import { boreName, capitalize } from './wording';
 
 function finding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {
   const { thickness } = site.panel;
@@ -10,9 +10,9 @@ function finding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {
   if (bore.through || floor >= minFloor) return null;
   const message =
     floor <= 0
-      ? `${capitalize(boreName(bore))} is ${mm(bore.depth)} deep in a ${mm(thickness)} board: it comes out on the other face.`
-      : `${capitalize(boreName(bore))} leaves only ${mm(floor)} under it in a ${mm(thickness)} board; keep at least ${mm(minFloor)}.`;
-  const advice = `Drill it at most ${mm(Math.max(thickness - minFloor, 0))} deep, or use a board at least ${mm(bore.depth + minFloor)} thick.`;
+      ? `${capitalize(boreName(bore))} is ${site.job.length(bore.depth)} deep in a ${site.job.length(thickness)} board: it comes out on the other face.`
+      : `${capitalize(boreName(bore))} leaves only ${site.job.length(floor)} under it in a ${site.job.length(thickness)} board; keep at least ${site.job.length(minFloor)}.`;
+  const advice = `Drill it at most ${site.job.length(Math.max(thickness - minFloor, 0))} deep, or use a board at least ${site.job.length(bore.depth + minFloor)} thick.`;
   return report(site, 'bore-through', 'error', message, [bore], { advice });
 }
 

@@ -4,7 +4,7 @@ import { clearHoles } from './clear-hole';
 import type { DraftFinding, Fix } from './finding';
 import { MAX_CANDIDATES, moveBoreTo, moverName } from './fix-moves';
 import { report, type PanelSite, type Remedy } from './panel-site';
-import { boreName, capitalize, mm } from './wording';
+import { boreName, capitalize } from './wording';
 
 type AnyBore = PanelFaceBore | PanelEdgeBore;
 
@@ -13,9 +13,9 @@ function exempt(site: PanelSite, a: AnyBore, b: AnyBore): boolean {
   return (a.placement !== undefined && a.placement === b.placement) || site.layout.joined.has(pairKey(a.id, b.id));
 }
 
-function describe(a: AnyBore, b: AnyBore, web: number, minWeb: number, where: string): string {
-  const gap = web < 0 ? `overlap by ${mm(-web)}` : `leave only ${mm(web)} of board between them`;
-  return `${capitalize(boreName(a))} and ${boreName(b)} ${where} ${gap}; keep at least ${mm(minWeb)}.`;
+function describe(site: PanelSite, a: AnyBore, b: AnyBore, web: number, minWeb: number, where: string): string {
+  const gap = web < 0 ? `overlap by ${site.job.length(-web)}` : `leave only ${site.job.length(web)} of board between them`;
+  return `${capitalize(boreName(a))} and ${boreName(b)} ${where} ${gap}; keep at least ${site.job.length(minWeb)}.`;
 }
 
 /** A bore's way out: the clear system holes nearest it, or pushed straight away from the other bore far enough. */
@@ -29,14 +29,14 @@ function movesOf(site: PanelSite, mover: PanelFaceBore, other: PanelFaceBore, we
   const length = Math.hypot(mover.x - other.x, mover.y - other.y);
   if (length === 0) return [];
   const to = { x: mover.x + ((mover.x - other.x) / length) * push, y: mover.y + ((mover.y - other.y) / length) * push };
-  return [moveBoreTo(site, mover, to, `, ${mm(push)} further from ${boreName(other)}`)];
+  return [moveBoreTo(site, mover, to, `, ${site.job.length(push)} further from ${boreName(other)}`)];
 }
 
 /** Either bore may be the one to move; both ways are tried, each checked before it is offered. */
 function remedyFor(site: PanelSite, a: PanelFaceBore, b: PanelFaceBore, web: number): Remedy {
   return {
     candidates: () => [movesOf(site, b, a, web), movesOf(site, a, b, web)],
-    advice: `Move ${moverName(b)} or ${moverName(a)} at least ${mm(site.limits.minWeb - web)} further from the other.`,
+    advice: `Move ${moverName(b)} or ${moverName(a)} at least ${site.job.length(site.limits.minWeb - web)} further from the other.`,
   };
 }
 
@@ -69,13 +69,13 @@ export function checkBoresOverlap(site: PanelSite): DraftFinding[] {
   for (const { a: p, b: q, web } of site.nearPairs) {
     if (p.face !== q.face || isSameHole(p, q) || exempt(site, p, q)) continue;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
-    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `on face ${a.face}`), [a, b], remedyFor(site, a, b, web)));
+    findings.push(report(site, 'bores-overlap', 'error', describe(site, a, b, web, minWeb, `on face ${a.face}`), [a, b], remedyFor(site, a, b, web)));
   }
   edgePairs(site, (p, q, web) => {
     if (exempt(site, p, q)) return;
     const [a, b] = p.id < q.id ? [p, q] : [q, p];
-    const advice = `Move one of them ${mm(minWeb - web)} further from the other along the edge.`;
-    findings.push(report(site, 'bores-overlap', 'error', describe(a, b, web, minWeb, `in edge ${a.edge}`), [a, b], { advice }));
+    const advice = `Move one of them ${site.job.length(minWeb - web)} further from the other along the edge.`;
+    findings.push(report(site, 'bores-overlap', 'error', describe(site, a, b, web, minWeb, `in edge ${a.edge}`), [a, b], { advice }));
   });
   return findings;
 }

@@ -2,7 +2,7 @@ import { planBox, type PanelEdgeBore, type PanelFaceBore } from '../layout/bore'
 import { pairKey } from '../layout/panel-layout';
 import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
-import { boreName, capitalize, formatNumber, mm } from './wording';
+import { boreName, capitalize } from './wording';
 
 /** Whether a face bore's cylinder meets an edge bore's: in plan (circle against the edge bore's path) and in depth. */
 function meets(site: PanelSite, edge: PanelEdgeBore, face: PanelFaceBore): boolean {
@@ -38,8 +38,8 @@ export function checkEdgeBoreClash(site: PanelSite): DraftFinding[] {
       if (site.layout.joined.has(pairKey(edge.id, face.id)) || !meets(site, edge, face)) return;
       const message = `${capitalize(boreName(edge))} runs into ${boreName(face)} on face ${face.face}.`;
       const depth = shortDepth(site, edge, face);
-      const path = edge.edge === 'x0' || edge.edge === 'x1' ? `y ${formatNumber(minY)} to ${formatNumber(maxY)}` : `x ${formatNumber(minX)} to ${formatNumber(maxX)}`;
-      const shorten = depth > 0 ? `, or drill the edge bore at most ${mm(depth)} deep` : '';
+      const path = edge.edge === 'x0' || edge.edge === 'x1' ? `y ${site.job.coordinate(minY)} to ${site.job.coordinate(maxY)}` : `x ${site.job.coordinate(minX)} to ${site.job.coordinate(maxX)}`;
+      const shorten = depth > 0 ? `, or drill the edge bore at most ${site.job.length(depth)} deep` : '';
       findings.push(report(site, 'edge-bore-clash', 'error', message, [edge, face], { advice: `Move the face bore clear of the edge bore's path (${path})${shorten}.` }));
     });
   }

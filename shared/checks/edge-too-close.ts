@@ -3,7 +3,7 @@ import { EDGE_NAME, INWARD, edgeClearance, nearestEdge } from './edges';
 import type { DraftFinding } from './finding';
 import { moveBoreTo } from './fix-moves';
 import { collect, report, type PanelSite, type Remedy } from './panel-site';
-import { boreName, capitalize, formatNumber, mm } from './wording';
+import { boreName, capitalize, formatNumber } from './wording';
 
 /**
  * The edge distance a bore needs: the shop's minimum, and for a construction bore (a dowel) at least its
@@ -17,7 +17,7 @@ function required(site: PanelSite, bore: PanelBore): number {
 function movedIn(site: PanelSite, bore: PanelFaceBore, direction: [number, number], shift: number): Remedy {
   const step = Math.ceil(shift * 2) / 2;
   const to = { x: bore.x + direction[0] * step, y: bore.y + direction[1] * step };
-  return { candidates: () => [[moveBoreTo(site, bore, to, `, ${mm(step)} further in`)]], advice: `Move it at least ${mm(shift)} further in.` };
+  return { candidates: () => [[moveBoreTo(site, bore, to, `, ${site.job.length(step)} further in`)]], advice: `Move it at least ${site.job.length(shift)} further in.` };
 }
 
 function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): DraftFinding | null {
@@ -26,7 +26,7 @@ function faceBoreFinding(site: PanelSite, bore: PanelFaceBore): DraftFinding | n
   // A bore that crosses the edge is outside the panel, which another check reports.
   if (clearance < 0 || clearance >= need) return null;
   const nearest = nearestEdge(bore, site.panel);
-  const message = `${capitalize(boreName(bore))} is ${mm(nearest.distance)} from ${EDGE_NAME[nearest.edge]}; keep at least ${mm(need)}.`;
+  const message = `${capitalize(boreName(bore))} is ${site.job.length(nearest.distance)} from ${EDGE_NAME[nearest.edge]}; keep at least ${site.job.length(need)}.`;
   return report(site, 'edge-too-close', 'error', message, [bore], movedIn(site, bore, INWARD[nearest.edge], need - nearest.distance));
 }
 
@@ -42,8 +42,8 @@ function edgeBoreFinding(site: PanelSite, bore: PanelEdgeBore): DraftFinding | n
   ];
   const thin = walls.find((w) => w.distance >= 0 && w.distance < w.need);
   if (!thin || walls.some((w) => w.distance < 0)) return null;
-  const message = `${capitalize(boreName(bore))} leaves ${mm(thin.distance)} of board to ${thin.name}; keep at least ${mm(thin.need)}.`;
-  return report(site, 'edge-too-close', 'error', message, [bore], { advice: `Move it ${mm(thin.need - thin.distance)} away from ${thin.name}.` });
+  const message = `${capitalize(boreName(bore))} leaves ${site.job.length(thin.distance)} of board to ${thin.name}; keep at least ${site.job.length(thin.need)}.`;
+  return report(site, 'edge-too-close', 'error', message, [bore], { advice: `Move it ${site.job.length(thin.need - thin.distance)} away from ${thin.name}.` });
 }
 
 /** edge-too-close: a bore nearer an edge (or, in an edge, nearer a face) than the shop's minimum. */

@@ -1,7 +1,7 @@
 import { pairKey } from '../layout/panel-layout';
 import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
-import { boreName, capitalize, mm } from './wording';
+import { boreName, capitalize } from './wording';
 
 /**
  * faces-clash: a bore on face A and one on face B that overlap in plan and together go so deep that less
@@ -17,9 +17,9 @@ export function checkFacesClash(site: PanelSite): DraftFinding[] {
     const left = thickness - p.depth - q.depth;
     if (left >= minFloor) continue;
     const [a, b] = p.face === 'A' ? [p, q] : [q, p];
-    const between = left <= 0 ? 'no board between them: they meet inside it' : `only ${mm(left)} of board between them`;
-    const message = `${capitalize(boreName(a))} on face A and ${boreName(b)} on face B overlap in plan and leave ${between} (${mm(thickness)} board; keep at least ${mm(minFloor)}).`;
-    const advice = `Move one clear of the other in plan, or drill them at most ${mm(Math.max(thickness - minFloor, 0))} deep together.`;
+    const between = left <= 0 ? 'no board between them: they meet inside it' : `only ${site.job.length(left)} of board between them`;
+    const message = `${capitalize(boreName(a))} on face A and ${boreName(b)} on face B overlap in plan and leave ${between} (${site.job.length(thickness)} board; keep at least ${site.job.length(minFloor)}).`;
+    const advice = `Move one clear of the other in plan, or drill them at most ${site.job.length(Math.max(thickness - minFloor, 0))} deep together.`;
     findings.push(report(site, 'faces-clash', 'error', message, [a, b], { advice }));
   }
   return findings;

@@ -2,7 +2,6 @@ import type { Point } from '../grid/snap';
 import type { PanelFaceBore } from '../layout/bore';
 import type { Fix } from './finding';
 import type { PanelSite } from './panel-site';
-import { formatNumber } from './wording';
 
 /** How many candidate positions a move proposes at most: each costs a check of the panels it touches. */
 export const MAX_CANDIDATES = 8;
@@ -23,12 +22,12 @@ export function moveBoreTo(site: PanelSite, bore: PanelFaceBore, to: Point, why:
     const x = placement.x + to.x - bore.x;
     const y = placement.y + to.y - bore.y;
     return {
-      message: `Move placement ${placement.id} to x ${formatNumber(x)}, y ${formatNumber(y)}${why}.`,
+      message: `Move placement ${placement.id} to x ${site.job.coordinate(x)}, y ${site.job.coordinate(y)}${why}.`,
       edits: [{ kind: 'move-placement', panel, placement: placement.id, x, y }],
     };
   }
   return {
-    message: `Move bore ${bore.id} to x ${formatNumber(to.x)}, y ${formatNumber(to.y)}${why}.`,
+    message: `Move bore ${bore.id} to x ${site.job.coordinate(to.x)}, y ${site.job.coordinate(to.y)}${why}.`,
     edits: [{ kind: 'move-bore', panel, bore: bore.id, x: to.x, y: to.y }],
   };
 }

@@ -2,7 +2,7 @@ import { hingesNeeded } from '../compute/hinge-count';
 import { panelMass } from '../compute/panel-mass';
 import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
-import { formatNumber, mm } from './wording';
+import { formatNumber } from './wording';
 
 /**
  * hinge-count: a door or flap with fewer hinges than its hinge-edge length and mass need (trade-reference §2,
@@ -17,7 +17,7 @@ export function checkHingeCount(site: PanelSite): DraftFinding[] {
   const mass = panelMass(panel, material.density) + (panel.handleMass ?? 0);
   const hinges = site.layout.placed.filter((p) => p.fitting.purpose === 'hinge-cup').map((p) => p.placement);
   const ids = hinges.map((h) => h.id);
-  const size = `${mm(panel.height)} along its hinge edge, ${formatNumber(mass)} kg`;
+  const size = `${site.job.length(panel.height)} along its hinge edge, ${formatNumber(mass)} kg`;
   const needed = hingesNeeded(panel.height, mass);
   if (needed === null) {
     const message = `${what} ${panel.id} (${size}) is beyond the hinge rule of 2400 mm and 22 kg.`;
@@ -30,7 +30,7 @@ export function checkHingeCount(site: PanelSite): DraftFinding[] {
   const ys = hinges.map((h) => h.y);
   const spread = Math.max(...ys) - Math.min(...ys);
   if (panel.role === 'door' && spread <= panel.width) {
-    const message = `The outer hinges of door ${panel.id} are ${mm(spread)} apart, no more than its ${mm(panel.width)} width: the door may sag.`;
+    const message = `The outer hinges of door ${panel.id} are ${site.job.length(spread)} apart, no more than its ${site.job.length(panel.width)} width: the door may sag.`;
     return [report(site, 'hinge-count', 'warning', message, [], { advice: 'Spread the top and bottom hinges further apart.' }, ids)];
   }
   return [];

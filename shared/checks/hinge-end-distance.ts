@@ -3,7 +3,7 @@ import type { PlacedFitting } from '../layout/panel-layout';
 import type { DraftFinding, Fix } from './finding';
 import { platesMeeting } from './hinge-pairs';
 import { report, type PanelSite } from './panel-site';
-import { formatNumber, mm } from './wording';
+import { formatNumber } from './wording';
 
 /** The outer cups' centres sit 76 to 100 mm from a door's or flap's ends (trade-reference §2, common practice). */
 export const CUP_FROM_END = { min: 76, max: 100 } as const;
@@ -36,9 +36,9 @@ function moves(site: PanelSite, cup: Cup, fromEnd: (y: number) => number, end: E
     const dy = y - cup.y;
     const along = plates.map(({ panel: side, plate }) => ({ kind: 'move-placement' as const, panel: side.id, placement: plate.id, x: plate.x, y: plate.y + dy }));
     const sides = [...new Set(plates.map((p) => p.panel.id))].join(', ');
-    const taking = plates.length > 0 ? `, and its plate${plates.length > 1 ? 's' : ''} on ${sides} ${mm(Math.abs(dy))} ${dy > 0 ? 'up' : 'down'} with it` : '';
+    const taking = plates.length > 0 ? `, and its plate${plates.length > 1 ? 's' : ''} on ${sides} ${site.job.length(Math.abs(dy))} ${dy > 0 ? 'up' : 'down'} with it` : '';
     return {
-      message: `Move hinge ${placement.id} so its cup sits ${mm(fromEnd(y))} from the end${taking}.`,
+      message: `Move hinge ${placement.id} so its cup sits ${site.job.length(fromEnd(y))} from the end${taking}.`,
       edits: [{ kind: 'move-placement' as const, panel: panel.id, placement: placement.id, x: placement.x, y: placement.y + dy }, ...along],
     };
   });
@@ -51,7 +51,7 @@ function finding(site: PanelSite, cup: Cup, end: End): DraftFinding | null {
   if (distance >= CUP_FROM_END.min && distance <= CUP_FROM_END.max) return null;
   const where = end === 'bottom' ? 'the end at y = 0' : 'the far end';
   const id = cup.placed.placement.id;
-  const message = `Hinge ${id}'s cup is ${mm(distance)} from ${where} of ${panel.role} ${panel.id}; the outer cups sit 76 to 100 mm from the ends.`;
+  const message = `Hinge ${id}'s cup is ${site.job.length(distance)} from ${where} of ${panel.role} ${panel.id}; the outer cups sit 76 to 100 mm from the ends.`;
   const remedy = {
     candidates: () => [moves(site, cup, fromEnd, end)],
     advice: `Move the hinge and the plate it meets together so the cup sits 76 to 100 mm from ${where}; where no system hole for the plate allows that height, keep the nearest and check it against the hinge maker's data.`,

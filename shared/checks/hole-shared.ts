@@ -29,7 +29,7 @@ function rank(bore: PanelFaceBore): number {
 function finding(site: PanelSite, bores: PanelFaceBore[]): DraftFinding {
   const [hole] = bores;
   const names = bores.flatMap((b) => site.layout.placed.filter((p) => p.placement.id === b.placement).map(placementName));
-  const message = `The hole at x ${formatNumber(hole.x)}, y ${formatNumber(hole.y)} on face ${hole.face} (Ø${formatNumber(hole.diameter)}) is needed by ${names.join(' and ')}: one hole carries one fitting.`;
+  const message = `The hole at x ${site.job.coordinate(hole.x)}, y ${site.job.coordinate(hole.y)} on face ${hole.face} (Ø${formatNumber(hole.diameter)}) is needed by ${names.join(' and ')}: one hole carries one fitting.`;
   const movers = [...bores].sort((a, b) => rank(a) - rank(b) || (a.placement! < b.placement! ? -1 : 1)).slice(0, 2);
   return report(site, 'hole-shared', 'error', message, bores, {
     candidates: () => movers.map((b) => pitchMoves(site, b)),

@@ -1,5 +1,7 @@
 import type { Catalog } from '../catalog/fitting';
 import type { JobDocument, Material, Panel } from '../model/job-document';
+import type { LengthUnit } from '../units/length-unit';
+import { coordinateWords, lengthWords, systemWords } from './wording';
 
 /** What the checks look up across a job, built once per run. */
 export interface JobSite {
@@ -18,6 +20,13 @@ export interface JobSite {
   carcassBoard: ReadonlyMap<string, number>;
   /** For each carcass id, its side panels in document order. */
   sidesOf: ReadonlyMap<string, Panel[]>;
+  /** The unit the findings' messages speak in, and how they print a length in it. */
+  unit: LengthUnit;
+  length: (mm: number) => string;
+  /** A position on the panel: `37` in mm, `1 15/32"` in inches. */
+  coordinate: (mm: number) => string;
+  /** The system's own figures: `32 mm`, `32 mm (1 17/64")`. */
+  system: (mm: number) => string;
 }
 
 function liftCount(panel: Panel | undefined, catalog: Catalog): number {
@@ -25,7 +34,7 @@ function liftCount(panel: Panel | undefined, catalog: Catalog): number {
 }
 
 /** Builds the job-wide lookups the panel checks share. */
-export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
+export function jobSite(job: JobDocument, catalog: Catalog, unit: LengthUnit = 'mm'): JobSite {
   const materials = new Map(job.materials.map((m) => [m.id, m]));
   const panels = new Map(job.panels.map((p) => [p.id, p]));
   const flapsOn = new Map<string, Panel[]>();
@@ -44,7 +53,7 @@ export function jobSite(job: JobDocument, catalog: Catalog): JobSite {
   }
   const sidesOf = new Map<string, Panel[]>();
   for (const p of job.panels) if (p.role === 'side' && p.carcass !== undefined) sidesOf.set(p.carcass, [...(sidesOf.get(p.carcass) ?? []), p]);
-  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard, sidesOf };
+  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard, sidesOf, unit, length: lengthWords(unit), coordinate: coordinateWords(unit), system: systemWords(unit) };
 }
 
 /** The other side of a panel's carcass, when the panel is one of exactly two sides. */

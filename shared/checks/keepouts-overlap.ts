@@ -3,7 +3,7 @@ import { pairKey } from '../layout/panel-layout';
 import { indexBoxes } from './box-index';
 import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
-import { mm, placementName } from './wording';
+import { placementName } from './wording';
 
 /** Rectangles that merely touch do not overlap. */
 const TOUCH = 1e-6;
@@ -48,8 +48,8 @@ export function checkKeepOutsOverlap(site: PanelSite): DraftFinding[] {
   if (keepOuts.length < 2) return [];
   const name = (id: string) => placementName(site.layout.placed.find((p) => p.placement.id === id)!);
   return overlaps(keepOuts).map(({ a, b, face, width, height }) => {
-    const message = `The bodies of ${name(a)} and ${name(b)} on face ${face} overlap by ${mm(width)} × ${mm(height)}.`;
-    const advice = `Move one of them ${mm(Math.min(width, height))} away from the other.`;
+    const message = `The bodies of ${name(a)} and ${name(b)} on face ${face} overlap by ${site.job.length(width)} × ${site.job.length(height)}.`;
+    const advice = `Move one of them ${site.job.length(Math.min(width, height))} away from the other.`;
     return report(site, 'keepouts-overlap', 'error', message, [], { advice }, [a, b]);
   });
 }

@@ -3,7 +3,7 @@ import { planBox, type Box } from '../layout/bore';
 import { layoutPanel } from '../layout/panel-layout';
 import { isEdgeBore, type JobDocument, type Panel } from '../model/job-document';
 import { compareFindings, type Finding } from './finding';
-import { checkPanel } from './index';
+import { checkPanel, type CheckOptions } from './index';
 
 /**
  * How far (mm) from a moved item another hole can still share a finding with it: well past the widest
@@ -34,7 +34,7 @@ function overlaps(a: Box, b: Box): boolean {
  * `MOVE_REACH` of what moved, so that a move costs the checks of its neighbourhood, not of every hole.
  * A full `checkPanel` when the move ends gives the same findings (move-check.spec.ts).
  */
-export function checkMove(job: JobDocument, catalog: Catalog, before: readonly Finding[], panel: Panel, moved: MovedItems): Finding[] {
+export function checkMove(job: JobDocument, catalog: Catalog, before: readonly Finding[], panel: Panel, moved: MovedItems, options: Pick<CheckOptions, 'unit'> = {}): Finding[] {
   const movers = layoutPanel(
     { ...panel, placements: panel.placements.filter((p) => moved.placements.has(p.id)), bores: panel.bores.filter((b) => moved.bores.has(b.id)) },
     catalog,
@@ -45,6 +45,6 @@ export function checkMove(job: JobDocument, catalog: Catalog, before: readonly F
   const movedBores = new Set([...moved.bores, ...movers.bores.map((b) => b.id)]);
   const concernsMoved = (f: Finding) => f.placements.some((id) => moved.placements.has(id)) || f.bores.some((id) => movedBores.has(id));
   const wholePanel = (f: Finding) => f.placements.length === 0 && f.bores.length === 0;
-  const again = checkPanel(job, { ...panel, bores: near }, catalog, { fixes: false }).filter((f) => concernsMoved(f) || wholePanel(f));
+  const again = checkPanel(job, { ...panel, bores: near }, catalog, { fixes: false, unit: options.unit }).filter((f) => concernsMoved(f) || wholePanel(f));
   return [...before.filter((f) => !concernsMoved(f) && !wholePanel(f)), ...again].sort(compareFindings);
 }

@@ -5,7 +5,7 @@ import type { DraftFinding, Fix } from './finding';
 import { cupsMeeting } from './hinge-pairs';
 import { GRID_TOLERANCE } from '../grid/system-grid';
 import { collect, isMeasurable, report, type PanelSite } from './panel-site';
-import { boreName, capitalize, formatNumber, mm, placementName } from './wording';
+import { boreName, capitalize, placementName } from './wording';
 
 /**
  * The rows a placement may follow besides the panel's 32 mm grid. A mounting plate for an inset door sits
@@ -52,13 +52,13 @@ function shifts(site: PanelSite, placed: PlacedFitting, first: Point, target: Po
     const shift = { x: target.x - first.x, y: target.y - first.y + dy };
     const at = { x: placement.x + shift.x, y: placement.y + shift.y };
     const moveIt: Fix = {
-      message: `Move ${placementName(placed)} to x ${formatNumber(at.x)}, y ${formatNumber(at.y)} so its holes fall on system holes.`,
+      message: `Move ${placementName(placed)} to x ${site.job.coordinate(at.x)}, y ${site.job.coordinate(at.y)} so its holes fall on system holes.`,
       edits: [{ kind: 'move-placement', panel: site.panel.id, placement: placement.id, ...at }],
     };
     if (cups.length === 0 || shift.y === 0) return [moveIt];
     // A plate that moves up or down takes its hinges with it, or the fix would part them.
     const withCups: Fix = {
-      message: `Move ${placementName(placed)} to x ${formatNumber(at.x)}, y ${formatNumber(at.y)} and the hinge${cups.length > 1 ? 's' : ''} it meets ${mm(Math.abs(shift.y))} ${shift.y > 0 ? 'up' : 'down'} with it (${cups.map((c) => `${c.cup.id} on ${c.front.id}`).join(', ')}).`,
+      message: `Move ${placementName(placed)} to x ${site.job.coordinate(at.x)}, y ${site.job.coordinate(at.y)} and the hinge${cups.length > 1 ? 's' : ''} it meets ${site.job.length(Math.abs(shift.y))} ${shift.y > 0 ? 'up' : 'down'} with it (${cups.map((c) => `${c.cup.id} on ${c.front.id}`).join(', ')}).`,
       edits: [
         ...moveIt.edits,
         ...cups.map(({ front, cup }) => ({ kind: 'move-placement' as const, panel: front.id, placement: cup.id, x: cup.x, y: cup.y + shift.y })),
@@ -81,10 +81,10 @@ function finding(site: PanelSite, placed: PlacedFitting): DraftFinding | null {
     return report(site, 'off-grid', 'warning', message, off);
   }
   const distance = Math.hypot(target.x - first.x, target.y - first.y);
-  const message = `${capitalize(name)} is off the 32 mm grid: ${boreName(first)} sits at x ${formatNumber(first.x)}, y ${formatNumber(first.y)}, ${mm(distance)} from the nearest system hole.`;
+  const message = `${capitalize(name)} is off the 32 mm grid: ${boreName(first)} sits at x ${site.job.coordinate(first.x)}, y ${site.job.coordinate(first.y)}, ${site.job.length(distance)} from the nearest system hole.`;
   return report(site, 'off-grid', 'warning', message, off, {
     candidates: () => [shifts(site, placed, first, target)],
-    advice: `Move it so its holes fall on system holes, ${mm(site.grid.pitch)} apart from x ${formatNumber(site.grid.setback)}, y ${formatNumber(site.grid.firstY)}, and move what it meets with it.`,
+    advice: `Move it so its holes fall on system holes, ${site.job.system(site.grid.pitch)} apart from x ${site.job.coordinate(site.grid.setback)}, y ${site.job.coordinate(site.grid.firstY)}, and move what it meets with it.`,
   });
 }
 

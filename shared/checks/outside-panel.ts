@@ -2,7 +2,7 @@ import { edgeLength, edgeSpan, type PanelBore } from '../layout/bore';
 import { EDGE_NAME, edgeClearance, nearestEdge } from './edges';
 import type { DraftFinding } from './finding';
 import { isMeasurable, report, type PanelSite } from './panel-site';
-import { boreName, capitalize, mm } from './wording';
+import { boreName, capitalize } from './wording';
 
 /** Why a bore does not fit in the panel, or null when it does. */
 function outsideBy(site: PanelSite, bore: PanelBore): string | null {
@@ -13,13 +13,13 @@ function outsideBy(site: PanelSite, bore: PanelBore): string | null {
     const nearest = nearestEdge(bore, panel);
     return -nearest.distance >= bore.diameter
       ? `lies off the panel, beyond ${EDGE_NAME[nearest.edge]}`
-      : `reaches ${mm(-nearest.distance)} past ${EDGE_NAME[nearest.edge]}`;
+      : `reaches ${site.job.length(-nearest.distance)} past ${EDGE_NAME[nearest.edge]}`;
   }
   const r = bore.diameter / 2;
   if (bore.depth >= edgeSpan(bore.edge, panel)) return 'runs right through to the opposite edge';
   const along = edgeLength(bore.edge, panel);
-  if (bore.at - r < 0 || bore.at + r > along) return `does not fit within the ${mm(along)} length of its edge`;
-  if (bore.z - r < 0 || bore.z + r > panel.thickness) return `does not fit within the ${mm(panel.thickness)} thickness`;
+  if (bore.at - r < 0 || bore.at + r > along) return `does not fit within the ${site.job.length(along)} length of its edge`;
+  if (bore.z - r < 0 || bore.z + r > panel.thickness) return `does not fit within the ${site.job.length(panel.thickness)} thickness`;
   return null;
 }
 

@@ -90,7 +90,7 @@ function touched(site: JobSite, fix: Fix, panel: string): Set<string> {
 function passes(site: JobSite, before: DraftsOf, draft: DraftFinding, fix: Fix): boolean {
   const after = applyFix(site.job, site.catalog, fix);
   if (!after) return false;
-  const afterSite = jobSite(after, site.catalog);
+  const afterSite = jobSite(after, site.catalog, site.unit);
   const key = findingKey(draft);
   for (const id of touched(afterSite, fix, draft.panel)) {
     const panel = afterSite.panels.get(id);

@@ -1,7 +1,7 @@
 import { maxShelfSpan, shelfDeflection } from '../compute/shelf-sag';
 import type { DraftFinding } from './finding';
 import { report, type PanelSite } from './panel-site';
-import { formatNumber, mm } from './wording';
+import { formatNumber } from './wording';
 
 /**
  * shelf-sag: a shelf that sags more than span/sagRatio (L/144 by default, AWS) under the AWS general load
@@ -16,7 +16,7 @@ export function checkShelfSag(site: PanelSite): DraftFinding[] {
   const limit = panel.height / ratio;
   if (sag <= limit) return [];
   const longest = maxShelfSpan({ thickness: panel.thickness, modulus: material.modulus }, ratio);
-  const message = `Shelf ${panel.id} (${mm(panel.height)} span, ${mm(panel.thickness)} ${material.name}) sags ${mm(sag)} under 40 lb/ft² (1.9 kPa), more than L/${formatNumber(ratio)} = ${mm(limit)}.`;
-  const advice = `Keep its span under ${mm(Math.floor(longest))}, support it in the middle, or use a thicker or stiffer board.`;
+  const message = `Shelf ${panel.id} (${site.job.length(panel.height)} span, ${site.job.length(panel.thickness)} ${material.name}) sags ${site.job.length(sag)} under 40 lb/ft² (1.9 kPa), more than L/${formatNumber(ratio)} = ${site.job.length(limit)}.`;
+  const advice = `Keep its span under ${site.job.length(Math.floor(longest))}, support it in the middle, or use a thicker or stiffer board.`;
   return [report(site, 'shelf-sag', 'warning', message, [], { advice })];
 }

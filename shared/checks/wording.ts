@@ -1,9 +1,29 @@
 import type { PanelBore } from '../layout/bore';
 import type { PlacedFitting } from '../layout/panel-layout';
+import { formatLength, formatSystemLength } from '../units/format-length';
+import type { LengthUnit } from '../units/length-unit';
 
 /** A length as a bench hand reads it: at most one decimal, in mm. */
 export function mm(value: number): string {
   return `${formatNumber(value)} mm`;
+}
+
+/**
+ * How a message prints a length for someone who reads `unit`: `mm` above for millimetres (what the command
+ * line and the API print unless asked otherwise), the shared length format for inches (`12 3/8"`).
+ */
+export function lengthWords(unit: LengthUnit): (value: number) => string {
+  return unit === 'mm' ? mm : (value) => formatLength(value, unit);
+}
+
+/** A position on the panel (`x 37, y 9.5`): the bare number for millimetres, the length with its sign for inches. */
+export function coordinateWords(unit: LengthUnit): (value: number) => string {
+  return unit === 'mm' ? formatNumber : (value) => formatLength(value, unit);
+}
+
+/** A figure of the 32 mm system itself (its pitch): in mm, with the inches beside it for an inch reader. */
+export function systemWords(unit: LengthUnit): (value: number) => string {
+  return unit === 'mm' ? mm : (value) => formatSystemLength(value, unit);
 }
 
 /** A number rounded to one decimal, without a trailing `.0`. */

@@ -44,6 +44,17 @@ describe('hole schedule', () => {
     expect(pilot.slice(4, 11)).toEqual(['edge x1', '560', '345', '9', '5', '50', 'no']);
   });
 
+  it('adds the position in inches after the other columns for someone who reads inches, the mm columns unchanged', () => {
+    const [inchHeader, ...inchRows] = read(holeScheduleCsv({ ...ctx, unit: 'in-32' }, drilling));
+    expect(inchHeader).toEqual([...header, 'x in inches', 'y in inches', 'z from face A in inches']);
+    expect(inchRows.map((r) => r.slice(0, header.length))).toEqual(rows);
+    // The international inch is 25.4 mm (NIST SP 811, published). 21.5 mm = 0.8465 in = 27.09/32 → 27/32;
+    // 87 mm = 3.4252 in = 109.6/32 → 110/32 = 3 7/16.
+    expect(inchRows.find((r) => r[1] === 'door' && r[3] === 'A:21.5:87:35')!.slice(header.length)).toEqual(['27/32"', '3 7/16"', '']);
+    // The edge bore: x 560 mm = 22.047 in = 705.51/32 → 706/32 = 22 1/16; y 345 mm = 13.583 in = 434.6/32 → 435/32 = 13 19/32; z 9 mm = 0.3543 in = 11.34/32 → 11/32.
+    expect(inchRows.find((r) => r[13] === 'pilot-x1')!.slice(header.length)).toEqual(['22 1/16"', '13 19/32"', '11/32"']);
+  });
+
   it('writes a name a spreadsheet would run as a formula as text, with a leading quote', () => {
     // `=HYPERLINK("x")` would be a live link; a full-width plus (U+FF0B) starts a formula in some spreadsheets too.
     expect(rows.find((r) => r[1] === 'side-l')![0]).toBe(`'=HYPERLINK("x")`);

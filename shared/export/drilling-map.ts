@@ -1,8 +1,9 @@
 import { handText } from '../layout/side-hand';
 import { checkBarBlock } from './check-bar';
 import { text, translate, type Drawing, type Shape } from './drawing';
-import { faceText, fittingNameOf, type ExportContext } from './export-context';
+import { type ExportContext, exportUnit, faceText, fittingNameOf } from './export-context';
 import { boreGroups, boreTable, type BoreGroup } from './map-bore-table';
+import type { LengthUnit } from '../units/length-unit';
 import { ordinateDimensions, ordinateReach } from './map-dimensions';
 import { legend } from './map-legend';
 import { figureReach, panelFigure } from './map-panel';
@@ -69,15 +70,15 @@ function flow(blocks: readonly Block[], width: number): Block {
  * The panel of a map at full size with its holes, edge strips and ordinate dimensions, from the top left of
  * all it reaches: what the template sheets tile, and nothing else.
  */
-export function mapFigure(view: MapView): Block {
+export function mapFigure(view: MapView, unit: LengthUnit): Block {
   const figure = panelFigure(view);
-  const dims = ordinateDimensions(view, figure.reach);
-  return { shapes: translate([...figure.shapes, ...dims.shapes], dims.reach.left, dims.reach.top), ...mapFigureSize(view) };
+  const dims = ordinateDimensions(view, figure.reach, unit);
+  return { shapes: translate([...figure.shapes, ...dims.shapes], dims.reach.left, dims.reach.top), ...mapFigureSize(view, unit) };
 }
 
 /** The size of a map's figure, worked out without drawing it: what the cover sheet counts template pages by. */
-export function mapFigureSize(view: MapView): { width: number; height: number } {
-  const reach = ordinateReach(view, figureReach(view));
+export function mapFigureSize(view: MapView, unit: LengthUnit): { width: number; height: number } {
+  const reach = ordinateReach(view, figureReach(view), unit);
   return { width: reach.left + view.panel.width + reach.right, height: reach.top + view.panel.height + reach.bottom };
 }
 
@@ -85,7 +86,7 @@ export function mapFigureSize(view: MapView): { width: number; height: number } 
 export function mapBlocks(ctx: ExportContext, drilling: PanelDrilling, view: MapView): { title: Block; groups: BoreGroup[]; legend: Block; checkBar: Block; notes: string[] } {
   return {
     title: titleBlock(ctx, drilling, view.face),
-    groups: boreGroups(view, fittingNameOf(ctx, view.panel)),
+    groups: boreGroups(view, fittingNameOf(ctx, view.panel), exportUnit(ctx)),
     legend: legend(),
     checkBar: checkBarBlock(),
     notes: [orientationText(drilling, view), ...viewNotes(view)],
@@ -103,9 +104,9 @@ export function mapTitle(ctx: ExportContext, view: MapView): string {
  * the panel needs.
  */
 function drillingMap(ctx: ExportContext, drilling: PanelDrilling, view: MapView): Drawing {
-  const figure = mapFigure(view);
+  const figure = mapFigure(view, exportUnit(ctx));
   const blocks = mapBlocks(ctx, drilling, view);
-  const all = [blocks.title, boreTable(blocks.groups), blocks.legend, blocks.checkBar];
+  const all = [blocks.title, boreTable(blocks.groups, exportUnit(ctx)), blocks.legend, blocks.checkBar];
   const band = flow(all, Math.max(figure.width, ...all.map((b) => b.width)));
   const notesTop = MARGIN + band.height + 8;
   const figureTop = notesTop + 5 * blocks.notes.length;

@@ -1,5 +1,6 @@
 import type { Catalog } from '../catalog/fitting';
 import type { Face, JobDocument, Panel, PanelRole } from '../model/job-document';
+import type { LengthUnit } from '../units/length-unit';
 
 /** Who made a file: printed in title blocks and recorded in the manifest. */
 export interface Generator {
@@ -16,6 +17,16 @@ export interface ExportContext {
   generator: Generator;
   /** A panel's stored version, where the job comes from the database; a job file has none. */
   panelVersion?: (panelId: string) => number | undefined;
+  /**
+   * The unit of the person the files are made for: drawings dimension and label in it (`12 3/8"`) and the
+   * hole schedule adds inch columns. Millimetres unless given; the DXF is always in millimetres.
+   */
+  unit?: LengthUnit;
+}
+
+/** The unit the files are made in: the context's, else millimetres. */
+export function exportUnit(ctx: Pick<ExportContext, 'unit'>): LengthUnit {
+  return ctx.unit ?? 'mm';
 }
 
 /** The date as printed on a drawing: ISO 8601, `2026-03-14`, the same everywhere in the world. */

@@ -1,12 +1,16 @@
 import type { Panel } from '../model/job-document';
 import { toCsv } from './csv';
-import { carcassName, fittingNameOf, type ExportContext } from './export-context';
+import { carcassName, type ExportContext, exportUnit, fittingNameOf } from './export-context';
 import { PURPOSE_STYLES } from './palette';
 import type { PanelDrilling } from './panel-drilling';
 import type { PanelHole } from './panel-holes';
+import { formatLength } from '../units/format-length';
+import { isInches } from '../units/length-unit';
 import { roundTo } from './units';
 
 const FIELDS = ['carcass', 'panel', 'panel name', 'hole', 'face or edge', 'x', 'y', 'z from face A', 'diameter', 'depth', 'through', 'fitting', 'purpose', 'bores'];
+/** Added after the others, so a reader that takes the columns above by position or by name reads them as before. */
+const INCH_FIELDS = ['x in inches', 'y in inches', 'z from face A in inches'];
 
 const n = (value: number) => roundTo(value, 0.0001);
 
@@ -20,10 +24,13 @@ function entry(hole: PanelHole, panel: Panel): [number, number] {
  * The hole schedule as CSV: a row per hole of every panel (each drilled once, whoever needs it), in the
  * document's order, in the panel's frame seen from face A (mm), named by the key every file of the pack
  * gives it. An edge hole's x and y are where it enters its edge; z is its height from face A. `bores`
- * names the document's bores the hole drills.
+ * names the document's bores the hole drills. For someone who reads inches (`ctx.unit`), the position
+ * follows again in inches (`12 3/8"`), the millimetre columns kept as they are.
  */
 export function holeScheduleCsv(ctx: ExportContext, drilling: readonly PanelDrilling[]): string {
   const rows: (string | number)[][] = [];
+  const unit = exportUnit(ctx);
+  const inches = isInches(unit);
   for (const { panel, holes } of drilling) {
     const fittingName = fittingNameOf(ctx, panel);
     const carcass = carcassName(ctx, panel);
@@ -44,8 +51,9 @@ export function holeScheduleCsv(ctx: ExportContext, drilling: readonly PanelDril
         hole.placement === undefined ? '' : fittingName(hole.placement),
         PURPOSE_STYLES[hole.purpose].label,
         hole.bores.join(' '),
+        ...(inches ? [formatLength(x, unit), formatLength(y, unit), hole.kind === 'edge' ? formatLength(hole.z, unit) : ''] : []),
       ]);
     }
   }
-  return toCsv(FIELDS, rows);
+  return toCsv(inches ? [...FIELDS, ...INCH_FIELDS] : FIELDS, rows);
 }

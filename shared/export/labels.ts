@@ -4,12 +4,12 @@ import { panelBores } from '../layout/panel-layout';
 import { handText, panelHands } from '../layout/side-hand';
 import type { Panel } from '../model/job-document';
 import { text, translate, type Drawing, type RectShape, type Shape } from './drawing';
-import { carcassName, dateText, faceName, materialName, type ExportContext } from './export-context';
+import { carcassName, dateText, type ExportContext, exportUnit, faceName, materialName } from './export-context';
 import { INK, MUTED } from './palette';
 import { PAGE_MARGIN, PAPER, type PaperName } from './paper';
 import { finishPdf, startPdf, type PdfOptions } from './pdf-document';
 import { estimateTextWidth, fitText } from './text-width';
-import { lengthText, mmToPt } from './units';
+import { mmToPt, sizeText } from './units';
 
 /** A sheet of self-adhesive labels: columns by rows of labels of one size, with their margins and gap, mm. */
 export interface LabelSheet {
@@ -113,7 +113,7 @@ function label(ctx: ExportContext, sheet: LabelSheet, panel: Panel, hand: string
   const measure = (link === undefined ? width - inset : qr.x - 3.5) - inset;
   const line = (y: number, value: string, size: number, color = INK) => text(inset, y * k, fitText(value, size, measure), size, color);
   const carcass = panel.carcass === undefined ? 'No carcass' : carcassName(ctx, panel);
-  const size = `${[panel.width, panel.height, panel.thickness].map(lengthText).join(' × ')} mm`;
+  const size = sizeText([panel.width, panel.height, panel.thickness], exportUnit(ctx));
   const shapes: Shape[] = [
     { kind: 'rect', x: 0, y: 0, width, height, stroke: CUT_LINE },
     line(6.4, ctx.job.name, 2.5, MUTED),

@@ -3,7 +3,8 @@ import { line, text, type Shape } from './drawing';
 import type { MapView } from './map-view';
 import { INK, MUTED, PURPOSE_STYLES } from './palette';
 import { fitText } from './text-width';
-import { lengthText } from './units';
+import type { LengthUnit } from '../units/length-unit';
+import { drawingLength, lengthText } from './units';
 
 /** Bores that are drilled alike: one setting of bit, depth stop and face. */
 export interface BoreGroup {
@@ -16,20 +17,26 @@ export interface BoreGroup {
   fittings: string[];
 }
 
-/** Where a bore is drilled from, as the bench reads it: `face A`, or `edge x0, 9 from face A`. */
-function boreWhere(bore: PanelBore): string {
-  return bore.kind === 'face' ? `face ${bore.face}` : `edge ${bore.edge}, ${lengthText(bore.z)} from face A`;
+/** A bit's diameter or depth stop: always mm, as the 32 mm system's bits are sold; said so on a sheet in inches, so that no one reads 35 as inches. */
+function bitText(mm: number, unit: LengthUnit): string {
+  return unit === 'mm' ? lengthText(mm) : `${lengthText(mm)} mm`;
+}
+
+/** Where a bore is drilled from, as the bench reads it: `face A`, or `edge x0, 9 from face A` (`11/32"` for inches). */
+function boreWhere(bore: PanelBore, unit: LengthUnit): string {
+  return bore.kind === 'face' ? `face ${bore.face}` : `edge ${bore.edge}, ${drawingLength(bore.z, unit)} from face A`;
 }
 
 /**
  * The bores of a map gathered by how they are drilled (purpose, face or edge, diameter, depth), largest
  * bit first: the list a bench hand sets the machine from. `fittingName` names the fitting of a placement.
+ * Bits and depth stops stay in mm, as the 32 mm system's bits are sold; the edge position follows `unit`.
  */
-export function boreGroups(view: MapView, fittingName: (placementId: string) => string): BoreGroup[] {
+export function boreGroups(view: MapView, fittingName: (placementId: string) => string, unit: LengthUnit): BoreGroup[] {
   const groups = new Map<string, BoreGroup>();
   for (const bore of [...view.faceBores, ...view.edgeBores]) {
-    const depth = bore.kind === 'face' && bore.through ? 'THRU' : lengthText(bore.depth);
-    const where = boreWhere(bore);
+    const depth = bore.kind === 'face' && bore.through ? 'THRU' : bitText(bore.depth, unit);
+    const where = boreWhere(bore, unit);
     const key = [bore.purpose, where, bore.diameter, depth].join('\n');
     const group = groups.get(key) ?? { purpose: bore.purpose, where, diameter: bore.diameter, depth, count: 0, fittings: [] };
     groups.set(key, group);
@@ -54,7 +61,7 @@ const COLUMNS = [
 const BORE_TABLE_WIDTH = COLUMNS.reduce((sum, c) => sum + c.width, 0);
 
 /** The bore table drawn from its top left corner: a heading, a header row and a row per group. */
-export function boreTable(groups: readonly BoreGroup[]): { shapes: Shape[]; width: number; height: number } {
+export function boreTable(groups: readonly BoreGroup[], unit: LengthUnit): { shapes: Shape[]; width: number; height: number } {
   const rule = { color: MUTED, width: 0.15 };
   const shapes: Shape[] = [text(0, 4, 'Bore table: bores drilled alike', 3.5, INK)];
   let y = 7;
@@ -75,7 +82,7 @@ export function boreTable(groups: readonly BoreGroup[]): { shapes: Shape[]; widt
   for (const g of groups) {
     const { letter, color, label } = PURPOSE_STYLES[g.purpose];
     const what = g.fittings.length === 0 ? label : `${label}: ${g.fittings.join(', ')}`;
-    row([letter, lengthText(g.diameter), g.depth, g.where, String(g.count), what], [color]);
+    row([letter, bitText(g.diameter, unit), g.depth, g.where, String(g.count), what], [color]);
   }
   if (groups.length === 0) row(['', '', '', 'no bores on this map', '', ''], []);
   return { shapes, width: BORE_TABLE_WIDTH, height: y };

@@ -4,7 +4,8 @@ import { viewPoint, type MapView } from './map-view';
 import { distinctValues, spreadLabels } from './ordinates';
 import { MUTED } from './palette';
 import { estimateTextWidth } from './text-width';
-import { lengthText } from './units';
+import type { LengthUnit } from '../units/length-unit';
+import { drawingLength } from './units';
 
 const SIZE = 2.5;
 const SPACING = 3.1;
@@ -22,6 +23,7 @@ interface Column {
   outward: 1 | -1;
   /** 'x' when the marks lie along the sheet's x (labels written upright below or above the figure). */
   along: 'x' | 'y';
+  unit: LengthUnit;
 }
 
 /**
@@ -39,7 +41,7 @@ function ordinateColumn(column: Column): Shape[] {
   const v2 = v1 + outward * JOG;
   const shapes: Shape[] = [];
   marks.forEach((mark, i) => {
-    const label = lengthText(mark.value);
+    const label = drawingLength(mark.value, column.unit);
     const u = placed[i];
     const at = (along: number, across: number): [number, number] => (column.along === 'x' ? [along, across] : [across, along]);
     shapes.push(line(...at(mark.at, start), ...at(mark.at, v1), LEAD));
@@ -53,8 +55,8 @@ function ordinateColumn(column: Column): Shape[] {
 }
 
 /** How far a column of ordinate labels of these values reaches from where its leaders begin. */
-function columnDepth(values: readonly number[]): number {
-  return STRAIGHT + JOG + 1 + Math.max(0, ...values.map((v) => estimateTextWidth(lengthText(v), SIZE)));
+function columnDepth(values: readonly number[], unit: LengthUnit): number {
+  return STRAIGHT + JOG + 1 + Math.max(0, ...values.map((v) => estimateTextWidth(drawingLength(v, unit), SIZE)));
 }
 
 /** The distinct x and y values a map dimensions: the panel's own size and every hole's position. */
@@ -69,12 +71,12 @@ function ordinateValues(view: MapView): { xs: number[]; ys: number[] } {
  * How far a map reaches beyond the outline once its ordinate dimensions are drawn, from the figure's own
  * reach: what a template's tiles are planned from, without drawing the labels.
  */
-export function ordinateReach(view: MapView, figure: Reach): Reach {
+export function ordinateReach(view: MapView, figure: Reach, unit: LengthUnit): Reach {
   const { xs, ys } = ordinateValues(view);
   const reach = { ...figure };
-  reach.bottom += 1 + columnDepth(xs) + 5;
-  if (view.referenceAt === 'left') reach.left += 1 + columnDepth(ys);
-  else reach.right += 1 + columnDepth(ys);
+  reach.bottom += 1 + columnDepth(xs, unit) + 5;
+  if (view.referenceAt === 'left') reach.left += 1 + columnDepth(ys, unit);
+  else reach.right += 1 + columnDepth(ys, unit);
   reach.top += 5;
   return reach;
 }
@@ -84,7 +86,7 @@ export function ordinateReach(view: MapView, figure: Reach): Reach {
  * written on the reference edge's side, each value once however many bores share it, the panel's own size
  * included. Shapes are relative to the outline's top left; the result's reach includes `figure`'s.
  */
-export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shape[]; reach: Reach } {
+export function ordinateDimensions(view: MapView, figure: Reach, unit: LengthUnit): { shapes: Shape[]; reach: Reach } {
   const { width: W, height: H } = view.panel;
   const { xs, ys } = ordinateValues(view);
   const below = ordinateColumn({
@@ -92,6 +94,7 @@ export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shap
     start: H + figure.bottom + 1,
     outward: 1,
     along: 'x',
+    unit,
   });
   const onLeft = view.referenceAt === 'left';
   const beside = ordinateColumn({
@@ -99,11 +102,13 @@ export function ordinateDimensions(view: MapView, figure: Reach): { shapes: Shap
     start: onLeft ? -figure.left - 1 : W + figure.right + 1,
     outward: onLeft ? -1 : 1,
     along: 'y',
+    unit,
   });
-  const reach = ordinateReach(view, figure);
+  const reach = ordinateReach(view, figure, unit);
+  const words = unit === 'mm' ? 'mm' : 'inches';
   const captions = [
-    text(onLeft ? -reach.left : W + reach.right, H + reach.bottom - 1, 'x: mm from the reference edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
-    text(onLeft ? -reach.left : W + reach.right, -figure.top - 3, 'y: mm from the lower edge', SIZE, MUTED, onLeft ? 'start' : 'end'),
+    text(onLeft ? -reach.left : W + reach.right, H + reach.bottom - 1, `x: ${words} from the reference edge`, SIZE, MUTED, onLeft ? 'start' : 'end'),
+    text(onLeft ? -reach.left : W + reach.right, -figure.top - 3, `y: ${words} from the lower edge`, SIZE, MUTED, onLeft ? 'start' : 'end'),
   ];
   return { shapes: [...below, ...beside, ...captions], reach };
 }

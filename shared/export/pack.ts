@@ -6,7 +6,7 @@ import { cautionsFor } from './cautions';
 import { coverSheet } from './cover-sheet';
 import { notDrilled } from './drilling-programs';
 import { DXF_LAYER_SCHEME } from './dxf-layers';
-import { type ExportContext } from './export-context';
+import { exportUnit, type ExportContext } from './export-context';
 import { hardwareList, hardwareListCsv } from './hardware-list';
 import { holeScheduleCsv } from './hole-schedule';
 import { labelsPdf } from './labels';
@@ -80,7 +80,7 @@ export function planPack(input: PackInput): Pack {
   const { ctx } = input;
   const { job, catalog } = ctx;
   const root = safeSegment(`${job.name} bench pack`, 'bench pack');
-  const findings = input.findings ?? checkJob(job, catalog);
+  const findings = input.findings ?? checkJob(job, catalog, { unit: exportUnit(ctx) });
   const drilling = jobDrilling(job, catalog, findings);
   const hardware = hardwareList(ctx, drilling);
   const producer = `${ctx.generator.name} ${ctx.generator.version}`;

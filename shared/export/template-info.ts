@@ -1,6 +1,6 @@
 import { text } from './drawing';
 import { mapBlocks, type Block } from './drilling-map';
-import type { ExportContext } from './export-context';
+import { exportUnit, type ExportContext } from './export-context';
 import { boreTable } from './map-bore-table';
 import type { MapView } from './map-view';
 import { PageFlow } from './page-flow';
@@ -37,7 +37,7 @@ export function templateInfo(ctx: ExportContext, drilling: PanelDrilling, view: 
   for (const note of blocks.notes) flow.paragraph(note, 3.3, note === blocks.notes[0] ? INK : MUTED);
   flow.gap(4);
   const { groups } = blocks;
-  for (let i = 0; i === 0 || i < groups.length; i += TABLE_ROWS) place(boreTable(groups.slice(i, i + TABLE_ROWS)));
+  for (let i = 0; i === 0 || i < groups.length; i += TABLE_ROWS) place(boreTable(groups.slice(i, i + TABLE_ROWS), exportUnit(ctx)));
   flow.gap(6);
   place(blocks.legend);
   flow.gap(6);

@@ -1,6 +1,7 @@
 import { translate, type Drawing } from './drawing';
+import type { LengthUnit } from '../units/length-unit';
 import { mapFigure, mapFigureSize, mapTitle, orientationText } from './drilling-map';
-import type { ExportContext } from './export-context';
+import { exportUnit, type ExportContext } from './export-context';
 import { mapViews, type MapView } from './map-view';
 import type { PageFlow } from './page-flow';
 import type { PanelDrilling } from './panel-drilling';
@@ -25,16 +26,16 @@ export interface MapTemplate {
 }
 
 /** The pages a map's figure is tiled onto, planned from its size alone. */
-function tilePlan(view: MapView, paper: PaperName): TilePlan {
-  const { width, height } = mapFigureSize(view);
+function tilePlan(view: MapView, paper: PaperName, unit: LengthUnit): TilePlan {
+  const { width, height } = mapFigureSize(view, unit);
   return planTiles(width + 2 * FIGURE_MARGIN, height + 2 * FIGURE_MARGIN, paper);
 }
 
 /** Lays out the templates of each map of a panel on the paper: what the PDF prints. */
 export function panelTemplates(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): MapTemplate[] {
   return mapViews(drilling).map((view) => {
-    const figure = mapFigure(view);
-    const plan = tilePlan(view, paper);
+    const figure = mapFigure(view, exportUnit(ctx));
+    const plan = tilePlan(view, paper, exportUnit(ctx));
     const drawing: Drawing = {
       width: figure.width + 2 * FIGURE_MARGIN,
       height: figure.height + 2 * FIGURE_MARGIN,
@@ -55,7 +56,7 @@ export function templatePageCount(templates: readonly Pick<MapTemplate, 'info' |
 export function templateSheetCount(ctx: ExportContext, drilling: PanelDrilling, paper: PaperName): number {
   return templatePageCount(
     mapViews(drilling).map((view) => {
-      const plan = tilePlan(view, paper);
+      const plan = tilePlan(view, paper, exportUnit(ctx));
       return { plan, info: templateInfo(ctx, drilling, view, plan, paper) };
     }),
   );

@@ -4,8 +4,8 @@ import { JobDetail, JobSummary, PanelRecord, Role, User } from '../../shared/api
 import { AuthStore } from '../app/auth/auth-store';
 
 /** Test data shaped exactly as the API answers, so specs exercise the contract's schemas. */
-export function aUser(role: Role): User {
-  return { id: 3, email: `${role}@greyfield.example`, name: `Demo ${role}`, role };
+export function aUser(role: Role, units: User['units'] = 'mm'): User {
+  return { id: 3, email: `${role}@greyfield.example`, name: `Demo ${role}`, role, units };
 }
 
 export function aJobSummary(changes: Partial<JobSummary> = {}): JobSummary {

@@ -44,6 +44,7 @@ const ROUTES: Record<string, Row> = {
     expect: [200, 200, 200, 200, 200],
     ownClient: true,
   },
+  'PATCH /api/auth/me/preferences': { request: (c) => c.patch('/api/auth/me/preferences').send({ units: 'mm' }), expect: [401, 200, 200, 200, 200] },
   'POST /api/auth/sign-out': { request: (c) => c.post('/api/auth/sign-out'), expect: [204, 204, 204, 204, 204], ownClient: true },
   'GET /api/jobs': { request: (c) => c.get('/api/jobs?archived=false'), expect: [401, 200, 200, 200, 200] },
   'POST /api/jobs': { request: (c) => c.post('/api/jobs').send({ name: 'Matrix job' }), expect: [401, 201, 201, 403, 403] },

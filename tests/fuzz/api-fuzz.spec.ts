@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import type { Test } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as z from 'zod';
-import { carcassCreateBody, jobCreateBody, jobUpdateBody, panelDrillingBody, panelFieldsBody, panelStatusBody, panelUpdateBody, signInBody } from '../../shared/api/contract';
+import { carcassCreateBody, jobCreateBody, jobUpdateBody, panelDrillingBody, panelFieldsBody, panelStatusBody, panelUpdateBody, preferencesBody, signInBody } from '../../shared/api/contract';
 import { packSendBody } from '../../shared/api/pack-contract';
 import { machineSettingsBody } from '../../shared/api/settings-contract';
 import { swapApplyBody } from '../../shared/api/swap-contract';
@@ -51,6 +51,7 @@ const csvBytes = fc
 const WRITE_ROUTES: Record<string, WriteRoute> = {
   'POST /api/auth/sign-in': { body: { json: signInBody }, anonymous: true },
   'POST /api/auth/sign-out': { body: 'none', anonymous: true },
+  'PATCH /api/auth/me/preferences': { body: { json: preferencesBody } },
   'POST /api/auth/password-reset': { body: { json: passwordResetRequestBody }, anonymous: true },
   'POST /api/auth/password-reset/:token': { body: { json: passwordResetBody }, anonymous: true },
   'POST /api/invitations/:token/accept': { body: { json: acceptInvitationBody }, anonymous: true },

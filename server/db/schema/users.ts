@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, integer, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { role, type Role } from '../../../shared/api/contract';
+import { LENGTH_UNITS, type LengthUnit } from '../../../shared/units/length-unit';
 import { oneOf } from './check';
 
 export const users = pgTable(
@@ -15,11 +16,14 @@ export const users = pgTable(
     demo: boolean('demo').notNull().default(false),
     /** A deactivated member cannot sign in and their sessions are ended; their name stays in the history. */
     active: boolean('active').notNull().default(true),
+    /** How this member reads and types lengths on screen and in packs made for them; the data stays in mm. */
+    units: text('units').$type<LengthUnit>().notNull().default('mm'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
     // Sign-in lowercases the address; the index makes "A@x" and "a@x" one account.
     uniqueIndex('users_email_unique').on(sql`lower(${t.email})`),
     check('users_role_check', oneOf(t.role, role.options)),
+    check('users_units_check', oneOf(t.units, LENGTH_UNITS)),
   ],
 );

@@ -45,6 +45,19 @@ describe('AuthStore', () => {
     expect(auth.signedIn()).toBe(true);
   });
 
+  it("stores the user's choice of units and follows it at once, millimetres until then", async () => {
+    expect(auth.units()).toBe('mm');
+    const restoring = auth.restoreSession();
+    http.expectOne('/api/auth/session').flush({ user: aUser('bench') });
+    await restoring;
+    const choosing = auth.chooseUnits('in-64');
+    const request = http.expectOne({ method: 'PATCH', url: '/api/auth/me/preferences' });
+    expect(request.request.body).toEqual({ units: 'in-64' });
+    request.flush({ user: aUser('bench', 'in-64') });
+    await choosing;
+    expect(auth.units()).toBe('in-64');
+  });
+
   it('takes a 401 from me as nobody signed in', async () => {
     const restoring = auth.restoreSession();
     http.expectOne('/api/auth/session').flush({ user: null });

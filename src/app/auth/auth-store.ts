@@ -3,6 +3,7 @@ import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { can, type Permission } from '../../../shared/api/roles';
 import type { User } from '../../../shared/api/session-contract';
+import type { LengthUnit } from '../../../shared/units/length-unit';
 import { ApiProblem } from '../core/api-problem';
 
 /** The answers' schemas, loaded beside the first request rather than in the first page (session-contract.ts). */
@@ -20,6 +21,8 @@ export class AuthStore {
   readonly user = computed(() => this.current() ?? null);
   readonly role = computed(() => this.current()?.role);
   readonly signedIn = computed(() => this.user() !== null);
+  /** How the signed-in user reads lengths; millimetres when nobody is signed in. */
+  readonly units = computed<LengthUnit>(() => this.current()?.units ?? 'mm');
 
   can(permission: Permission): boolean {
     return can(this.role(), permission);
@@ -60,6 +63,12 @@ export class AuthStore {
       if (!(error instanceof ApiProblem && error.status === 401)) throw error;
     }
     this.forgetSession();
+  }
+
+  /** Stores the user's own choice of units; every length on screen follows it at once. Rejects with an ApiProblem. */
+  async chooseUnits(units: LengthUnit): Promise<void> {
+    const [raw, { userAnswer }] = await Promise.all([firstValueFrom(this.http.patch('/api/auth/me/preferences', { units })), answers()]);
+    this.remember(userAnswer.parse(raw).user);
   }
 
   /** A session the server started itself, by accepting an invitation: the app is signed in as its user. */

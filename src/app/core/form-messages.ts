@@ -11,6 +11,8 @@ export interface FieldWording {
 export function fieldMessage(control: AbstractControl, { label, unit = '' }: FieldWording): string {
   const errors = control.errors ?? {};
   if (errors['required']) return `Enter the ${label}.`;
+  // A length that does not read (ui/length-input.ts) says what to type instead.
+  if (typeof errors['length'] === 'string') return errors['length'];
   // Limits sit under narrow number fields whose label is right above: keep them short.
   if (errors['min']) return `At least ${errors['min'].min}${unit}.`;
   if (errors['max']) return `At most ${errors['max'].max}${unit}.`;

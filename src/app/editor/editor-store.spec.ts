@@ -19,7 +19,7 @@ function setUp(editor = true, { archived = false, of = job } = {}) {
     providers: [
       EditorStore,
       { provide: EditorSource, useValue: { panel, record: panel, job: signal(of), jobDetail } },
-      { provide: AuthStore, useValue: { can: () => editor } },
+      { provide: AuthStore, useValue: { can: () => editor, units: () => 'mm' } },
     ],
   });
   return TestBed.inject(EditorStore);

@@ -100,8 +100,8 @@ export class EditorStore {
     // drag moves the selection, only what it moves is checked again, against its neighbours; the full
     // check comes back with the drag's end.
     const before = this.findingsAtMark();
-    if (before && panel !== this.mark()) return checkMove(job, this.catalog(), before, panel, this.selection());
-    return checkPanel(job, panel, this.catalog(), { fixes: false });
+    if (before && panel !== this.mark()) return checkMove(job, this.catalog(), before, panel, this.selection(), { unit: this.auth.units() });
+    return checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() });
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
@@ -174,7 +174,7 @@ export class EditorStore {
   fixesFor(finding: Finding): Finding | undefined {
     const job = this.job();
     const panel = this.panel();
-    return job && panel ? fixesFor(job, panel, this.catalog(), finding) : undefined;
+    return job && panel ? fixesFor(job, panel, this.catalog(), finding, { unit: this.auth.units() }) : undefined;
   }
 
   /** Applies a finding's fix as one undoable step and selects what it moved. */

@@ -14,6 +14,7 @@ import { filter, fromEvent } from 'rxjs';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
 import { CatalogStore } from '../catalog/catalog-store';
 import { CautionList } from '../ui/caution-list';
+import { Lengths } from '../ui/lengths';
 import { cautionsOfUnits } from '../ui/job-cautions';
 import { panelFrame } from './panel-frame';
 import { ConfirmDialog } from '../ui/confirm-dialog';
@@ -69,13 +70,19 @@ export class PanelEditor implements LeavesSafely {
   protected readonly store = inject(EditorStore);
   protected readonly saver = inject(PanelSaver);
   protected readonly stage = viewChild(PanelStage);
+  protected readonly lengths = inject(Lengths);
 
   protected readonly legend = PURPOSE_ORDER.map((purpose) => ({ purpose, ...PURPOSE_STYLES[purpose] }));
   protected readonly saveWords = SAVE_WORDS;
   protected readonly steps = [0.1, 0.5, 1, 5, 10];
   protected readonly readout = computed(() => {
     const at = this.stage()?.cursor();
-    return at ? `x ${at.x.toFixed(1)}  y ${at.y.toFixed(1)} mm` : '';
+    return at ? `x ${this.lengths.text(at.x)}  y ${this.lengths.text(at.y)}` : '';
+  });
+  /** The job's pitch, the system's own figure: `, 32 mm (1 17/64")` for an inch user. */
+  protected readonly pitchText = computed(() => {
+    const pitch = this.store.job()?.system?.pitch;
+    return pitch === undefined ? '' : `, ${this.lengths.system(pitch)}`;
   });
   protected readonly frame = computed(() => panelFrame(this.store.panel()?.role ?? 'loose'));
   /** The cautions of this panel's unit (a flap's, its sides'), for every role. */

@@ -28,7 +28,7 @@ function setUp(confirm: boolean) {
       EditorStore,
       PanelSaver,
       { provide: EditorSource, useValue: { panel, record, job: signal(job), jobDetail: signal(undefined), reload } },
-      { provide: AuthStore, useValue: { can: () => true } },
+      { provide: AuthStore, useValue: { can: () => true, units: () => 'mm' } },
       { provide: EditorApi, useValue: { saveDrilling } },
       { provide: MatDialog, useValue: { open } },
     ],

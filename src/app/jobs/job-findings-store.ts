@@ -2,6 +2,7 @@ import { httpResource } from '@angular/common/http';
 import { computed, inject, Injectable } from '@angular/core';
 import { jobFindings } from '../../../shared/api/pack-contract';
 import { jobFindingsUrl } from '../packs/pack-api';
+import { AuthStore } from '../auth/auth-store';
 import { JobStore } from './job-store';
 
 /** Errors and warnings of one panel. */
@@ -18,10 +19,13 @@ export interface PanelFindingCounts {
 @Injectable()
 export class JobFindingsStore {
   private readonly job = inject(JobStore);
+  private readonly auth = inject(AuthStore);
   private readonly resource = httpResource(
     () => {
       const job = this.job.job();
       this.job.panels();
+      // The server words the messages in the user's units: a new choice asks again.
+      this.auth.units();
       return job ? jobFindingsUrl(job.id) : undefined;
     },
     { parse: (raw) => jobFindings.parse(raw) },

@@ -15,6 +15,7 @@ import { CatalogStore } from '../catalog/catalog-store';
 import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
 import { ConfirmDialog } from '../ui/confirm-dialog';
+import { Lengths } from '../ui/lengths';
 import { CautionList } from '../ui/caution-list';
 import { cautionsOfUnits } from '../ui/job-cautions';
 import { PanelProgress } from '../ui/panel-progress';
@@ -46,6 +47,7 @@ export class JobPage {
   private readonly auth = inject(AuthStore);
   private readonly catalog = inject(CatalogStore).catalog;
   protected readonly store = inject(JobStore);
+  protected readonly lengths = inject(Lengths);
 
   /** Editing for roles that may, while the job is not archived. */
   protected readonly canEdit = computed(() => this.auth.can('editJobs') && this.store.job()?.archived === false);

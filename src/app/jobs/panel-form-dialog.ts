@@ -1,5 +1,7 @@
 import { Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { LengthInput } from '../ui/length-input';
+import { Lengths } from '../ui/lengths';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -50,6 +52,7 @@ const wording: Record<Field, FieldWording> = {
 @Component({
   selector: 'bw-panel-form-dialog',
   imports: [
+    LengthInput,
     ReactiveFormsModule,
     MatButtonModule,
     MatDialogModule,
@@ -65,6 +68,7 @@ const wording: Record<Field, FieldWording> = {
 export class PanelFormDialog {
   private readonly dialogRef = inject<MatDialogRef<PanelFormDialog, PanelFormResult>>(MatDialogRef);
   private readonly fb = inject(NonNullableFormBuilder);
+  protected readonly lengths = inject(Lengths);
   protected readonly request = inject<PanelFormRequest>(MAT_DIALOG_DATA);
 
   protected readonly roles = panelRole.options.map((role) => ({ role, label: roleLabels[role] }));

@@ -8,6 +8,7 @@ import { MatSelect, MatSelectModule } from '@angular/material/select';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
+import { Lengths } from '../ui/lengths';
 import { RouterLink } from '@angular/router';
 import { PanelRecord } from '../../../shared/api/contract';
 import { Carcass, Material, PanelStatus, panelStatus } from '../../../shared/model/job-document';
@@ -54,6 +55,7 @@ const readColumns = ['name', 'role', 'carcass', 'size', 'material', 'findings', 
   styleUrl: './panel-table.scss',
 })
 export class PanelTable {
+  protected readonly lengths = inject(Lengths);
   private readonly auth = inject(AuthStore);
   /** Errors and warnings per panel, from the checks of the job on the page. */
   private readonly jobFindings = inject(JobFindingsStore);
@@ -85,7 +87,7 @@ export class PanelTable {
         role: roleLabels[panel.role],
         carcass: panel.carcass === undefined ? '—' : (carcassNames.get(panel.carcass) ?? panel.carcass),
         material: materialNames.get(panel.material) ?? panel.material,
-        size: `${panel.width} × ${panel.height} × ${panel.thickness}`,
+        size: this.lengths.figures(panel.width, panel.height, panel.thickness),
         status: statusLabels[panel.status],
       }),
     );

@@ -6,6 +6,7 @@ import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/rou
 import { AuthStore } from '../auth/auth-store';
 import { Can } from '../auth/can';
 import { describeError } from '../core/api-problem';
+import { LENGTH_UNIT_NAMES, LENGTH_UNITS, type LengthUnit } from '../../../shared/units/length-unit';
 
 /**
  * The frame around every signed-in page: product name, navigation, who is signed in, sign-out.
@@ -25,6 +26,22 @@ export class Shell {
   protected readonly menuOpen = signal(false);
   protected readonly signingOut = signal(false);
   protected readonly signOutFailure = signal<string | null>(null);
+  protected readonly units = LENGTH_UNITS;
+  protected readonly unitNames = LENGTH_UNIT_NAMES;
+  protected readonly choosingUnits = signal(false);
+  protected readonly unitsFailure = signal<string | null>(null);
+
+  protected async chooseUnits(units: LengthUnit): Promise<void> {
+    this.choosingUnits.set(true);
+    this.unitsFailure.set(null);
+    try {
+      await this.auth.chooseUnits(units);
+    } catch (error) {
+      this.unitsFailure.set(`Units not changed: ${describeError(error)}`);
+    } finally {
+      this.choosingUnits.set(false);
+    }
+  }
 
   protected async signOut(): Promise<void> {
     this.signingOut.set(true);

@@ -3,6 +3,7 @@ import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { CarcassPlan } from '../../../shared/planner/plan-carcass';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
 import { CatalogStore } from '../catalog/catalog-store';
+import { Lengths } from '../ui/lengths';
 
 interface Rect {
   x: number;
@@ -27,6 +28,7 @@ const GAP = 160;
 export class CarcassDrawing {
   readonly plan = input.required<CarcassPlan>();
   private readonly catalog = inject(CatalogStore).catalog;
+  protected readonly lengths = inject(Lengths);
 
   protected readonly styles = PURPOSE_STYLES;
   protected readonly legend = PURPOSE_ORDER.filter((p) => p !== 'loose').map((p) => PURPOSE_STYLES[p]);

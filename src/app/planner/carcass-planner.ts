@@ -15,6 +15,8 @@ import { Can } from '../auth/can';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { CatalogStore } from '../catalog/catalog-store';
 import { ApiProblem, describeError } from '../core/api-problem';
+import { Lengths } from '../ui/lengths';
+import { LengthInput } from '../ui/length-input';
 import { CarcassDrawing } from './carcass-drawing';
 import { PlanResults } from './plan-results';
 import { FrontFields } from './front-fields';
@@ -29,6 +31,7 @@ import { ReplanDialog } from './replan-dialog';
 @Component({
   selector: 'bw-carcass-planner',
   imports: [
+    LengthInput,
     Can,
     CarcassDrawing,
     FrontFields,
@@ -51,6 +54,7 @@ export class CarcassPlanner {
   private readonly snackBar = inject(MatSnackBar);
   private readonly dialog = inject(MatDialog);
   protected readonly store = inject(PlannerStore);
+  protected readonly lengths = inject(Lengths);
 
   protected readonly form = plannerForm();
   protected readonly value = toSignal(this.form.valueChanges.pipe(map(() => this.form.getRawValue())), { initialValue: this.form.getRawValue() });

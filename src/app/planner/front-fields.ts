@@ -1,9 +1,11 @@
-import { Component, input } from '@angular/core';
+import { Component, inject, input } from '@angular/core';
 import { FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import type { SectionFrontInput } from '../../../shared/planner/carcass-plan-input';
+import { LengthInput } from '../ui/length-input';
+import { Lengths } from '../ui/lengths';
 
 /**
  * The fields of one front (how many doors and their overlay, the flap's mechanisms, how many drawers, the
@@ -11,7 +13,7 @@ import type { SectionFrontInput } from '../../../shared/planner/carcass-plan-inp
  */
 @Component({
   selector: 'bw-front-fields',
-  imports: [MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
+  imports: [LengthInput, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule],
   templateUrl: './front-fields.html',
   styleUrl: './carcass-planner.scss',
 })
@@ -21,4 +23,5 @@ export class FrontFields {
   readonly type = input.required<SectionFrontInput['type']>();
   /** One door: it asks which side it hangs on. */
   readonly single = input(false);
+  protected readonly lengths = inject(Lengths);
 }

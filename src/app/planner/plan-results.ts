@@ -1,7 +1,8 @@
 import { DecimalPipe } from '@angular/common';
-import { Component, input } from '@angular/core';
+import { Component, inject, input } from '@angular/core';
 import { MatExpansionModule } from '@angular/material/expansion';
 import type { CarcassPlan } from '../../../shared/planner/plan-carcass';
+import { Lengths } from '../ui/lengths';
 import { MomentPlot } from './moment-plot';
 
 /** What the planner worked out, each number with the reason the screen shows beside it. */
@@ -12,5 +13,6 @@ import { MomentPlot } from './moment-plot';
   styleUrl: './plan-results.scss',
 })
 export class PlanResults {
+  protected readonly lengths = inject(Lengths);
   readonly plan = input.required<CarcassPlan>();
 }

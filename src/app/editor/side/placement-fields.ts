@@ -1,5 +1,8 @@
 import type { Fitting } from '../../../../shared/catalog/fitting';
 import type { Panel } from '../../../../shared/model/job-document';
+import { formatLength } from '../../../../shared/units/format-length';
+import type { LengthUnit } from '../../../../shared/units/length-unit';
+import { parseLength } from '../../../../shared/units/parse-length';
 import { panelFrame } from '../panel-frame';
 
 /** A number field of the properties form: what it is called and the values the panel or fitting allows. */
@@ -29,13 +32,16 @@ export function placementFields(panel: Panel, fitting: Fitting | undefined): Num
   return fields;
 }
 
-/** Reads a typed number against its field; the message says what to type instead. */
-export function readNumber(text: string, field: NumberField): { value: number } | { message: string } {
-  const value = Number(text.trim().replace(',', '.'));
-  if (text.trim() === '' || !Number.isFinite(value)) return { message: `Enter the ${field.label} in mm.` };
-  if (value < field.min || value > field.max) {
+/**
+ * Reads a typed length against its field, in mm: either unit (`12 3/8"`, `314.3 mm`), a bare number in the
+ * user's own; the message says what to type instead, the limits in the user's unit.
+ */
+export function readLength(text: string, field: NumberField, unit: LengthUnit): { value: number } | { message: string } {
+  const read = parseLength(text, unit);
+  if (!read.ok) return { message: read.error };
+  if (read.mm < field.min || read.mm > field.max) {
     const where = field.param ? 'for this fitting' : 'to stay on the panel';
-    return { message: `The ${field.label} must be from ${field.min} to ${field.max} mm ${where}.` };
+    return { message: `The ${field.label} must be from ${formatLength(field.min, unit)} to ${formatLength(field.max, unit)} ${where}.` };
   }
-  return { value };
+  return { value: read.mm };
 }

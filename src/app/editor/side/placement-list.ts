@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { Lengths } from '../../ui/lengths';
 import { PURPOSE_STYLES } from '../../../../shared/export/palette';
 import type { Placement } from '../../../../shared/model/job-document';
 import { selectionOf, unionSelection } from '../document/selection';
@@ -13,11 +14,12 @@ import { EditorStore } from '../editor-store';
 })
 export class PlacementList {
   protected readonly store = inject(EditorStore);
+  private readonly lengths = inject(Lengths);
 
   protected describe(p: Placement): string {
     const fitting = this.store.catalog().get(p.fitting);
     const name = fitting ? `${PURPOSE_STYLES[fitting.purpose].letter} · ${fitting.name}` : `missing fitting “${p.fitting}”`;
-    return `${name} · x ${p.x}, y ${p.y}, face ${p.face}, ${p.rotation}°${p.mirrored ? ', mirrored' : ''}`;
+    return `${name} · x ${this.lengths.field(p.x)}, y ${this.lengths.field(p.y)}, face ${p.face}, ${p.rotation}°${p.mirrored ? ', mirrored' : ''}`;
   }
 
   protected choose(p: Placement, adding: boolean): void {

@@ -6,7 +6,8 @@ import { MatSelectModule } from '@angular/material/select';
 import type { Face, Rotation } from '../../../../shared/model/job-document';
 import { hingeCupWhy } from '../document/hinge-distance';
 import { EditorStore } from '../editor-store';
-import { placementFields, readNumber, type NumberField } from './placement-fields';
+import { Lengths } from '../../ui/lengths';
+import { placementFields, readLength, type NumberField } from './placement-fields';
 
 /** The selected placement's position, face, turn and fitting parameters; a change is one undoable step. */
 @Component({
@@ -18,6 +19,7 @@ import { placementFields, readNumber, type NumberField } from './placement-field
 })
 export class PropertiesForm {
   protected readonly store = inject(EditorStore);
+  protected readonly lengths = inject(Lengths);
 
   protected readonly rotations: Rotation[] = [0, 90, 180, 270];
   protected readonly placement = computed(() => {
@@ -47,16 +49,29 @@ export class PropertiesForm {
   /** Messages of refused values, by field; cleared when another placement is selected. */
   protected readonly problems = linkedSignal<Record<string, string>>(() => (this.placement()?.id, {}));
 
-  protected valueOf(field: NumberField): number | '' {
+  /** A field's length in mm, or undefined when the placement has none. */
+  private valueOf(field: NumberField): number | undefined {
     const p = this.placement();
-    if (!p) return '';
-    return field.param ? (p.params?.[field.key] ?? '') : p[field.key as 'x' | 'y'];
+    if (!p) return undefined;
+    return field.param ? p.params?.[field.key] : p[field.key as 'x' | 'y'];
+  }
+
+  /** A field's length as its input shows it for editing. */
+  protected fieldText(field: NumberField): string {
+    const value = this.valueOf(field);
+    return value === undefined ? '' : this.lengths.field(value);
+  }
+
+  /** A field's length as read-only text with its unit. */
+  protected readText(field: NumberField): string {
+    const value = this.valueOf(field);
+    return value === undefined ? '—' : this.lengths.text(value);
   }
 
   protected changeNumber(field: NumberField, text: string): void {
     const p = this.placement();
     if (!p) return;
-    const read = readNumber(text, field);
+    const read = readLength(text, field, this.lengths.unit());
     if ('message' in read) {
       this.problems.update((m) => ({ ...m, [field.key]: read.message }));
       return;

@@ -1,0 +1,2 @@
+ALTER TABLE "users" ADD COLUMN "units" text DEFAULT 'mm' NOT NULL;--> statement-breakpoint
+ALTER TABLE "users" ADD CONSTRAINT "users_units_check" CHECK ("users"."units" in ('mm', 'in', 'in-32', 'in-64'));
