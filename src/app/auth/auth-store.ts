@@ -3,6 +3,7 @@ import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { can, Permission, User, sessionAnswer, userAnswer } from '../../../shared/api/contract';
 import { ApiProblem } from '../core/api-problem';
+import { forgetCachedAnswers } from '../core/offline-cache';
 
 /** Who is signed in, and what their role lets them do (contract.ts `permissions`). */
 @Injectable({ providedIn: 'root' })
@@ -41,6 +42,8 @@ export class AuthStore {
     await this.restoreSession();
     const raw = await firstValueFrom(this.http.post('/api/auth/sign-in', { email, password }));
     const { user: who } = userAnswer.parse(raw);
+    // What the offline worker kept was read by whoever used this device before.
+    await forgetCachedAnswers();
     this.remember(who);
     return who;
   }
@@ -55,21 +58,24 @@ export class AuthStore {
     } catch (error) {
       if (!(error instanceof ApiProblem && error.status === 401)) throw error;
     }
-    this.forgetSession();
+    await this.forgetSession();
   }
 
   /** A session the server started itself, by accepting an invitation: the app is signed in as its user. */
   adoptSession(who: User): void {
+    void forgetCachedAnswers();
     this.remember(who);
   }
 
   /**
    * Called when the session has ended. The next restoreSession() asks the server again, which also
-   * hands out the token the new session's first change needs.
+   * hands out the token the new session's first change needs. The answers the offline worker kept for
+   * this member are emptied (resolved when done), so the next one on this device never reads them.
    */
-  forgetSession(): void {
+  forgetSession(): Promise<void> {
     this.current.set(null);
     this.restoring = undefined;
+    return forgetCachedAnswers();
   }
 
   private remember(who: User | null): User | null {
