@@ -60,6 +60,12 @@ export class BenchPage {
     return parts.filter(Boolean).join(', ') || 'this job';
   });
 
+  /** How many marks wait on this device, in words. */
+  protected readonly waitingText = computed(() => {
+    const count = this.store.queue.waiting().length;
+    return count === 0 ? 'No marks waiting to send.' : `${count} mark${count === 1 ? '' : 's'} waiting to send.`;
+  });
+
   constructor() {
     effect(() => {
       const job = this.store.job();

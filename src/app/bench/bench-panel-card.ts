@@ -29,6 +29,8 @@ export class BenchPanelCard {
   readonly findings = input<PanelFindings>();
   readonly canMark = input(false);
   readonly saving = input(false);
+  /** A mark made on it waits on this device to be sent: the status shown is the one it will have. */
+  readonly waiting = input(false);
   /** Opened from its label: the drilling map is shown in the card. */
   readonly focused = input(false);
   readonly mark = output<PanelStatus>();
