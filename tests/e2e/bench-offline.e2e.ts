@@ -40,13 +40,13 @@ async function jobId(context: BrowserContext): Promise<number> {
 }
 
 /** Signs in, lets the worker settle, and opens the job on the bench online, so that its reads are kept. */
-async function openBenchOnline(page: Page, context: BrowserContext): Promise<number> {
+async function openBenchOnline(page: Page, context: BrowserContext, carcass: string): Promise<number> {
   await signIn(page, baseUrl, 'bench@greyfield.example');
   await workerReady(page);
   const id = await jobId(context);
   // Loaded again under the worker, so that who is signed in and the job's reads go through it and are kept.
-  await page.goto(`${baseUrl}/bench?job=${id}`);
-  await expect.poll(() => page.locator('bw-bench-panel-card').count()).toBeGreaterThan(3);
+  await page.goto(`${baseUrl}/bench?job=${id}&carcass=${carcass}`);
+  await expect.poll(() => page.locator('bw-bench-panel-card').count(), { timeout: 20_000 }).toBeGreaterThan(3);
   await page.getByRole('note', { name: 'Caution' }).first().waitFor();
   return id;
 }
@@ -74,16 +74,20 @@ describe('the bench offline', () => {
     const browser = await openBrowser({ width: 1024, height: 768 });
     close = browser.close;
     const { page, context } = browser;
-    const id = await openBenchOnline(page, context);
-    const names = (await serverPanels(context.request, id)).filter((p) => p.status === 'planned' && p.carcass === 'tall-1').slice(0, 3).map((p) => p.name);
+    const id = await openBenchOnline(page, context, 'tall-1');
+    const planned = (await serverPanels(context.request, id)).filter((p) => p.status === 'planned' && p.carcass === 'tall-1');
+    const names = planned.slice(0, 3).map((p) => p.name);
     expect(names).toHaveLength(3);
+    // The listed panels' templates and maps, read once so that the worker keeps them.
+    await page.getByRole('button', { name: 'Keep files for offline' }).click();
+    await page.getByRole('button', { name: `Files of ${planned.length} panels kept` }).waitFor({ timeout: 120_000 });
 
     await context.setOffline(true);
     // Truly offline: a request the worker keeps nothing for does not reach the server.
     expect(await page.evaluate(async () => (await fetch('/api/health')).status)).toBe(504);
     // The page itself comes back from the worker: the shell, who is signed in, the job and its findings.
     await page.reload();
-    await expect.poll(() => page.locator('bw-bench-panel-card').count()).toBeGreaterThan(3);
+    await expect.poll(() => page.locator('bw-bench-panel-card').count(), { timeout: 20_000 }).toBeGreaterThan(3);
     await expect.poll(() => banner(page)).toContain('The bench is offline.');
     expect(await page.getByRole('heading', { name: 'Bench' }).isVisible()).toBe(true);
 
@@ -97,16 +101,27 @@ describe('the bench offline', () => {
     // At phone size, offline: the banner above the panels, nothing wider than the screen.
     await page.setViewportSize({ width: 390, height: 844 });
     await page.reload();
-    await expect.poll(() => banner(page)).toContain('3 marks waiting to send.');
+    await expect.poll(() => banner(page), { timeout: 20_000 }).toContain('3 marks waiting to send.');
+    // The panels marked stay listed, waiting, though the reload forgot what this page had marked.
+    for (const name of names) expect(await page.getByRole('heading', { name, exact: true }).count()).toBe(1);
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     await screenshot(page, 'bench-offline-phone');
 
+    // One panel as its label opens it, offline at phone size: its drilling map comes from the worker.
+    const first = planned[0];
+    await page.goto(`${baseUrl}/bench?job=${id}&panel=${first.dbId}`);
+    const map = page.getByRole('img', { name: `Drilling map of ${first.name}, face A` });
+    await expect.poll(() => map.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth > 0), { timeout: 20_000 }).toBe(true);
+    expect(await page.evaluate(async (dbId) => (await fetch(`/api/panels/${dbId}/template.pdf?paper=a4`)).headers.get('content-type'), first.dbId)).toMatch(/^application\/pdf/);
+    await screenshot(page, 'bench-offline-phone-map');
+
     await context.setOffline(false);
+    await page.goto(`${baseUrl}/bench?job=${id}&carcass=tall-1&done=show`);
     await expect
       .poll(async () => (await serverPanels(context.request, id)).filter((p) => names.includes(p.name)).map((p) => `${p.status} by ${p.statusBy}`), { timeout: 30_000 })
       .toEqual(['drilled by Ada Keel', 'drilled by Ada Keel', 'drilled by Ada Keel']);
-    await expect.poll(() => banner(page)).toBe('');
-    await expect.poll(() => page.getByText(/^Drilled by Ada Keel/).count()).toBe(3);
+    await expect.poll(() => banner(page), { timeout: 10_000 }).toBe('');
+    await expect.poll(() => page.getByText(/^Drilled by Ada Keel/).count(), { timeout: 10_000 }).toBe(3);
 
     // Signed out, the device keeps no answer of the member's: offline, the job is not there to read.
     await page.setViewportSize({ width: 1024, height: 768 });
@@ -127,7 +142,7 @@ describe('the bench offline', () => {
     const browser = await openBrowser({ width: 1024, height: 768 });
     close = browser.close;
     const { page, context } = browser;
-    const id = await openBenchOnline(page, context);
+    const id = await openBenchOnline(page, context, 'tall-2');
     const [changed, other] = (await serverPanels(context.request, id)).filter((p) => p.status === 'planned' && p.carcass === 'tall-2');
 
     await context.setOffline(true);
@@ -168,7 +183,7 @@ describe('the bench offline', () => {
     await page.getByRole('button', { name: `OK, “${changed.name}” was not marked` }).click();
     await expect.poll(() => alert.count()).toBe(0);
     await page.reload();
-    await expect.poll(() => page.locator('bw-bench-panel-card').count()).toBeGreaterThan(0);
+    await expect.poll(() => page.locator('bw-bench-panel-card').count(), { timeout: 20_000 }).toBeGreaterThan(0);
     expect(await alert.count()).toBe(0);
   });
 });

@@ -6,7 +6,9 @@ import { RouterTestingHarness } from '@angular/router/testing';
 import { PanelRecord, Role } from '../../../shared/api/contract';
 import { accessibleName, aJobDetail, aJobSummary, aPanel, buttonNamed, settle, signInAs } from '../../testing/fixtures';
 import { errorInterceptor } from '../core/error-interceptor';
+import { vi } from 'vitest';
 import { BenchPage } from './bench-page';
+import { BenchStore } from './bench-store';
 import { MARK_STORE, MarkStore, QueuedMark } from './mark-store';
 
 /** The queue's store as IndexedDB keeps it, in memory: marks by `seq`, listed in order of making. */
@@ -34,7 +36,8 @@ describe('BenchPage', () => {
 
   const side = aPanel();
   const door = aPanel({ dbId: 102, id: 'b1-door', name: 'Door', role: 'door', material: 'mdf19', status: 'drilled', statusBy: 'Ada Keel', statusAt: '2026-12-01T10:02:00.000Z' });
-  const loose = aPanel({ dbId: 103, id: 'shelf', name: 'Loose shelf', role: 'shelf', carcass: undefined });
+  // A bore on face B gives the loose shelf a second drilling map.
+  const loose = aPanel({ dbId: 103, id: 'shelf', name: 'Loose shelf', role: 'shelf', carcass: undefined, bores: [{ id: 'p1', face: 'B', x: 50, y: 50, diameter: 5, depth: 10 }] });
   const findings = {
     errors: 1,
     warnings: 0,
@@ -249,6 +252,33 @@ describe('BenchPage', () => {
     await stable();
     expect(banner()).toBeUndefined();
     expect(state('Left side')).toMatch(/^Drilled by Demo bench/);
+  });
+
+  it('reads the listed panels’ templates and maps once each, one at a time, for the offline worker to keep', async () => {
+    await openAs('bench', '/bench?job=11');
+    const bench = harness.routeDebugElement!.injector.get(BenchStore);
+    let open = 0;
+    const asked: string[] = [];
+    const fetch = vi.spyOn(globalThis, 'fetch').mockImplementation(async (url) => {
+      expect(++open).toBe(1);
+      asked.push(String(url));
+      await settle();
+      open--;
+      return new Response('file');
+    });
+    try {
+      await bench.keepFilesOffline();
+    } finally {
+      fetch.mockRestore();
+    }
+    expect(asked).toEqual([
+      '/api/panels/101/template.pdf?paper=a4',
+      '/api/panels/101/drilling-map.svg?face=A',
+      '/api/panels/103/template.pdf?paper=a4',
+      '/api/panels/103/drilling-map.svg?face=A',
+      '/api/panels/103/drilling-map.svg?face=B',
+    ]);
+    expect(bench.filesKept()).toEqual({ done: 2, total: 2 });
   });
 
   it('opens one panel with its drilling map, as its label’s QR code asks', async () => {

@@ -49,6 +49,8 @@ export class BenchPage {
     return ['drilling', ...(job ? cautionsOfUnits(job, this.catalog()) : [])];
   });
   protected readonly statusLabels = statusLabels;
+  /** The offline worker runs this page (production builds): it can keep the panels' files. */
+  protected readonly offlineWorker = typeof navigator !== 'undefined' && !!navigator.serviceWorker?.controller;
   protected readonly canMark = computed(() => this.auth.can('markPanels'));
   protected readonly carcassNames = computed(() => new Map(this.store.carcasses().map((c) => [c.id, c.name])));
   protected readonly materialNames = computed(() => new Map(this.store.materials().map((m) => [m.id, m.name])));

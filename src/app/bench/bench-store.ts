@@ -9,7 +9,7 @@ import { PanelStatus } from '../../../shared/model/job-document';
 import { carcassOrder } from '../../../shared/model/panel-order';
 import { describeError } from '../core/api-problem';
 import { jobsUrl, jobUrl } from '../jobs/jobs-api';
-import { jobFindingsUrl } from '../packs/pack-api';
+import { hasFaceB, jobFindingsUrl, panelFileUrls } from '../packs/pack-api';
 import { jobDocumentOf } from '../ui/job-cautions';
 import { MarkQueue } from './mark-queue';
 
@@ -117,12 +117,13 @@ export class BenchStore {
     const material = this.material();
     return this.panels().filter((p) => (carcass === undefined || p.carcass === carcass) && (material === undefined || p.material === material));
   });
-  /** The panels listed: those still to drill (or all), those marked here, or the one a label opened. */
+  /** The panels listed: those still to drill (or all), those marked here or waiting to send, or the one a label opened. */
   readonly listed = computed(() => {
     const focus = this.focus();
     if (focus !== undefined) return this.panels().filter((p) => p.dbId === focus);
     const touched = this.touched();
-    return this.selection().filter((p) => this.showDone() || p.status === 'planned' || touched.has(p.dbId));
+    const waiting = new Set(this.queue.waiting().map((m) => m.panelDbId));
+    return this.selection().filter((p) => this.showDone() || p.status === 'planned' || touched.has(p.dbId) || waiting.has(p.dbId));
   });
   readonly findings = computed(() => {
     const byPanel = new Map<string, PanelFindings>();
@@ -152,6 +153,8 @@ export class BenchStore {
     this.queue.outcomes.pipe(takeUntilDestroyed()).subscribe((outcome) => {
       if ('saved' in outcome) {
         const saved = outcome.saved;
+        // Listed while its mark waited (after a reload too), it stays listed now that the mark is sent.
+        this.touched.update((ids) => new Set(ids).add(saved.dbId));
         this.detail.update((detail) => detail && { ...detail, panels: detail.panels.map((p) => (p.dbId === saved.dbId ? saved : p)) });
         return;
       }
@@ -161,6 +164,27 @@ export class BenchStore {
       this.marks.update((marks) => marks.filter((m) => !refused.has(m.seq)));
       if (outcome.mark.jobId === this.jobId()) this.detail.reload();
     });
+  }
+
+  private readonly keptFiles = signal<{ done: number; total: number } | null>(null);
+  /** How far keeping the listed panels' files for offline use has come. */
+  readonly filesKept = this.keptFiles.asReadonly();
+
+  /**
+   * Reads each listed panel's template (A4) and drilling maps once, one file at a time to spare the
+   * server, so that the offline worker keeps them (ngsw-config.json `panel-files`) for when the
+   * connection drops. A file that fails is left; the worker keeps what came.
+   */
+  async keepFilesOffline(): Promise<void> {
+    const panels = this.listed();
+    this.keptFiles.set({ done: 0, total: panels.length });
+    for (const [i, panel] of panels.entries()) {
+      const files = panelFileUrls(panel.dbId);
+      for (const url of [files.pdf('a4'), files.svg('A'), ...(hasFaceB(panel) ? [files.svg('B')] : [])]) {
+        await fetch(url).then((res) => res.arrayBuffer()).catch(() => undefined);
+      }
+      this.keptFiles.set({ done: i + 1, total: panels.length });
+    }
   }
 
   /** A mark of this panel is on its way to the server now. */
@@ -178,6 +202,7 @@ export class BenchStore {
     // Another job starts unfiltered: its carcasses and materials are not this one's.
     const changes: Params = view.job !== undefined ? { carcass: null, material: null, panel: null, ...view } : view;
     this.touched.set(new Set());
+    this.keptFiles.set(null);
     this.problemText.set(null);
     void this.router.navigate([], { relativeTo: this.route, queryParams: changes, queryParamsHandling: 'merge', replaceUrl: true });
   }
