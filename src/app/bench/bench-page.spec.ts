@@ -45,8 +45,8 @@ describe('BenchPage', () => {
     findings: [{ code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: side.id, bores: [], placements: [], fixes: [] }],
   };
 
-  async function openAs(role: Role, url: string): Promise<void> {
-    store = memoryMarkStore();
+  async function openAs(role: Role, url: string, kept = memoryMarkStore()): Promise<void> {
+    store = kept;
     TestBed.configureTestingModule({
       providers: [
         provideRouter([{ path: 'bench', component: BenchPage }]),
@@ -252,6 +252,18 @@ describe('BenchPage', () => {
     await stable();
     expect(banner()).toBeUndefined();
     expect(state('Left side')).toMatch(/^Drilled by Demo bench/);
+  });
+
+  it('neither shows nor sends the marks another member left waiting on this device', async () => {
+    const theirs = { userId: 99, jobId: 11, panelDbId: 101, name: 'Left side', from: 'planned', to: 'drilled', version: 4, madeAt: '2026-12-02T08:00:00.000Z' } as const;
+    const before = memoryMarkStore();
+    await before.add(theirs);
+    await openAs('bench', '/bench?job=11', before);
+
+    http.expectNone({ method: 'PATCH' });
+    expect(banner()).toBeUndefined();
+    expect(state('Left side')).toBe('Not drilled yet');
+    expect(before.marks.size).toBe(1);
   });
 
   it('reads the listed panels’ templates and maps once each, one at a time, for the offline worker to keep', async () => {

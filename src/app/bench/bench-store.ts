@@ -149,6 +149,10 @@ export class BenchStore {
     return labelsPath(jobId, { carcass: this.carcass() });
   });
 
+  private readonly keptFiles = signal<{ done: number; total: number } | null>(null);
+  /** How far keeping the listed panels' files for offline use has come. */
+  readonly filesKept = this.keptFiles.asReadonly();
+
   constructor() {
     this.queue.outcomes.pipe(takeUntilDestroyed()).subscribe((outcome) => {
       if ('saved' in outcome) {
@@ -165,10 +169,6 @@ export class BenchStore {
       if (outcome.mark.jobId === this.jobId()) this.detail.reload();
     });
   }
-
-  private readonly keptFiles = signal<{ done: number; total: number } | null>(null);
-  /** How far keeping the listed panels' files for offline use has come. */
-  readonly filesKept = this.keptFiles.asReadonly();
 
   /**
    * Reads each listed panel's template (A4) and drilling maps once, one file at a time to spare the
