@@ -115,13 +115,15 @@ describe('the bench offline', () => {
     expect(await page.evaluate(async (dbId) => (await fetch(`/api/panels/${dbId}/template.pdf?paper=a4`)).headers.get('content-type'), first.dbId)).toMatch(/^application\/pdf/);
     await screenshot(page, 'bench-offline-phone-map');
 
+    // Back online, the page open sends the marks by itself.
     await context.setOffline(false);
-    await page.goto(`${baseUrl}/bench?job=${id}&carcass=tall-1&done=show`);
     await expect
       .poll(async () => (await serverPanels(context.request, id)).filter((p) => names.includes(p.name)).map((p) => `${p.status} by ${p.statusBy}`), { timeout: 30_000 })
       .toEqual(['drilled by Ada Keel', 'drilled by Ada Keel', 'drilled by Ada Keel']);
     await expect.poll(() => banner(page), { timeout: 10_000 }).toBe('');
-    await expect.poll(() => page.locator('bw-bench-panel-card .state').filter({ hasText: /^Drilled by Ada Keel, / }).count(), { timeout: 10_000 }).toBe(3);
+    await page.goto(`${baseUrl}/bench?job=${id}&carcass=tall-1&done=show`);
+    await expect.poll(() => page.locator('bw-bench-panel-card .state').filter({ hasText: /Drilled by Ada Keel, / }).count(), { timeout: 20_000 }).toBe(3);
+    expect(await page.getByRole('alert').count()).toBe(0);
 
     // Signed out, the device keeps no answer of the member's: offline, the job is not there to read.
     await page.setViewportSize({ width: 1024, height: 768 });

@@ -99,8 +99,17 @@ export class MarkQueue {
 
   /** Sends what waits, in order; a call while a pass runs joins it (the pass takes marks added meanwhile). */
   send(): Promise<void> {
-    this.sending ??= this.sendWaiting().finally(() => (this.sending = undefined));
+    this.sending ??= this.exclusively(() => this.sendWaiting()).finally(() => (this.sending = undefined));
     return this.sending;
+  }
+
+  /**
+   * One tab of the app sends at a time (the Web Locks API, where the browser has it): a pass reads the
+   * queue afresh before each mark, so a mark another tab has sent is not sent twice.
+   */
+  private exclusively(pass: () => Promise<void>): Promise<void> {
+    if (typeof navigator.locks === 'undefined') return pass();
+    return navigator.locks.request('borewright-bench-marks', pass).then(() => undefined);
   }
 
   private async sendWaiting(): Promise<void> {
