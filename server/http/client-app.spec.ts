@@ -14,6 +14,8 @@ describe('the web app and the API side by side', () => {
     mkdirSync(path.join(dir, 'assets'));
     writeFileSync(path.join(dir, 'index.html'), '<!doctype html><title>Borewright</title><bw-root ngCspNonce="CSP_NONCE"></bw-root>');
     writeFileSync(path.join(dir, 'assets', 'app.js'), 'console.log(1)');
+    const hashTable = { '/index.html': 'a'.repeat(40), '/assets/app.js': 'b'.repeat(40) };
+    writeFileSync(path.join(dir, 'ngsw.json'), JSON.stringify({ configVersion: 1, index: '/index.html', hashTable }));
     [built, unbuilt] = await Promise.all([createTestApp({ clientDir: dir }), createTestApp({ clientDir: path.join(dir, 'missing') })]);
   });
   afterAll(async () => {
@@ -35,6 +37,16 @@ describe('the web app and the API side by side', () => {
     expect(res.headers['content-type']).toMatch(/^application\/json/);
     expect(res.body.error.code).toBe('not-found');
     expect(res.headers['cache-control']).toBe('no-store');
+  });
+
+  // index.html carries a fresh nonce in every answer, so its built hash can never match what the worker
+  // fetches; the worker refuses a whole version on one mismatch (ngsw-worker.js cacheBustedFetchFromNetwork).
+  it('gives the offline worker its manifest without a hash for index.html, and every other hash as built', async () => {
+    const res = await request(built.app).get('/ngsw.json?ngsw-cache-bust=0.5').expect(200);
+    expect(res.body).toMatchObject({ configVersion: 1, index: '/index.html' });
+    expect(res.body.hashTable).toEqual({ '/assets/app.js': 'b'.repeat(40) });
+    expect(res.headers['cache-control']).toBe('no-cache');
+    await request(unbuilt.app).get('/ngsw.json').expect(503);
   });
 
   it('says plainly when the app is not built', async () => {

@@ -25,6 +25,13 @@ describe('security headers', () => {
     expect(res.headers['content-security-policy']).not.toMatch(/unsafe-inline|unsafe-eval/);
   });
 
+  // CSP Level 3: worker-src governs service worker scripts, manifest-src the web app manifest (published).
+  it('let the offline worker and the app manifest come from our origin only', async () => {
+    const policy = directives((await request(appFor('production')).get('/')).headers['content-security-policy']);
+    expect(policy.get('worker-src')).toEqual(["'self'"]);
+    expect(policy.get('manifest-src')).toEqual(["'self'"]);
+  });
+
   // RFC 6797 §6.1: the header is honoured only over HTTPS, which production runs behind (published).
   it('ask for HTTPS only in production, which runs behind TLS', async () => {
     expect((await request(appFor('production')).get('/')).headers['strict-transport-security']).toBe('max-age=31536000');

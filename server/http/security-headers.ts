@@ -12,6 +12,8 @@ export const CSP_NONCE_PLACEHOLDER = 'CSP_NONCE';
  * The content security policy of the app: scripts, styles, fonts and requests only from our own origin,
  * no inline script at all and inline styles only with this answer's nonce (so no 'unsafe-inline'),
  * and no framing by anyone (frame-ancestors, which X-Frame-Options says again for older browsers).
+ * The offline service worker and the web app manifest come from our origin too, said outright rather
+ * than left to default-src.
  */
 export function contentSecurityPolicy(nonce: string): string {
   return [
@@ -21,6 +23,8 @@ export function contentSecurityPolicy(nonce: string): string {
     "img-src 'self' data: blob:",
     "font-src 'self'",
     "connect-src 'self'",
+    "worker-src 'self'",
+    "manifest-src 'self'",
     "object-src 'none'",
     "base-uri 'self'",
     "form-action 'self'",

@@ -5,6 +5,7 @@ import { can, type Permission } from '../../../shared/api/roles';
 import type { User } from '../../../shared/api/session-contract';
 import type { LengthUnit } from '../../../shared/units/length-unit';
 import { ApiProblem } from '../core/api-problem';
+import { forgetCachedAnswers } from '../core/offline-cache';
 
 /** The answers' schemas, loaded beside the first request rather than in the first page (session-contract.ts). */
 const answers = () => import('../../../shared/api/session-contract');
@@ -48,6 +49,8 @@ export class AuthStore {
     await this.restoreSession();
     const [raw, { userAnswer }] = await Promise.all([firstValueFrom(this.http.post('/api/auth/sign-in', { email, password })), answers()]);
     const { user: who } = userAnswer.parse(raw);
+    // What the offline worker kept was read by whoever used this device before.
+    await forgetCachedAnswers();
     this.remember(who);
     return who;
   }
@@ -62,7 +65,7 @@ export class AuthStore {
     } catch (error) {
       if (!(error instanceof ApiProblem && error.status === 401)) throw error;
     }
-    this.forgetSession();
+    await this.forgetSession();
   }
 
   /** Stores the user's own choice of units; every length on screen follows it at once. Rejects with an ApiProblem. */
@@ -73,16 +76,19 @@ export class AuthStore {
 
   /** A session the server started itself, by accepting an invitation: the app is signed in as its user. */
   adoptSession(who: User): void {
+    void forgetCachedAnswers();
     this.remember(who);
   }
 
   /**
    * Called when the session has ended. The next restoreSession() asks the server again, which also
-   * hands out the token the new session's first change needs.
+   * hands out the token the new session's first change needs. The answers the offline worker kept for
+   * this member are emptied (resolved when done), so the next one on this device never reads them.
    */
-  forgetSession(): void {
+  forgetSession(): Promise<void> {
     this.current.set(null);
     this.restoring = undefined;
+    return forgetCachedAnswers();
   }
 
   private remember(who: User | null): User | null {

@@ -49,6 +49,8 @@ export class BenchPage {
     return ['drilling', ...(job ? cautionsOfUnits(job, this.catalog()) : [])];
   });
   protected readonly statusLabels = statusLabels;
+  /** The offline worker runs this page (production builds): it can keep the panels' files. */
+  protected readonly offlineWorker = typeof navigator !== 'undefined' && !!navigator.serviceWorker?.controller;
   protected readonly canMark = computed(() => this.auth.can('markPanels'));
   protected readonly carcassNames = computed(() => new Map(this.store.carcasses().map((c) => [c.id, c.name])));
   protected readonly materialNames = computed(() => new Map(this.store.materials().map((m) => [m.id, m.name])));
@@ -58,6 +60,12 @@ export class BenchPage {
     const material = this.store.material();
     const parts = [carcass !== undefined && (this.carcassNames().get(carcass) ?? carcass), material !== undefined && (this.materialNames().get(material) ?? material)];
     return parts.filter(Boolean).join(', ') || 'this job';
+  });
+
+  /** How many marks wait on this device, in words. */
+  protected readonly waitingText = computed(() => {
+    const count = this.store.queue.waiting().length;
+    return count === 0 ? 'No marks waiting to send.' : `${count} mark${count === 1 ? '' : 's'} waiting to send.`;
   });
 
   constructor() {

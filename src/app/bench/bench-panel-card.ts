@@ -28,7 +28,10 @@ export class BenchPanelCard {
   readonly materialName = input.required<string>();
   readonly findings = input<PanelFindings>();
   readonly canMark = input(false);
+  /** A mark of it is on its way to the server. The buttons stay live: a next mark queues behind it. */
   readonly saving = input(false);
+  /** A mark made on it waits on this device to be sent: the status shown is the one it will have. */
+  readonly waiting = input(false);
   /** Opened from its label: the drilling map is shown in the card. */
   readonly focused = input(false);
   readonly mark = output<PanelStatus>();

@@ -1,19 +1,22 @@
 import { httpResource } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ActivatedRoute, Params, Router } from '@angular/router';
 import { jobDetail, jobList, PanelRecord } from '../../../shared/api/contract';
 import { labelsPath } from '../../../shared/api/label-contract';
 import { jobFindings } from '../../../shared/api/pack-contract';
 import { PanelStatus } from '../../../shared/model/job-document';
 import { carcassOrder } from '../../../shared/model/panel-order';
-import { ApiProblem, describeError } from '../core/api-problem';
-import { JobsApi, jobsUrl, jobUrl } from '../jobs/jobs-api';
-import { jobFindingsUrl } from '../packs/pack-api';
+import { describeError } from '../core/api-problem';
+import { jobsUrl, jobUrl } from '../jobs/jobs-api';
+import { hasFaceB, jobFindingsUrl, panelFileUrls } from '../packs/pack-api';
 import { jobDocumentOf } from '../ui/job-cautions';
+import { MarkQueue } from './mark-queue';
 
 /** A mark made on this page, kept so that it can be undone. */
 export interface BenchMark {
+  /** The mark in the queue (mark-store.ts). */
+  seq: number;
   jobId: number;
   panelDbId: number;
   name: string;
@@ -43,11 +46,12 @@ const positive = (value: string | null) => (value !== null && /^[1-9][0-9]{0,9}$
 
 /**
  * The bench page: which job and which of its panels are shown (all in the address), the panels with their
- * findings, and marking them drilled or checked with an undo of the marks made here.
+ * findings, and marking them drilled or checked with an undo of the marks made here. Marks go through the
+ * queue (mark-queue.ts), online or not; the panels are shown as the marks waiting to send will make them.
  */
 @Injectable()
 export class BenchStore {
-  private readonly api = inject(JobsApi);
+  readonly queue = inject(MarkQueue);
   private readonly router = inject(Router);
   private readonly route = inject(ActivatedRoute);
   private readonly query = toSignal(this.route.queryParamMap, { requireSync: true });
@@ -78,7 +82,6 @@ export class BenchStore {
   private readonly marks = signal<BenchMark[]>([]);
   /** Panels marked on this page stay listed until the view changes, so a row never jumps away under a finger. */
   private readonly touched = signal<ReadonlySet<number>>(new Set());
-  private readonly savingIds = signal<ReadonlySet<number>>(new Set());
 
   readonly jobs = computed(() => (this.jobList.hasValue() ? this.jobList.value() : []));
   readonly jobsLoading = this.jobList.isLoading;
@@ -99,20 +102,28 @@ export class BenchStore {
     const used = new Set(this.panels().map((p) => p.material));
     return (this.loaded()?.materials ?? []).filter((m) => used.has(m.id));
   });
-  /** Every panel of the job, carcass by carcass. */
-  readonly panels = computed(() => carcassOrder(this.carcasses(), this.loaded()?.panels ?? []));
+  /** Every panel of the job, carcass by carcass, at the status its last mark waiting to send gives it. */
+  readonly panels = computed(() => {
+    const waiting = this.queue.waiting();
+    const panels = (this.loaded()?.panels ?? []).map((p) => {
+      const last = waiting.filter((m) => m.panelDbId === p.dbId).at(-1);
+      return last ? { ...p, status: last.to } : p;
+    });
+    return carcassOrder(this.carcasses(), panels);
+  });
   /** The panels of the chosen carcass and material, whatever their status: what the progress counts. */
   readonly selection = computed(() => {
     const carcass = this.carcass();
     const material = this.material();
     return this.panels().filter((p) => (carcass === undefined || p.carcass === carcass) && (material === undefined || p.material === material));
   });
-  /** The panels listed: those still to drill (or all), those marked here, or the one a label opened. */
+  /** The panels listed: those still to drill (or all), those marked here or waiting to send, or the one a label opened. */
   readonly listed = computed(() => {
     const focus = this.focus();
     if (focus !== undefined) return this.panels().filter((p) => p.dbId === focus);
     const touched = this.touched();
-    return this.selection().filter((p) => this.showDone() || p.status === 'planned' || touched.has(p.dbId));
+    const waiting = new Set(this.queue.waiting().map((m) => m.panelDbId));
+    return this.selection().filter((p) => this.showDone() || p.status === 'planned' || touched.has(p.dbId) || waiting.has(p.dbId));
   });
   readonly findings = computed(() => {
     const byPanel = new Map<string, PanelFindings>();
@@ -138,8 +149,52 @@ export class BenchStore {
     return labelsPath(jobId, { carcass: this.carcass() });
   });
 
+  private readonly keptFiles = signal<{ done: number; total: number } | null>(null);
+  /** How far keeping the listed panels' files for offline use has come. */
+  readonly filesKept = this.keptFiles.asReadonly();
+
+  constructor() {
+    this.queue.outcomes.pipe(takeUntilDestroyed()).subscribe((outcome) => {
+      if ('saved' in outcome) {
+        const saved = outcome.saved;
+        // Listed while its mark waited (after a reload too), it stays listed now that the mark is sent.
+        this.touched.update((ids) => new Set(ids).add(saved.dbId));
+        this.detail.update((detail) => detail && { ...detail, panels: detail.panels.map((p) => (p.dbId === saved.dbId ? saved : p)) });
+        return;
+      }
+      // Refused marks (and those held back with them) are not there to undo, and the panel is not as this
+      // page thought: show it as it is now.
+      const refused = new Set(this.queue.refused().map((m) => m.seq));
+      this.marks.update((marks) => marks.filter((m) => !refused.has(m.seq)));
+      if (outcome.mark.jobId === this.jobId()) this.detail.reload();
+    });
+  }
+
+  /**
+   * Reads each listed panel's template (A4) and drilling maps once, one file at a time to spare the
+   * server, so that the offline worker keeps them (ngsw-config.json `panel-files`) for when the
+   * connection drops. A file that fails is left; the worker keeps what came.
+   */
+  async keepFilesOffline(): Promise<void> {
+    const panels = this.listed();
+    this.keptFiles.set({ done: 0, total: panels.length });
+    for (const [i, panel] of panels.entries()) {
+      const files = panelFileUrls(panel.dbId);
+      for (const url of [files.pdf('a4'), files.svg('A'), ...(hasFaceB(panel) ? [files.svg('B')] : [])]) {
+        await fetch(url).then((res) => res.arrayBuffer()).catch(() => undefined);
+      }
+      this.keptFiles.set({ done: i + 1, total: panels.length });
+    }
+  }
+
+  /** A mark of this panel is on its way to the server now. */
   isSaving(panel: PanelRecord): boolean {
-    return this.savingIds().has(panel.dbId);
+    return this.queue.sendingMark()?.panelDbId === panel.dbId;
+  }
+
+  /** A mark of this panel waits to be sent. */
+  isWaiting(panel: PanelRecord): boolean {
+    return this.queue.waiting().some((m) => m.panelDbId === panel.dbId);
   }
 
   /** Changes what the page shows; the address keeps it, so a reload shows the same. */
@@ -147,6 +202,7 @@ export class BenchStore {
     // Another job starts unfiltered: its carcasses and materials are not this one's.
     const changes: Params = view.job !== undefined ? { carcass: null, material: null, panel: null, ...view } : view;
     this.touched.set(new Set());
+    this.keptFiles.set(null);
     this.problemText.set(null);
     void this.router.navigate([], { relativeTo: this.route, queryParams: changes, queryParamsHandling: 'merge', replaceUrl: true });
   }
@@ -154,23 +210,28 @@ export class BenchStore {
   /** Marks a panel drilled or checked; the mark can be undone from this page. */
   async mark(panel: PanelRecord, status: PanelStatus): Promise<void> {
     const jobId = this.jobId();
-    if (jobId === undefined || !(await this.save(panel, status))) return;
-    this.marks.update((marks) => [...marks, { jobId, panelDbId: panel.dbId, name: panel.name, from: panel.status, to: status }]);
+    if (jobId === undefined) return;
+    this.problemText.set(null);
+    const mark = { jobId, panelDbId: panel.dbId, name: panel.name, from: panel.status, to: status };
+    const seq = await this.queue.add({ ...mark, version: panel.version });
+    if (seq === undefined) return;
+    this.touched.update((ids) => new Set(ids).add(panel.dbId));
+    this.marks.update((marks) => [...marks, { seq, ...mark }]);
   }
 
-  /** Takes back the last mark made here: the panel goes back to the status it had (the activity log keeps both). */
+  /** Takes back the last mark made here by a mark back to the status the panel had (the activity log keeps both). */
   async undo(): Promise<void> {
     const mark = this.lastMark();
     if (!mark) return;
-    const forget = () => this.marks.update((marks) => marks.filter((m) => m !== mark));
+    this.marks.update((marks) => marks.filter((m) => m !== mark));
     const panel = this.panels().find((p) => p.dbId === mark.panelDbId);
     if (panel?.status !== mark.to) {
       // Someone marked it again since (or deleted it): undoing now would take back their mark too.
       this.problemText.set(`Nothing undone: “${mark.name}” is no longer as this page marked it.`);
-      forget();
       return;
     }
-    if (await this.save(panel, mark.from)) forget();
+    this.problemText.set(null);
+    await this.queue.add({ jobId: mark.jobId, panelDbId: panel.dbId, name: panel.name, from: mark.to, to: mark.from, version: panel.version });
   }
 
   dismissProblem(): void {
@@ -181,31 +242,5 @@ export class BenchStore {
     this.problemText.set(null);
     this.detail.reload();
     this.findingList.reload();
-  }
-
-  private async save(panel: PanelRecord, status: PanelStatus): Promise<boolean> {
-    this.savingIds.update((ids) => new Set(ids).add(panel.dbId));
-    this.problemText.set(null);
-    try {
-      const saved = await this.api.setPanelStatus(panel, status);
-      this.detail.update((detail) => detail && { ...detail, panels: detail.panels.map((p) => (p.dbId === saved.dbId ? saved : p)) });
-      this.touched.update((ids) => new Set(ids).add(saved.dbId));
-      return true;
-    } catch (error) {
-      // A 409 means the panel is not as this page shows it (someone else marked it): show what it is now.
-      const conflict = error instanceof ApiProblem && error.status === 409;
-      this.problemText.set(conflict ? `“${panel.name}” was not marked: ${describeError(error)} The list now shows it as it is.` : describeError(error));
-      if (conflict) {
-        this.touched.update((ids) => new Set(ids).add(panel.dbId));
-        this.detail.reload();
-      }
-      return false;
-    } finally {
-      this.savingIds.update((ids) => {
-        const next = new Set(ids);
-        next.delete(panel.dbId);
-        return next;
-      });
-    }
   }
 }

@@ -22,7 +22,7 @@ export type PanelFields = z.input<typeof panelFieldsBody>;
 export const jobsUrl = '/api/jobs';
 export const jobUrl = (jobId: number) => `/api/jobs/${jobId}`;
 export const jobDocumentUrl = (jobId: number) => `/api/jobs/${jobId}/document`;
-const panelUrl = (panel: PanelRecord) => `/api/panels/${panel.dbId}`;
+const panelUrl = (panel: Pick<PanelRecord, 'dbId'>) => `/api/panels/${panel.dbId}`;
 
 /**
  * The changes the jobs screens send. Reads go through `httpResource` in the stores; every answer is
@@ -63,7 +63,8 @@ export class JobsApi {
     await firstValueFrom(this.http.delete(panelUrl(panel), { params: { version: panel.version } }));
   }
 
-  async setPanelStatus(panel: PanelRecord, status: PanelStatus): Promise<PanelRecord> {
+  /** Sends the version the mark was made on; a panel changed since answers 409. */
+  async setPanelStatus(panel: Pick<PanelRecord, 'dbId' | 'version'>, status: PanelStatus): Promise<PanelRecord> {
     const body = { status, version: panel.version };
     return panelRecord.parse(await firstValueFrom(this.http.patch(`${panelUrl(panel)}/status`, body)));
   }
