@@ -3,7 +3,8 @@ import * as z from 'zod';
 /**
  * Where a drilling program's zero point (X0 Y0) lies: a corner of the face that lies up, as the operator
  * sees the panel from the front of the machine. The panel always lies as the program's header says (face A
- * up with the reference edge on the left, as on the face A drilling map); the corner only moves the zero.
+ * up as on its drilling map: the reference edge on the left, or on the right where the document's frame is
+ * the face's mirror, map-view.ts `referenceAt`); the corner only moves the zero.
  */
 export const originCorner = z.enum(['front-left', 'front-right', 'back-left', 'back-right']);
 export type OriginCorner = z.output<typeof originCorner>;
@@ -59,8 +60,8 @@ export type MachineSettings = z.output<typeof machineSettings>;
 const blind = (diameter: number, tool: number, speed: number, feed: number): MachineTool => ({ diameter, through: false, tool, feed, speed });
 
 /**
- * What a shop starts from: zero at the front-left corner of face A (where the reference edge meets the
- * lower edge), Z = 0 on the face up, the R plane 5 mm and the clearance 25 mm above it, no spoilboard
+ * What a shop starts from: zero at the front-left corner of the side up (on face A of a left side, where
+ * the reference edge meets the lower edge), Z = 0 on the face up, the R plane 5 mm and the clearance 25 mm above it, no spoilboard
  * allowance, and flat-bottomed bits of the diameters the 32 mm system uses most (5 mm system holes, 8 and
  * 10 mm dowels and sleeves, 15 mm cam housings, 35 mm hinge cups) with a 5 and an 8 mm through bit.
  * Speeds and feeds are modest starting points for boring bits in board (common practice, from memory):
