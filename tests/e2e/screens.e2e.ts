@@ -39,6 +39,7 @@ const screens: Screen[] = [
   { name: 'bench', path: () => '/bench', ready: 'h1', roles: ['admin', 'designer', 'bench'] },
   { name: 'team', path: () => '/team', ready: 'table', roles: ['admin'] },
   { name: 'outbox', path: () => '/outbox', ready: 'h1', roles: ['admin'] },
+  { name: 'machine', path: () => '/settings/machine', ready: 'form', roles: ['admin'] },
   { name: 'how-it-works', path: () => '/how-it-works', ready: 'h1', roles: everyone },
 ];
 

@@ -1,7 +1,6 @@
 import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
 import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
 import type { Fix } from '../../../shared/checks/finding';
-import { checkMove } from '../../../shared/checks/move-check';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
 import { addPlacement } from './document/commands/add-placement';
@@ -84,24 +83,11 @@ export class EditorStore {
     },
     { equal: (a, b) => JSON.stringify(a) === JSON.stringify(b) },
   );
-  /** Where the drag in progress began (the same object all through it), undefined between drags. */
-  private readonly mark = computed(() => this.history()?.mark);
-  /** The findings of the panel as the drag in progress found it: checked once, when it begins. */
-  private readonly findingsAtMark = computed(() => {
-    const job = this.source.job();
-    const mark = this.mark();
-    return job && mark && this.checksOn() ? checkPanel(job, mark, this.catalog(), { fixes: false }) : undefined;
-  });
   readonly findings = computed(() => {
     const job = this.job();
     const panel = this.panel();
-    if (!job || !panel || !this.checksOn()) return [];
-    // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor). While a
-    // drag moves the selection, only what it moves is checked again, against its neighbours; the full
-    // check comes back with the drag's end.
-    const before = this.findingsAtMark();
-    if (before && panel !== this.mark()) return checkMove(job, this.catalog(), before, panel, this.selection(), { unit: this.auth.units() });
-    return checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() });
+    // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor).
+    return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() }) : [];
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
