@@ -1,6 +1,7 @@
 import { HttpEventType, provideHttpClient, withInterceptors } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
+import { vi } from 'vitest';
 import { provideRouter } from '@angular/router';
 import { aJobSummary } from '../../testing/fixtures';
 import { errorInterceptor } from '../core/error-interceptor';
@@ -43,7 +44,7 @@ describe('JobImportStore', () => {
     expect(store.state()).toEqual({ step: 'done', job: aJobSummary({ id: 15 }) });
   });
 
-  it('lists every problem of a refused document, each led by its path', () => {
+  it('lists every problem of a refused document, each led by its path', async () => {
     store.importFile(file);
     http.expectOne('/api/jobs/import').flush(
       {
@@ -56,8 +57,9 @@ describe('JobImportStore', () => {
       { status: 400, statusText: 'Bad Request' },
     );
 
+    // The error answer's schema loads on the first failure (api-problem.ts), so the words come a moment later.
+    await vi.waitFor(() => expect(store.state().step).toBe('failed'));
     const state = store.state();
-    expect(state.step).toBe('failed');
     expect(state.step === 'failed' && state.message).toContain('not a valid job document');
     expect(state.step === 'failed' && state.details).toEqual([
       'panels[0].width: must be greater than 0',

@@ -117,13 +117,14 @@ describe('JobPage', () => {
     expect(overlay().textContent).toContain('This job has 1 error');
     buttonNamed('Cancel')!.click();
     await settle();
-    http.expectNone('/api/jobs/11/pack.zip?paper=a4');
+    http.expectNone((r) => r.url === '/api/jobs/11/pack.zip');
 
     buttonNamed('Download pack')!.click();
     await settle();
     buttonNamed('Download anyway')!.click();
     await settle();
-    http.expectOne('/api/jobs/11/pack.zip?paper=a4');
+    // The download carries a progress ticket beside the paper (pack-download-store.ts).
+    http.expectOne((r) => r.url === '/api/jobs/11/pack.zip' && r.params.get('paper') === 'a4' && r.params.has('progress'));
     expect(page.textContent).toContain('Making the pack…');
   });
 
