@@ -210,7 +210,7 @@ describe('the panel editor from the keyboard alone', () => {
     await importPin(reopened);
     await page.getByRole('link', { name: 'Back to the job' }).click();
     await page.waitForURL(/\/jobs\/\d+$/);
-    await page.getByRole('link', { name: 'Sink base, left side' }).click();
+    await page.locator('bw-panel-table').getByRole('link', { name: 'Sink base, left side' }).click();
     await page.waitForURL(/\/panels\/\d+$/);
     await expect.poll(() => catalogList.innerText()).toContain(reopened);
   });
