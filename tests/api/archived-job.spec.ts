@@ -6,6 +6,7 @@ import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { minimalPng } from '../../server/testing/sample-files';
 import { createTestApp, testConfig, type TestApp } from '../../server/testing/test-app';
+import { PLANNED_CARCASS } from './planned-carcass';
 
 /** A job with one side carrying a mounting plate (so a swap has something to swap) and one attachment. */
 interface ArchivedFixture {
@@ -25,19 +26,6 @@ interface WriteRow {
 }
 
 const CUT_LIST = Buffer.from('panel name,width,height,thickness,material,quantity\r\nShelf,540,300,19,mdf-19,1\r\n');
-
-/** Planned as in the role matrix: a doweled wall box with two doors. */
-const PLANNED_CARCASS = {
-  width: 600,
-  height: 723,
-  depth: 320,
-  material: 'mdf-19',
-  back: { type: 'none' },
-  construction: 'dowels',
-  fronts: { type: 'doors', count: 2, overlay: 'full', reveal: 3 },
-  shelves: { type: 'none' },
-  mounting: { type: 'wall' },
-};
 
 /**
  * Every write to a job or to anything below it, refused while the job is archived and answered again once it

@@ -13,19 +13,7 @@ import { SETTINGS_ROUTES } from './role-matrix.settings';
 import { SWAP_ROUTES } from './role-matrix.swap';
 import { TEAM_ROUTES } from './role-matrix.team';
 import { UPLOADS_ROUTES } from './role-matrix.uploads';
-
-/** A carcass description the planner accepts: a doweled wall box with two doors. */
-const PLANNED_CARCASS = {
-  width: 600,
-  height: 723,
-  depth: 320,
-  material: 'mdf-19',
-  back: { type: 'none' },
-  construction: 'dowels',
-  fronts: { type: 'doors', count: 2, overlay: 'full', reveal: 3 },
-  shelves: { type: 'none' },
-  mounting: { type: 'wall' },
-};
+import { PLANNED_CARCASS } from './planned-carcass';
 
 /** A message in the outbox with the pack attached, sent before the rows run. */
 let caughtMessageId = 0;
