@@ -1,5 +1,19 @@
 import { afterEach, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { openBrowser, screenshot, signIn } from './browser';
+
+/** Creates a job named after `name` and opens its planner from the empty job's "Plan a carcass"; gives the job's name. */
+async function newJobPlanner(page: Page, name: string): Promise<string> {
+  const jobName = `${name} ${Date.now()}`;
+  await page.getByRole('button', { name: /new job/i }).click();
+  await page.getByLabel('Name', { exact: true }).fill(jobName);
+  await page.getByRole('button', { name: /^create$/i }).click();
+  await page.getByRole('link', { name: jobName }).click();
+  await page.getByRole('link', { name: /plan a carcass/i }).click();
+  await page.waitForURL(/\/jobs\/\d+\/plan$/);
+  return jobName;
+}
+
 
 const baseUrl = inject('baseUrl');
 
@@ -16,13 +30,7 @@ describe('the carcass planner in the browser', () => {
     const { page } = browser;
     await signIn(page, baseUrl, 'designer@greyfield.example');
 
-    const jobName = `Hallway flap unit ${Date.now()}`;
-    await page.getByRole('button', { name: /new job/i }).click();
-    await page.getByLabel('Name', { exact: true }).fill(jobName);
-    await page.getByRole('button', { name: /^create$/i }).click();
-    await page.getByRole('link', { name: jobName }).click();
-    await page.getByRole('link', { name: /plan a carcass/i }).click();
-    await page.waitForURL(/\/jobs\/\d+\/plan$/);
+    const jobName = await newJobPlanner(page, 'Hallway flap unit');
 
     await page.getByLabel('Id', { exact: true }).fill('hall');
     await page.getByLabel('Name', { exact: true }).fill('Hall flap');
@@ -57,13 +65,7 @@ describe('the carcass planner in the browser', () => {
     const { page } = browser;
     await signIn(page, baseUrl, 'designer@greyfield.example');
 
-    const jobName = `Study hutch ${Date.now()}`;
-    await page.getByRole('button', { name: /new job/i }).click();
-    await page.getByLabel('Name', { exact: true }).fill(jobName);
-    await page.getByRole('button', { name: /^create$/i }).click();
-    await page.getByRole('link', { name: jobName }).click();
-    await page.getByRole('link', { name: /plan a carcass/i }).click();
-    await page.waitForURL(/\/jobs\/\d+\/plan$/);
+    const jobName = await newJobPlanner(page, 'Study hutch');
 
     await page.getByLabel('Id', { exact: true }).fill('hutch');
     await page.getByLabel('Name', { exact: true }).fill('Desk hutch');
