@@ -44,7 +44,11 @@ export function mayUse(account: { active: boolean; demo: boolean }, demoAccounts
  * deactivated member's session is refused here even if its row has not been deleted yet.
  */
 export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<User | undefined> {
-  const account = await findAccount(db, id);
+  return usableUser(await findAccount(db, id), demoAccounts);
+}
+
+/** The user of an account just read, or undefined when there is none or it is no longer allowed. */
+export function usableUser(account: Account | undefined, demoAccounts: boolean): User | undefined {
   return account && mayUse(account, demoAccounts) ? toUser(account) : undefined;
 }
 

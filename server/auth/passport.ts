@@ -3,13 +3,15 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { User } from '../../shared/api/contract';
 import type { Database } from '../db/client';
-import { checkCredentials, refusal, sessionUser, type SignInRefusal } from './auth.service';
+import { checkCredentials, refusal, sessionUser, usableUser, type SignInRefusal } from './auth.service';
+import { accountReadWithSession } from './session-store';
 
 export type Authenticator = passport.Authenticator;
 
 /**
  * An authenticator of our own per app (not passport's global one), so two apps in one process
- * (tests) never share strategies. Sessions carry the user id; the user is read fresh each request.
+ * (tests) never share strategies. Sessions carry the user id; the user is read fresh each request, with the
+ * session itself.
  */
 export function createAuthenticator(db: Database, demoAccounts: boolean): Authenticator {
   const authenticator = new passport.Authenticator();
@@ -22,7 +24,10 @@ export function createAuthenticator(db: Database, demoAccounts: boolean): Authen
     }),
   );
   authenticator.serializeUser<number>((user, done) => done(null, user.id));
-  authenticator.deserializeUser<number>((id, done) => {
+  authenticator.deserializeUser<number>((req: Request, id: number, done: (err: unknown, user?: User | false) => void) => {
+    // Read with the session in this request (session-store.ts), so as fresh as a query of its own.
+    const account = accountReadWithSession(req);
+    if (account?.id === id) return done(null, usableUser(account, demoAccounts) ?? false);
     sessionUser(db, demoAccounts, id).then((user) => done(null, user ?? false), done);
   });
   return authenticator;

@@ -3,7 +3,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DatabaseHandle } from '../db/client';
 import { sessions } from '../db/schema';
 import { openTestDatabase } from '../testing/test-database';
-import { DrizzleSessionStore } from './session-store';
+import { accountReadWithSession, DrizzleSessionStore } from './session-store';
+import { insertUsers } from './users.repository';
+import type { Request } from 'express';
 
 const call = <T>(fn: (cb: (err: unknown, value?: T) => void) => void) =>
   new Promise<T | undefined>((resolve, reject) => fn((err, value) => (err ? reject(err) : resolve(value))));
@@ -42,6 +44,24 @@ describe('DrizzleSessionStore', () => {
     await call((cb) => store.touch('member', session(extended), cb));
     expect(await expiry('member')).toBe(written.getTime());
     for (const sid of ['visitor', 'member']) await call((cb) => store.destroy(sid, cb));
+  });
+
+  it('reads the account with a signed-in session for that request alone, and keeps it out of the session', async () => {
+    const [member] = await insertUsers(database.db, [{ email: 'reader@example.test', name: 'Reader', role: 'viewer', passwordHash: 'x' }]);
+    await call((cb) => store.set('signed-in', session(later(), member.id), cb));
+    await call((cb) => store.set('visitor', signedOut(later()), cb));
+    const made = async (sid: string) => {
+      const req = {} as Request;
+      const sess = await call<SessionData | null>((cb) => store.get(sid, cb));
+      return { req, session: store.createSession(req, sess!) };
+    };
+    const signedIn = await made('signed-in');
+    expect(accountReadWithSession(signedIn.req)).toMatchObject({ id: member.id, role: 'viewer', active: true });
+    expect(JSON.parse(JSON.stringify(signedIn.session))).not.toHaveProperty('account');
+    expect(Object.getOwnPropertySymbols(signedIn.session)).toEqual([]);
+    expect(accountReadWithSession((await made('visitor')).req)).toBeUndefined();
+    expect(accountReadWithSession({} as Request)).toBeUndefined();
+    for (const sid of ['signed-in', 'visitor']) await call((cb) => store.destroy(sid, cb));
   });
 
   it('never returns an expired session, and prunes expired rows', async () => {

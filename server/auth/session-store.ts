@@ -1,7 +1,26 @@
-import { eq, gt, lt, and } from 'drizzle-orm';
-import { Store, type SessionData } from 'express-session';
+import { eq, lt } from 'drizzle-orm';
+import type { Request } from 'express';
+import { Store, type Session, type SessionData } from 'express-session';
 import type { Database } from '../db/client';
 import { sessions } from '../db/schema';
+import { findSession } from './sessions.repository';
+
+/** The account a session is signed in as, read with it. */
+export type SessionAccount = NonNullable<Awaited<ReturnType<typeof findSession>>>['account'];
+
+/** Where `get` hands the account to `createSession`: a symbol, so the session's JSON never carries it. */
+const ACCOUNT = Symbol('account');
+
+/**
+ * The account read with each request's session, by request: passport's deserializer takes it from here
+ * instead of asking the database a second time (passport.ts).
+ */
+const accounts = new WeakMap<object, SessionAccount>();
+
+/** The account read with this request's session in this request, if it was signed in as one that exists. */
+export function accountReadWithSession(req: Request): SessionAccount | undefined {
+  return accounts.get(req);
+}
 
 type Callback = (err?: unknown) => void;
 
@@ -29,12 +48,22 @@ export class DrizzleSessionStore extends Store {
     return expires ? new Date(expires) : new Date(Date.now() + 86_400_000);
   }
 
+  /** The session, with the account it is signed in as read in the same query (kept for `createSession`). */
   override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
-    this.db
-      .select({ sess: sessions.sess })
-      .from(sessions)
-      .where(and(eq(sessions.sid, sid), gt(sessions.expire, new Date())))
-      .then(([row]) => callback(null, (row?.sess as unknown as SessionData | undefined) ?? null), callback);
+    findSession(this.db, sid, new Date()).then((row) => {
+      if (!row) return callback(null, null);
+      const sess = row.sess as unknown as SessionData & { [ACCOUNT]?: SessionAccount };
+      if (row.account) sess[ACCOUNT] = row.account;
+      callback(null, sess);
+    }, callback);
+  }
+
+  /** express-session makes the request's session here: the account read with it is kept by request. */
+  override createSession(req: Request, sess: SessionData & { [ACCOUNT]?: SessionAccount }): Session & SessionData {
+    const account = sess[ACCOUNT];
+    delete sess[ACCOUNT];
+    if (account) accounts.set(req, account);
+    return super.createSession(req, sess);
   }
 
   override set(sid: string, sess: SessionData, callback?: Callback): void {

@@ -1,6 +1,28 @@
-import { and, ne, sql } from 'drizzle-orm';
+import { and, eq, gt, ne, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
-import { sessions } from '../db/schema';
+import { preparedPerDatabase } from '../db/prepared';
+import { sessions, users } from '../db/schema';
+import { accountColumns } from './users.repository';
+
+/** The query of every signed-in request. */
+const sessionRead = preparedPerDatabase((db) =>
+  db
+    .select({ sess: sessions.sess, account: accountColumns })
+    .from(sessions)
+    .leftJoin(users, eq(users.id, sql`(${sessions.sess} #>> '{passport,user}')::integer`))
+    .where(and(eq(sessions.sid, sql.placeholder('sid')), gt(sessions.expire, sql.placeholder('now'))))
+    .prepare('session_read'),
+);
+
+/**
+ * A session that has not expired, with the account it is signed in as (null when it is not signed in, or
+ * the account is gone): one round trip for what every signed-in request needs. passport keeps the member's
+ * id at sess.passport.user (auth/request-types.ts).
+ */
+export async function findSession(db: Database, sid: string, now: Date) {
+  const [row] = await sessionRead(db).execute({ sid, now: now.toISOString() });
+  return row;
+}
 
 /**
  * Ends every stored session signed in as this member, but the one named `keep` (the request's own,

@@ -3,7 +3,8 @@ import type { Database } from '../db/client';
 import { users } from '../db/schema';
 import type { LengthUnit } from '../../shared/units/length-unit';
 
-const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active };
+/** An account as the server uses it: everything but the password hash. */
+export const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active };
 
 /** The account with this address (any case), with its password hash. */
 export async function findAccountByEmail(db: Database, email: string) {

@@ -1,5 +1,6 @@
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { preparedPerDatabase } from '../db/prepared';
 import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
 import { bores, carcasses, jobs, panels, placements, users } from '../db/schema';
 import { insertDrilling, insertPanel } from '../panels/panels.repository';
@@ -45,16 +46,22 @@ export async function lockJob(tx: Database, id: number) {
   return row;
 }
 
+/** The query of every job read. */
+const jobStampRead = preparedPerDatabase((db) =>
+  db
+    .select({ version: jobs.version, writtenBy: sql<string>`${jobs}.xmin::text`, updatedAt: sql<string>`(extract(epoch from ${jobs.updatedAt}) * 1000000)::bigint::text` })
+    .from(jobs)
+    .where(eq(jobs.id, sql.placeholder('id')))
+    .prepare('job_stamp'),
+);
+
 /**
  * What identifies the job's stored state: its version and the transaction that last wrote its row. Every
  * change to the job or anything in it writes the row (`touchJob` in the same transaction), so any change
  * gives a new stamp, and a database restored or rebuilt gives a new `updatedAt` too.
  */
 export async function findJobStamp(db: Database, id: number): Promise<{ version: number; writtenBy: string; updatedAt: string } | undefined> {
-  const [row] = await db
-    .select({ version: jobs.version, writtenBy: sql<string>`${jobs}.xmin::text`, updatedAt: sql<string>`(extract(epoch from ${jobs.updatedAt}) * 1000000)::bigint::text` })
-    .from(jobs)
-    .where(eq(jobs.id, id));
+  const [row] = await jobStampRead(db).execute({ id });
   return row;
 }
 
