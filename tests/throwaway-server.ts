@@ -7,6 +7,8 @@ import { freePort } from './free-port';
 /** A real server on a free port of 127.0.0.1 with a data folder of its own, removed when it stops. */
 export interface ThrowawayServer {
   baseUrl: string;
+  /** The server's process id (benches read its CPU time). */
+  pid: number;
   stop(): Promise<void>;
 }
 
@@ -53,5 +55,5 @@ export async function startThrowawayServer(options: { nodeArgs?: string[]; logLe
     await stop();
     throw err;
   }
-  return { baseUrl, stop };
+  return { baseUrl, pid: server.pid!, stop };
 }

@@ -7,7 +7,10 @@
  *
  *   npm run bench:api                      BENCH_SECONDS=10 by default, per run
  *   npm run bench:api -- --cpu-prof        the server writes a CPU profile into bench-profiles/ when it stops
+ *
+ * Each run also gives the server's CPU time per answer (all its threads, the pack's workers included).
  */
+import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { generateJob } from '../../shared/bench/generate-job';
 import { ApiSession } from '../api-session';
@@ -24,10 +27,20 @@ interface Run {
   p50: number;
   p99: number;
   statuses: string;
+  /** The server process's CPU time (all its threads) per answer: on a busy machine it says more than the clock. */
+  cpuMs: number;
 }
 
-async function load(label: string, url: string, headers: Record<string, string>, expect: number, seconds = SECONDS): Promise<Run> {
+/** CPU time the process has used so far, in ms (Linux: utime + stime of /proc/<pid>/stat, in clock ticks of 10 ms). */
+function cpuOf(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
+  return (Number(fields[11]) + Number(fields[12])) * 10;
+}
+
+async function load(pid: number, label: string, url: string, headers: Record<string, string>, expect: number, seconds = SECONDS): Promise<Run> {
+  const cpuBefore = cpuOf(pid);
   const result = await autocannon({ url, connections: CONNECTIONS, duration: seconds, headers });
+  const cpu = cpuOf(pid) - cpuBefore;
   const counts = { '2xx': result['2xx'], '3xx': result['3xx'], '4xx': result['4xx'], '5xx': result['5xx'] };
   const wanted = `${String(expect)[0]}xx` as keyof typeof counts;
   // Timeouts (10 s) are counted and shown, not fatal: on a crowded machine they are the figure.
@@ -40,13 +53,14 @@ async function load(label: string, url: string, headers: Record<string, string>,
     rps: result.requests.average,
     p50: result.latency.p50,
     p99: result.latency.p99,
+    cpuMs: cpu / Math.max(1, result.requests.total),
     statuses: [...Object.entries(counts).filter(([, n]) => n > 0).map(([k, n]) => `${k} ${n}`), ...(result.timeouts ? [`timeouts ${result.timeouts}`] : [])].join(', '),
   };
 }
 
 function line(run: Run, health: Run): string {
   const ratio = run === health ? '' : `  ${(run.rps / health.rps).toFixed(2)}× health`;
-  return `  ${run.label.padEnd(46)} ${run.rps.toFixed(0).padStart(6)}/s  p50 ${String(run.p50).padStart(4)} ms  p99 ${String(run.p99).padStart(4)} ms${ratio}   (${run.statuses})`;
+  return `  ${run.label.padEnd(46)} ${run.rps.toFixed(0).padStart(6)}/s  p50 ${String(run.p50).padStart(4)} ms  p99 ${String(run.p99).padStart(4)} ms  server CPU ${run.cpuMs.toFixed(2)} ms an answer${ratio}   (${run.statuses})`;
 }
 
 async function main(): Promise<void> {
@@ -73,12 +87,12 @@ async function main(): Promise<void> {
     console.log(`  job: "${demo.name}" (${demo.panelCount} panels, ${(Buffer.byteLength(body) / 1024).toFixed(1)} KB)`);
 
     // A short warm-up of each route, so that neither pays for compiling.
-    await load('warm-up', jobUrl, cookie, 200, 2);
-    await load('warm-up', `${baseUrl}/api/health`, {}, 200, 2);
+    await load(server.pid, 'warm-up', jobUrl, cookie, 200, 2);
+    await load(server.pid, 'warm-up', `${baseUrl}/api/health`, {}, 200, 2);
 
-    const health = await load('/api/health', `${baseUrl}/api/health`, {}, 200);
-    const whole = await load('job, whole answer (no cached copy)', jobUrl, cookie, 200);
-    const revalidated = etag ? await load('job, revalidated (If-None-Match, 304)', jobUrl, { ...cookie, 'if-none-match': etag }, 304) : undefined;
+    const health = await load(server.pid, '/api/health', `${baseUrl}/api/health`, {}, 200);
+    const whole = await load(server.pid, 'job, whole answer (no cached copy)', jobUrl, cookie, 200);
+    const revalidated = etag ? await load(server.pid, 'job, revalidated (If-None-Match, 304)', jobUrl, { ...cookie, 'if-none-match': etag }, 304) : undefined;
 
     // The same whole reads while the 300-panel job's pack is made, one after another, by one downloader.
     let packing = true;
@@ -95,7 +109,7 @@ async function main(): Promise<void> {
     })();
     await new Promise((r) => setTimeout(r, 500));
     downloader.catch(() => undefined);
-    const underPack = await load('job, whole answer, a 300-panel pack running', jobUrl, cookie, 200).finally(() => (packing = false));
+    const underPack = await load(server.pid, 'job, whole answer, a 300-panel pack running', jobUrl, cookie, 200).finally(() => (packing = false));
     await downloader;
 
     console.log(line(health, health));
