@@ -15,11 +15,13 @@ const n = (value: number) => roundTo(value, 0.001);
 type Attrs = Record<string, string | number>;
 
 const colors = new Map<string, string>();
+/** svg.js's own test of what it writes as a colour (hex or rgb()); its typings leave it out. */
+const isColor = (value: string) => (Color as unknown as { isColor(value: string): boolean }).isColor(value);
 
 /** A colour as svg.js writes a fill or stroke (`#RRGGBB` in lower case), worked out once per colour. */
 function color(value: string): string {
   let written = colors.get(value);
-  if (written === undefined) colors.set(value, (written = Color.isColor(value) ? new Color(value).toString() : value));
+  if (written === undefined) colors.set(value, (written = isColor(value) ? new Color(value).toString() : value));
   return written;
 }
 
