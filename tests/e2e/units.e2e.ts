@@ -47,7 +47,8 @@ describe('inches on screen, millimetres in the system', () => {
     await page.locator('bw-panel-stage canvas').first().waitFor();
     const panelId = Number(/\/panels\/(\d+)$/.exec(page.url())![1]);
     expect(await page.locator('.title .size').innerText()).toMatch(/^[\d /]+" × [\d /]+" × [\d /]+"/);
-    expect(await page.locator('.status .tip').innerText()).toContain('32 mm (1 17/64")');
+    // The pitch joins the tip once the job's system has loaded.
+    await expect.poll(() => page.locator('.status .tip').innerText()).toContain('32 mm (1 17/64")');
     const list = page.getByRole('button', { name: /^Placements \(/ });
     if ((await list.getAttribute('aria-expanded')) !== 'true') await list.click();
     await page.locator('bw-placement-list .placement').first().click();
