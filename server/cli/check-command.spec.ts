@@ -87,4 +87,22 @@ describe('borewright check', () => {
     expect(away.code).toBe(0);
     expect(JSON.parse(away.stdout).findings).toEqual([]);
   });
+
+  it('words the findings in --units, the system pitch in mm with its inches, and refuses a unit it does not know', () => {
+    const inches = runCli('check', files['broken.json'], '--units', 'in-32');
+    expect(inches.code).toBe(1);
+    // The international inch is 25.4 mm (NIST SP 811, published): the 1 mm overlap is 1.26/32 → 1/32; the 3 mm web
+    // 3.78/32 → 1/8; the fix's x 101 = 127.2/32 → 3 31/32 and y 73 = 91.97/32 → 2 7/8; the door's 716 = 902.05/32 → 28 3/16.
+    expect(inches.stdout).toContain('overlap by 1/32"; keep at least 1/8".');
+    expect(inches.stdout).toContain('Fix: Move bore b to x 3 31/32", y 2 7/8", the nearest clear system hole.');
+    expect(inches.stdout).toContain('Door door (28 3/16" along its hinge edge, 4.2 kg) has 1 hinge; it needs 2.');
+    expect(runCli('check', files['broken.json']).stdout).toContain('Door door (716 mm along its hinge edge, 4.2 kg)');
+    // The pitch is the system's own figure: 32 mm = 80.63/64 → 1 17/64.
+    expect(runCli('check', files['pin-in-plate.json'], '--units', 'in-32').stdout).toContain('32 mm (1 17/64")');
+    const unknown = runCli('check', files['clean.json'], '--units', 'inch');
+    expect(unknown.code).toBe(2);
+    expect(unknown.stdout).toBe('');
+    expect(unknown.stderr).toContain('borewright check: --units must be one of mm, in, in-32, in-64, not "inch".');
+    expect(runCli('check', '--help').stdout).toContain('--units mm|in|in-32|in-64');
+  });
 });

@@ -13,6 +13,7 @@ Commands:
   schema             print the JSON Schema of the job document
   admin add          add a member to the shop's database, such as the first admin of a production install
 
+Lengths print in mm; check, plan and pack take --units in|in-32|in-64 for inches.
 Run borewright <command> --help for its options.
 Exit code: 0 all clear, 1 a check found an error, 2 the command could not run.`;
 

@@ -107,6 +107,25 @@ describe('borewright pack', () => {
     }
   });
 
+  it('sizes its sheets in --units and adds the inch columns to the hole schedule; mm without it', async () => {
+    const out = join(folder, 'inches.zip');
+    expect(runCli('pack', files['clean.json'], '-o', out, '--units', 'in-32').code).toBe(0);
+    const { zip, root } = await readPack(out);
+    // The side, 560 × 720 mm: 560 / 25.4 = 22.047 in = 705.5/32 → 22 1/16; 720 / 25.4 = 28.346 in = 907.09/32 → 28 11/32
+    // (the international inch, 25.4 mm: NIST SP 811, published). The pin at y 105 = 4.134 in = 132.3/32 → 4 1/8.
+    expect(await zip.file(`${root}/no carcass/Left side face A.svg`)!.async('string')).toContain('22 1/16&quot; × 28 11/32&quot;');
+    const schedule = await zip.file(`${root}/hole schedule.csv`)!.async('string');
+    expect(schedule).toContain('y in inches');
+    expect(schedule).toContain(',"4 1/8""",');
+    const metric = await readPack(join(folder, 'clean.zip'));
+    expect(await metric.zip.file(`${metric.root}/hole schedule.csv`)!.async('string')).not.toContain('in inches');
+    const unknown = runCli('pack', files['clean.json'], '-o', join(folder, 'never.zip'), '--units', 'in-16');
+    expect(unknown.code).toBe(2);
+    expect(unknown.stderr).toContain('borewright pack: --units must be one of mm, in, in-32, in-64, not "in-16".');
+    expect(existsSync(join(folder, 'never.zip'))).toBe(false);
+    expect(runCli('pack', '--help').stdout).toContain('--units mm|in|in-32|in-64');
+  });
+
   it('exits 2 on missing or wrong options, and on an output it cannot write', () => {
     expect(runCli('pack', files['clean.json']).stderr).toContain('say where to write the pack with -o <pack.zip>');
     expect(runCli('pack', files['clean.json'], '-o', join(folder, 'x.zip'), '--paper', 'a3').stderr).toContain('--paper must be a4 or letter, not "a3"');

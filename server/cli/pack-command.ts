@@ -13,8 +13,9 @@ import { catalogOrSay } from './load-catalog';
 import { jobOrSay } from './load-job';
 import { progressLine, type ProgressStream } from './progress-line';
 import { readJsonFile } from './read-json';
+import { UNITS_OPTION, unitsHelp, unitOrSay } from './units-option';
 
-export const PACK_USAGE = `Usage: borewright pack <job.json> -o <pack.zip> [--paper a4|letter] [--catalog <fittings.json>] [--gcode [--machine <machine.json>]]
+export const PACK_USAGE = `Usage: borewright pack <job.json> -o <pack.zip> [--paper a4|letter] [--catalog <fittings.json>] [--units <unit>] [--gcode [--machine <machine.json>]]
 
 Writes the bench pack of a job document: per panel its drilling maps (SVG), a DXF file and template
 sheets to print at 100 % (PDF), in a folder per carcass, all drawn from one list of the panel's holes;
@@ -23,6 +24,7 @@ DXF layer names), the hole schedule, the hardware list and a manifest with the S
   -o, --output <file>    the zip to write
   --paper a4|letter      the paper the template sheets are tiled onto (default a4)
   --catalog <file>       add a shop's own fittings to the built-in catalog
+${unitsHelp('the unit of the sheets, labels and cover sheet (DXF, G-code in mm)')}
   --gcode                add drilling programs (G-code, ISO 6983 / RS-274 words, mm): per panel one
                          for each face and edge with holes, beside its DXF
   --machine <file>       the machine's conventions for --gcode (zero corner, Z zero, heights, spoilboard
@@ -66,6 +68,7 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
       catalog: { type: 'string' },
       gcode: { type: 'boolean' },
       machine: { type: 'string' },
+      ...UNITS_OPTION,
       help: { type: 'boolean', short: 'h' },
     },
   });
@@ -88,6 +91,8 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
     io.err(`borewright pack: ${problem}.\n\n${PACK_USAGE}`);
     return EXIT.unusable;
   }
+  const unit = unitOrSay(io, 'pack', values.units);
+  if (!unit) return EXIT.unusable;
   const [file] = positionals;
   const output = values.output as string;
   const job = await jobOrSay(io, file, 'pack');
@@ -107,7 +112,7 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
     io.err(`borewright pack: cannot write ${output}: ${whyNot(error)}.`);
     return EXIT.unusable;
   }
-  const ctx = { job, catalog, date: new Date(), generator: GENERATOR };
+  const ctx = { job, catalog, date: new Date(), generator: GENERATOR, unit };
   const progress = progressLine(progressStream);
   const pack = planPack({ ctx, paper, ...(machine ? { machine } : {}), ...(await packTools()), onProgress: progress.update });
   try {

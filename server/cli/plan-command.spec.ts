@@ -31,4 +31,19 @@ describe('borewright plan', () => {
     expect(runCli('plan', files['garbled.json']).stderr).toContain('is not valid JSON');
     expect(runCli('plan').code).toBe(2);
   });
+
+  it('words its refusals in --units, keeps the job document in mm, and refuses a unit it does not know', () => {
+    // 19 mm = 0.748031 in → 0.748; 18 mm = 0.708661 in → 0.709 (the international inch, 25.4 mm: NIST SP 811, published).
+    const bad = runCli('plan', files['bad.json'], '--units', 'in');
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('  thickness: MDF 19 comes in 0.748" only, not 0.709"');
+    const inches = runCli('plan', EXAMPLE, '--units', 'in-64');
+    expect(inches.code).toBe(0);
+    expect(inches.stdout).toBe(runCli('plan', EXAMPLE).stdout);
+    const unknown = runCli('plan', EXAMPLE, '--units', 'cm');
+    expect(unknown.code).toBe(2);
+    expect(unknown.stdout).toBe('');
+    expect(unknown.stderr).toContain('borewright plan: --units must be one of mm, in, in-32, in-64, not "cm".');
+    expect(runCli('plan', '--help').stdout).toContain('--units mm|in|in-32|in-64');
+  });
 });

@@ -18,13 +18,13 @@ import * as panels from '../panels/panels.repository';
  * Plans a carcass with the job's own materials, system and limits and stores it with all its panels,
  * their drilling and their hang relations in one transaction: either all of it or nothing. A new id
  * adds the carcass; the id of a carcass already in the job plans that one again (see `replan`).
- * A description the planner refuses answers 400 with every problem led by its path.
+ * A description the planner refuses answers 400 with every problem led by its path, in the actor's units.
  */
 export async function storePlannedCarcass(db: Database, actor: User, jobId: number, body: unknown, choice?: ChangedPanelChoice): Promise<PlannedCarcass> {
   return db.transaction(async (tx) => {
     const job = await writableJob(tx, jobId);
     const description = typeof body === 'object' && body !== null ? body : {};
-    const result = planCarcass({ ...description, materials: job.materials, system: job.system, limits: job.limits }, await shopCatalog(tx));
+    const result = planCarcass({ ...description, materials: job.materials, system: job.system, limits: job.limits }, await shopCatalog(tx), { unit: actor.units });
     if (!result.ok) throw new AppError(400, 'invalid-input', `The carcass cannot be planned: ${result.errors[0]}`, { details: result.errors });
     const { plan } = result;
     const existing = (await carcassKeys(tx, jobId)).get(plan.carcass.id);

@@ -1,10 +1,10 @@
 import type { Catalog } from '../catalog/fitting';
 import type { JobDocument, Material, Panel } from '../model/job-document';
 import type { LengthUnit } from '../units/length-unit';
-import { coordinateWords, lengthWords, systemWords } from './wording';
+import { lengthWording, type LengthWording } from './wording';
 
-/** What the checks look up across a job, built once per run. */
-export interface JobSite {
+/** What the checks look up across a job, built once per run, and how its messages word lengths. */
+export interface JobSite extends LengthWording {
   job: JobDocument;
   catalog: Catalog;
   materials: ReadonlyMap<string, Material>;
@@ -20,13 +20,6 @@ export interface JobSite {
   carcassBoard: ReadonlyMap<string, number>;
   /** For each carcass id, its side panels in document order. */
   sidesOf: ReadonlyMap<string, Panel[]>;
-  /** The unit the findings' messages speak in, and how they print a length in it. */
-  unit: LengthUnit;
-  length: (mm: number) => string;
-  /** A position on the panel: `37` in mm, `1 15/32"` in inches. */
-  coordinate: (mm: number) => string;
-  /** The system's own figures: `32 mm`, `32 mm (1 17/64")`. */
-  system: (mm: number) => string;
 }
 
 function liftCount(panel: Panel | undefined, catalog: Catalog): number {
@@ -53,7 +46,7 @@ export function jobSite(job: JobDocument, catalog: Catalog, unit: LengthUnit = '
   }
   const sidesOf = new Map<string, Panel[]>();
   for (const p of job.panels) if (p.role === 'side' && p.carcass !== undefined) sidesOf.set(p.carcass, [...(sidesOf.get(p.carcass) ?? []), p]);
-  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard, sidesOf, unit, length: lengthWords(unit), coordinate: coordinateWords(unit), system: systemWords(unit) };
+  return { job, catalog, materials, flapsOn, hungOn, panels, liftsFor, carcassBoard, sidesOf, ...lengthWording(unit) };
 }
 
 /** The other side of a panel's carcass, when the panel is one of exactly two sides. */

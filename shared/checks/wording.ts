@@ -26,6 +26,21 @@ export function systemWords(unit: LengthUnit): (value: number) => string {
   return unit === 'mm' ? mm : (value) => formatSystemLength(value, unit);
 }
 
+/** How a message words lengths for someone who reads `unit`: lengths, positions and the system's own figures. */
+export interface LengthWording {
+  unit: LengthUnit;
+  length: (mm: number) => string;
+  /** A position on the panel: `37` in mm, `1 15/32"` in inches. */
+  coordinate: (mm: number) => string;
+  /** The system's own figures: `32 mm`, `32 mm (1 17/64")`. */
+  system: (mm: number) => string;
+}
+
+/** The wording of the checks' findings and the planner's reasons for a reader of `unit` (mm unless told). */
+export function lengthWording(unit: LengthUnit = 'mm'): LengthWording {
+  return { unit, length: lengthWords(unit), coordinate: coordinateWords(unit), system: systemWords(unit) };
+}
+
 /** A number rounded to one decimal, without a trailing `.0`. */
 export function formatNumber(value: number): string {
   const rounded = Math.round(value * 10) / 10;

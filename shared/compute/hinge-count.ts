@@ -2,7 +2,7 @@
  * Hinges per door by the height of its hinge edge and its mass (trade-reference §2, common practice):
  * each row holds up to that height and that mass.
  */
-const HINGE_RULE = [
+export const HINGE_RULE = [
   { hinges: 2, height: 900, mass: 6 },
   { hinges: 3, height: 1600, mass: 12 },
   { hinges: 4, height: 2000, mass: 17 },

@@ -3,6 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { pdfTools } from '../../server/export/export-platform';
 import { checkJob } from '../checks/index';
 import type { JobDocument } from '../model/job-document';
+import type { LengthUnit } from '../units/length-unit';
 import { clashPanel, exportContext, exportJob } from '../testing/export-job';
 import { CAUTION_DEFERRAL, cautionsFor, PROGRAM_CAUTION } from './cautions';
 import { coverSheet } from './cover-sheet';
@@ -13,9 +14,9 @@ import { drawingsPdf } from './pdf-document';
 const tools = await pdfTools();
 
 /** The cover sheet's text as pdfjs-dist reads it from the PDF, page after page. */
-async function coverText(job: JobDocument, programs = false): Promise<{ text: string; pages: number }> {
-  const ctx = exportContext(job);
-  const findings = checkJob(job, ctx.catalog);
+async function coverText(job: JobDocument, programs = false, unit: LengthUnit = 'mm'): Promise<{ text: string; pages: number }> {
+  const ctx = { ...exportContext(job), unit };
+  const findings = checkJob(job, ctx.catalog, { unit });
   const drilling = jobDrilling(job, ctx.catalog, findings);
   const pages = coverSheet({
     ctx,
@@ -75,6 +76,20 @@ describe('cover sheet', () => {
     for (const panel of job.panels) expect(text).toContain(panel.id);
     expect(text).toContain('drilled');
     expect(text).toContain('Cup hinge, full overlay, 45/9.5');
+  });
+
+  it("gives the panels' sizes in the unit of the member who asked for the pack", async () => {
+    const lines = (text: string) => text.replace(/\n(?=×)|(?<=×)\n/g, ' ');
+    const metric = lines((await coverText(exportJob())).text);
+    expect(metric).toContain('x × y × z mm');
+    expect(metric).toContain('496 × 716 × 18');
+    const inches = lines((await coverText(exportJob(), false, 'in-32')).text);
+    expect(inches).toContain('x × y × z in');
+    // The door, 496 × 716 × 18 mm, by the international inch of 25.4 mm (NIST SP 811, published):
+    // 496 / 25.4 = 19.5276 in = 624.88/32 → 625/32 = 19 17/32; 716 / 25.4 = 28.1890 in = 902.05/32 → 902/32 = 28 3/16;
+    // 18 / 25.4 = 0.7087 in = 22.68/32 → 23/32.
+    expect(inches).toContain('19 17/32" × 28 3/16" × 23/32"');
+    expect(inches).not.toContain('496 × 716');
   });
 
   it('starts with the order of work and says, carcass by carcass, what the pack holds', async () => {

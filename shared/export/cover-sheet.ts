@@ -2,13 +2,13 @@ import type { Finding, Severity } from '../checks/finding';
 import { handText } from '../layout/side-hand';
 import { CAUTION_DEFERRAL, PROGRAM_CAUTION, type Caution } from './cautions';
 import { text, type Drawing } from './drawing';
-import { carcassName, dateText, type ExportContext } from './export-context';
+import { carcassName, dateText, exportUnit, type ExportContext } from './export-context';
 import type { HardwareList } from './hardware-list';
 import type { PanelDrilling } from './panel-drilling';
 import { PageFlow, type Column } from './page-flow';
 import { ERROR_RED, INK, MUTED, PURPOSE_STYLES } from './palette';
 import { PAPER, type PaperName } from './paper';
-import { lengthText } from './units';
+import { drawingLength, lengthText } from './units';
 
 export interface CoverInput {
   ctx: ExportContext;
@@ -28,6 +28,30 @@ export interface CoverInput {
 /** Findings listed one by one on the cover; the rest are counted. */
 const LISTED_FINDINGS = 60;
 const SEVERITIES: readonly Severity[] = ['error', 'warning', 'note'];
+
+/** The panel table's columns before the findings' tally, 171 mm in all: sizes in mm, the figures bare. */
+const PANEL_COLUMNS_MM: readonly Column[] = [
+  { title: 'Carcass', width: 28 },
+  { title: 'Panel', width: 24 },
+  { title: 'Name', width: 38 },
+  { title: 'Role', width: 15 },
+  { title: 'x × y × z mm', width: 29 },
+  { title: 'Status', width: 14 },
+  { title: 'Holes', width: 11 },
+  { title: 'Sheets', width: 12 },
+];
+
+/** The same for inches, whose sizes (`88 63/64" × 88 63/64" × 63/64"`) take two thirds as much room again, taken from the names. */
+const PANEL_COLUMNS_INCHES: readonly Column[] = [
+  { title: 'Carcass', width: 22 },
+  { title: 'Panel', width: 20 },
+  { title: 'Name', width: 30 },
+  { title: 'Role', width: 15 },
+  { title: 'x × y × z in', width: 49 },
+  { title: 'Status', width: 12 },
+  { title: 'Holes', width: 11 },
+  { title: 'Sheets', width: 12 },
+];
 
 function count(findings: readonly Finding[], severity: Severity): number {
   return findings.filter((f) => f.severity === severity).length;
@@ -172,24 +196,15 @@ export function coverSheet(input: CoverInput): Drawing[] {
 
   flow.heading('Panels');
   const tally = (panel: string) => SEVERITIES.map((s) => count(findings.filter((f) => f.panel === panel), s)).join('/');
+  const unit = exportUnit(ctx);
   flow.table(
-    [
-      { title: 'Carcass', width: 28 },
-      { title: 'Panel', width: 24 },
-      { title: 'Name', width: 38 },
-      { title: 'Role', width: 15 },
-      { title: 'x × y × z mm', width: 29 },
-      { title: 'Status', width: 14 },
-      { title: 'Holes', width: 11 },
-      { title: 'Sheets', width: 12 },
-      { title: 'E/W/N', width: flow.measure - 171 },
-    ],
+    [...(unit === 'mm' ? PANEL_COLUMNS_MM : PANEL_COLUMNS_INCHES), { title: 'E/W/N', width: flow.measure - 171 }],
     input.panels.map(({ drilling: { panel, holes }, sheets }) => [
       carcassName(ctx, panel),
       panel.id,
       panel.name,
       panel.role,
-      [panel.width, panel.height, panel.thickness].map(lengthText).join(' × '),
+      [panel.width, panel.height, panel.thickness].map((mm) => drawingLength(mm, unit)).join(' × '),
       panel.status,
       String(holes.length),
       String(sheets),

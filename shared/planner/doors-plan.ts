@@ -1,5 +1,5 @@
-import { mm } from '../checks/wording';
-import { hingesNeeded } from '../compute/hinge-count';
+import type { LengthWording } from '../checks/wording';
+import { HINGE_RULE, hingesNeeded } from '../compute/hinge-count';
 import { panelMass } from '../compute/panel-mass';
 import type { Panel } from '../model/job-document';
 import type { DoorsInput } from './carcass-plan-input';
@@ -33,6 +33,7 @@ export interface FrontsStep<T> {
 
 /** The mass of a front with its handle, and the number of hinges it needs by the hinge rule. */
 export function frontHinging(
+  words: LengthWording,
   size: { width: number; height: number; thickness: number },
   density: number,
   handleMass: number,
@@ -40,12 +41,13 @@ export function frontHinging(
 ): { mass: Explained; count: Explained } | { error: string } {
   const mass = panelMass(size, density) + handleMass;
   const count = hingesNeeded(along, mass);
+  const last = HINGE_RULE[HINGE_RULE.length - 1];
   if (count === null) {
-    return { error: `fronts: a front ${mm(along)} along its hinge edge weighing ${Math.round(mass * 10) / 10} kg is beyond the hinge rule (2400 mm, 22 kg); ask the hinge maker` };
+    return { error: `fronts: a front ${words.length(along)} along its hinge edge weighing ${Math.round(mass * 10) / 10} kg is beyond the hinge rule (${words.length(last.height)}, ${last.mass} kg); ask the hinge maker` };
   }
   return {
-    mass: explain(mass, `${mm(size.width)} × ${mm(size.height)} × ${mm(size.thickness)} at ${density} kg/m³${handleMass > 0 ? ` plus a ${handleMass} kg handle` : ''}`),
-    count: explain(count, `the hinge rule for ${mm(along)} along the hinge edge and ${Math.round(mass * 10) / 10} kg (up to 900 mm and 6 kg: 2; 1600 and 12: 3; 2000 and 17: 4; 2400 and 22: 5)`),
+    mass: explain(mass, `${words.length(size.width)} × ${words.length(size.height)} × ${words.length(size.thickness)} at ${density} kg/m³${handleMass > 0 ? ` plus a ${handleMass} kg handle` : ''}`),
+    count: explain(count, `the hinge rule for ${words.length(along)} along the hinge edge and ${Math.round(mass * 10) / 10} kg (${HINGE_RULE.map((row) => `up to ${words.length(row.height)} and ${row.mass} kg: ${row.hinges}`).join('; ')})`),
   };
 }
 
@@ -56,21 +58,21 @@ export function frontHinging(
  */
 export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorPlan> | { errors: string[] } {
   const { input, box, catalog } = ctx;
-  const whole = frontSizes(doors.overlay, doors.count, doors.reveal, { width: input.width, height: input.height, thickness: box.thickness });
-  const sizes = { ...whole, ...openingBand(doors.overlay, doors.reveal, ctx.opening, openingInside(ctx), whole) };
+  const whole = frontSizes(ctx.words, doors.overlay, doors.count, doors.reveal, { width: input.width, height: input.height, thickness: box.thickness });
+  const sizes = { ...whole, ...openingBand(ctx.words, doors.overlay, doors.reveal, ctx.opening, openingInside(ctx), whole) };
   const material = ctx.materials.get(doors.material ?? box.board.id) ?? box.board;
   const minWidth = 2 * input.system.pitch;
   if (sizes.width.value < minWidth || sizes.height.value < minWidth) {
-    return { errors: [`width: the carcass is too small for ${doors.count} ${doors.overlay === 'inset' ? 'inset' : `${doors.overlay}-overlay`} door${doors.count > 1 ? 's' : ''}: each would be ${mm(sizes.width.value)} × ${mm(sizes.height.value)} (${sizes.width.why})`] };
+    return { errors: [`width: the carcass is too small for ${doors.count} ${doors.overlay === 'inset' ? 'inset' : `${doors.overlay}-overlay`} door${doors.count > 1 ? 's' : ''}: each would be ${ctx.words.length(sizes.width.value)} × ${ctx.words.length(sizes.height.value)} (${sizes.width.why})`] };
   }
-  const choice = chooseHinge(catalog, doors.overlay, sizes.overlay, doors.hinge);
+  const choice = chooseHinge(ctx.words, catalog, doors.overlay, sizes.overlay, doors.hinge);
   if ('error' in choice) return { errors: [choice.error] };
   const size = { width: sizes.width.value, height: sizes.height.value, thickness: material.thickness };
-  const hinging = frontHinging(size, material.density, doors.handleMass, size.height);
+  const hinging = frontHinging(ctx.words, size, material.density, doors.handleMass, size.height);
   if ('error' in hinging) return { errors: [hinging.error] };
   const cupReach = choice.cupFromEdge.value + choice.hinge.bores.reduce((r, b) => Math.max(r, b.kind === 'face' ? b.x + b.diameter / 2 : 0), 0);
-  if (size.width < cupReach + input.limits.minEdge) return { errors: [`width: each door would be ${mm(size.width)} wide, too narrow for its hinge cup`] };
-  const heights = hingeHeights(hinging.count.value, size.height, sizes.dy.value, box.grid, choice.hinge, choice.plate);
+  if (size.width < cupReach + input.limits.minEdge) return { errors: [`width: each door would be ${ctx.words.length(size.width)} wide, too narrow for its hinge cup`] };
+  const heights = hingeHeights(ctx.words, hinging.count.value, size.height, sizes.dy.value, box.grid, choice.hinge, choice.plate);
   if ('error' in heights) return { errors: [heights.error] };
   // Inset doors sit within the box, so their plates go back by the door's thickness: the 37 mm row plus the door
   // thickness (trade-reference §2, published).
@@ -94,6 +96,6 @@ export function planDoors(ctx: PlanContext, doors: DoorsInput): FrontsStep<DoorP
   const cups = heights.hinges.map((h) => h.cup.value);
   const spread = Math.max(...cups) - Math.min(...cups);
   // The hinge rule wants the outer hinges further apart than the door is wide (trade-reference §2).
-  const sag = spread <= size.width ? [`The outer hinges are ${mm(spread)} apart, no more than the ${mm(size.width)} door width: the door may sag; two narrower doors would not.`] : [];
+  const sag = spread <= size.width ? [`The outer hinges are ${ctx.words.length(spread)} apart, no more than the ${ctx.words.length(size.width)} door width: the door may sag; two narrower doors would not.`] : [];
   return { panels, parts, plans, notes: sag };
 }

@@ -1,5 +1,5 @@
 import type { Fitting } from '../catalog/fitting';
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { holeHeights } from '../grid/system-grid';
 import type { Placement } from '../model/job-document';
 import type { DrawersInput } from './carcass-plan-input';
@@ -36,19 +36,19 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
   const { input, box, catalog } = ctx;
   const T = box.thickness;
   const n = drawers.count;
-  const one = frontSizes('full', 1, drawers.reveal, { width: input.width, height: input.height, thickness: T });
+  const one = frontSizes(ctx.words, 'full', 1, drawers.reveal, { width: input.width, height: input.height, thickness: T });
   // Down to half a millimetre, a size a bench can cut; what is left widens the top reveal.
   const { from, to, part: section } = ctx.opening;
   const span = to - from;
   const inside = openingInside(ctx);
   const frontHeight = Math.floor(((span - n * drawers.reveal) / n) * 2) / 2;
-  if (frontHeight < 2 * input.system.pitch) return { errors: [`fronts.count: ${n} drawers leave fronts of ${mm(frontHeight)}, too low for a drawer`] };
+  if (frontHeight < 2 * input.system.pitch) return { errors: [`fronts.count: ${n} drawers leave fronts of ${ctx.words.length(frontHeight)}, too low for a drawer`] };
   const front = box.rows.front.value;
   const runners = [...catalog.values()]
     .filter((f): f is Runner => f.purpose === 'runner' && front + reach(f)[1] <= box.shelfDepth.value)
     .sort((a, b) => b.runner.length - a.runner.length);
   const [runner] = runners;
-  if (!runner) return { errors: [`depth: no runner of the catalog fits the ${mm(box.shelfDepth.value)} inside depth`] };
+  if (!runner) return { errors: [`depth: no runner of the catalog fits the ${ctx.words.length(box.shelfDepth.value)} inside depth`] };
   const [, , below, above] = reach(runner);
   const holes = holeHeights(box.grid);
   const material = ctx.materials.get(drawers.material ?? box.board.id) ?? box.board;
@@ -68,8 +68,8 @@ export function planDrawers(ctx: PlanContext, drawers: DrawersInput): FrontsStep
     plans.push({
       panel: panel.id,
       width: one.width,
-      height: explain(frontHeight, `the ${mm(span)} height less ${n} reveals of ${mm(drawers.reveal)}, shared by ${n}, down to 0.5 mm`),
-      runner: { fitting: runner.id, y: explain(y, `the lowest system hole that keeps the runner's body above ${mm(Math.max(lower, inside.low))}, behind its front; ${runner.name}, the longest that clears the back`) },
+      height: explain(frontHeight, `the ${ctx.words.length(span)} height less ${n} reveals of ${ctx.words.length(drawers.reveal)}, shared by ${n}, down to 0.5 mm`),
+      runner: { fitting: runner.id, y: explain(y, `the lowest system hole that keeps the runner's body above ${ctx.words.length(Math.max(lower, inside.low))}, behind its front; ${runner.name}, the longest that clears the back`) },
     });
   }
   return { panels, parts, plans, notes: [] };

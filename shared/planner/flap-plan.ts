@@ -1,4 +1,4 @@
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { flapMoment, maxFlapMoment } from '../compute/power-factor';
 import { holeHeights, systemGrid } from '../grid/system-grid';
 import type { Placement } from '../model/job-document';
@@ -45,17 +45,17 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
   const { input, box, catalog } = ctx;
   const T = box.thickness;
   if (!ctx.opening.upperIsBox) return { errors: [`fronts: a lift-up flap hangs from the carcass's top, so only the top section can have one`] };
-  const whole = frontSizes('full', 1, flap.reveal, { width: input.width, height: input.height, thickness: T });
+  const whole = frontSizes(ctx.words, 'full', 1, flap.reveal, { width: input.width, height: input.height, thickness: T });
   const inside = openingInside(ctx);
-  const sizes = { ...whole, ...openingBand('full', flap.reveal, ctx.opening, inside, whole) };
+  const sizes = { ...whole, ...openingBand(ctx.words, 'full', flap.reveal, ctx.opening, inside, whole) };
   const material = ctx.materials.get(flap.material ?? box.board.id) ?? box.board;
   const size = { width: sizes.height.value, height: sizes.width.value, thickness: material.thickness };
-  const hinging = frontHinging(size, material.density, flap.handleMass, size.height);
+  const hinging = frontHinging(ctx.words, size, material.density, flap.handleMass, size.height);
   if ('error' in hinging) return { errors: [hinging.error] };
   const board = hinging.mass.value - flap.handleMass;
   const lift = chooseLift(catalog, { height: size.width, mass: board, handleMass: flap.handleMass }, flap.mechanisms);
   if ('error' in lift) return { errors: [lift.error] };
-  const choice = chooseHinge(catalog, 'full', sizes.overlay, flap.hinge);
+  const choice = chooseHinge(ctx.words, catalog, 'full', sizes.overlay, flap.hinge);
   if ('error' in choice) return { errors: [choice.error] };
   // The top runs between the sides: its y = 0 is the left side's inside face.
   const dy = sizes.left - T;
@@ -66,12 +66,12 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
   const topSize = { width: box.partDepth.value, height: box.innerWidth.value, thickness: T };
   const clear = clearOfBodies(joint.part, catalog, topSize, input.system, input.limits.minWeb);
   // The top is not line-bored: its plates go where the cups land 76 to 100 mm from the flap's ends.
-  const heights = hingeHeights(hinging.count.value, size.height, dy, topGrid, choice.hinge, choice.plate, clear, 'free');
+  const heights = hingeHeights(ctx.words, hinging.count.value, size.height, dy, topGrid, choice.hinge, choice.plate, clear, 'free');
   if ('error' in heights) return { errors: [heights.error] };
   const top = lift.fitting.keepOuts.reduce((m, k) => Math.max(m, k.y + k.height), 0);
   const bottom = lift.fitting.keepOuts.reduce((m, k) => Math.min(m, k.y), 0);
   const anchor = holeHeights(box.grid).filter((y) => y + top <= inside.high && y + bottom >= inside.low).at(-1);
-  if (anchor === undefined) return { errors: [`height: ${mm(inside.high - inside.low)} inside is too low for the lift mechanism's body`] };
+  if (anchor === undefined) return { errors: [`height: ${ctx.words.length(inside.high - inside.low)} inside is too low for the lift mechanism's body`] };
   const parts = noPlacements();
   const hands = flap.mechanisms === 2 ? (['left', 'right'] as const) : (['left'] as const);
   const mechanisms = hands.map((hand) => {
@@ -80,7 +80,7 @@ export function planFlap(ctx: PlanContext, flap: FlapInput): FrontsStep<FlapPlan
     return {
       side: partId(ctx, hand),
       x: placement.x,
-      y: explain(anchor, `the highest system hole that keeps the mechanism's body (${mm(bottom)} to ${mm(top)} about its top hole) under the top`),
+      y: explain(anchor, `the highest system hole that keeps the mechanism's body (${ctx.words.length(bottom)} to ${ctx.words.length(top)} about its top hole) under the top`),
     };
   });
   parts.top.push(...platePlacements(choice, heights.hinges, topGrid.rows[0]));

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { lengthWording } from '../checks/wording';
 import { frontSizes } from './front-sizes';
 
 // Overlay = how far a front reaches over the side's inside face; the relation to the hinge is
@@ -7,7 +8,7 @@ import { frontSizes } from './front-sizes';
 describe('frontSizes', () => {
   const box = { width: 600, height: 723, thickness: 19 };
   const sizes = (kind: 'full' | 'half' | 'inset', count: number) => {
-    const s = frontSizes(kind, count, 3, box);
+    const s = frontSizes(lengthWording('mm'), kind, count, 3, box);
     return [s.width.value, s.height.value, s.dy.value, s.overlay.value];
   };
 

@@ -1,4 +1,4 @@
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { explain, type Explained } from './explained';
 import type { OverlayKind } from './hinge-choice';
 import type { Opening } from './plan-parts';
@@ -32,28 +32,28 @@ export interface FrontSizes {
  * side), inset sits within the box with a reveal all round. Vertically full and half overlay both cover
  * top and bottom.
  */
-export function frontSizes(kind: OverlayKind, count: number, reveal: number, box: FrontOpening): FrontSizes {
+export function frontSizes(words: LengthWording, kind: OverlayKind, count: number, reveal: number, box: FrontOpening): FrontSizes {
   const T = box.thickness;
   const r = reveal;
-  const gaps = `${count - 1} gap${count === 2 ? '' : 's'} of ${mm(r)} between fronts`;
+  const gaps = `${count - 1} gap${count === 2 ? '' : 's'} of ${words.length(r)} between fronts`;
   if (kind === 'inset') {
     const width = (box.width - 2 * T - (count + 1) * r) / count;
     return {
-      width: explain(width, `the ${mm(box.width - 2 * T)} between the sides less a ${mm(r)} reveal at each side${count > 1 ? ` and ${gaps}` : ''}${count > 1 ? `, shared by ${count}` : ''}`),
-      height: explain(box.height - 2 * T - 2 * r, `the ${mm(box.height - 2 * T)} between top and bottom less a ${mm(r)} reveal above and below`),
-      dy: explain(T + r, `the ${mm(T)} bottom plus the ${mm(r)} reveal`),
-      overlay: explain(-r, `inset: set ${mm(r)} in from the side's inside face`),
+      width: explain(width, `the ${words.length(box.width - 2 * T)} between the sides less a ${words.length(r)} reveal at each side${count > 1 ? ` and ${gaps}` : ''}${count > 1 ? `, shared by ${count}` : ''}`),
+      height: explain(box.height - 2 * T - 2 * r, `the ${words.length(box.height - 2 * T)} between top and bottom less a ${words.length(r)} reveal above and below`),
+      dy: explain(T + r, `the ${words.length(T)} bottom plus the ${words.length(r)} reveal`),
+      overlay: explain(-r, `inset: set ${words.length(r)} in from the side's inside face`),
       left: T + r,
     };
   }
   const covered = kind === 'full' ? T : T / 2;
   const lost = 2 * (T - covered) + r + (count - 1) * r;
-  const what = kind === 'full' ? 'full overlay' : `half overlay: half of each ${mm(T)} side left for the next carcass`;
+  const what = kind === 'full' ? 'full overlay' : `half overlay: half of each ${words.length(T)} side left for the next carcass`;
   return {
-    width: explain((box.width - lost) / count, `the ${mm(box.width)} width less ${mm(lost)} (${what}; half a ${mm(r)} reveal at each outer edge${count > 1 ? `; ${gaps}` : ''})${count > 1 ? `, shared by ${count}` : ''}`),
-    height: explain(box.height - r, `the ${mm(box.height)} height less half a ${mm(r)} reveal above and below`),
-    dy: explain(r / 2, `half the ${mm(r)} reveal above the sides' lower edge`),
-    overlay: explain(covered - r / 2, `${kind} overlay: ${mm(covered)} of the ${mm(T)} side less half the ${mm(r)} reveal`),
+    width: explain((box.width - lost) / count, `the ${words.length(box.width)} width less ${words.length(lost)} (${what}; half a ${words.length(r)} reveal at each outer edge${count > 1 ? `; ${gaps}` : ''})${count > 1 ? `, shared by ${count}` : ''}`),
+    height: explain(box.height - r, `the ${words.length(box.height)} height less half a ${words.length(r)} reveal above and below`),
+    dy: explain(r / 2, `half the ${words.length(r)} reveal above the sides' lower edge`),
+    overlay: explain(covered - r / 2, `${kind} overlay: ${words.length(covered)} of the ${words.length(T)} side less half the ${words.length(r)} reveal`),
     left: T - covered + r / 2,
   };
 }
@@ -64,18 +64,18 @@ export function frontSizes(kind: OverlayKind, count: number, reveal: number, box
  * side: each covers its half, half a reveal short of the shelf's centre; inset fronts sit a reveal inside
  * the faces of the boards around them.
  */
-export function openingBand(kind: OverlayKind, reveal: number, opening: Opening, inside: { low: number; high: number }, whole: FrontSizes): Pick<FrontSizes, 'height' | 'dy'> {
+export function openingBand(words: LengthWording, kind: OverlayKind, reveal: number, opening: Opening, inside: { low: number; high: number }, whole: FrontSizes): Pick<FrontSizes, 'height' | 'dy'> {
   if (!opening.part) return { height: whole.height, dy: whole.dy };
   const r = reveal;
   const span = opening.to - opening.from;
   if (kind === 'inset') {
     return {
-      height: explain(inside.high - inside.low - 2 * r, `the ${mm(inside.high - inside.low)} between the boards above and below the section less a ${mm(r)} reveal at each`),
-      dy: explain(inside.low + r, `the board below the section's face at ${mm(inside.low)} plus the ${mm(r)} reveal`),
+      height: explain(inside.high - inside.low - 2 * r, `the ${words.length(inside.high - inside.low)} between the boards above and below the section less a ${words.length(r)} reveal at each`),
+      dy: explain(inside.low + r, `the board below the section's face at ${words.length(inside.low)} plus the ${words.length(r)} reveal`),
     };
   }
   return {
-    height: explain(span - r, `the ${mm(span)} section (to the dividing shelf's centre) less half a ${mm(r)} reveal above and below`),
-    dy: explain(opening.from + r / 2, `half the ${mm(r)} reveal above the section's lower end at ${mm(opening.from)}`),
+    height: explain(span - r, `the ${words.length(span)} section (to the dividing shelf's centre) less half a ${words.length(r)} reveal above and below`),
+    dy: explain(opening.from + r / 2, `half the ${words.length(r)} reveal above the section's lower end at ${words.length(opening.from)}`),
   };
 }

@@ -1,5 +1,5 @@
 import type { Catalog, Fitting } from '../catalog/fitting';
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { cupCentreFromEdge, overlayFor } from '../compute/hinge-geometry';
 import { explain, type Explained } from './explained';
 
@@ -28,6 +28,7 @@ function hingesOf(catalog: Catalog, kind: OverlayKind): HingeFitting[] {
  * adjust either way. Returns the reason as an error when the catalog has none.
  */
 export function chooseHinge(
+  words: LengthWording,
   catalog: Catalog,
   kind: OverlayKind,
   wanted: Explained,
@@ -58,7 +59,7 @@ export function chooseHinge(
     const lowest = overlayFor(hinge.hinge.constant, hinge.hinge.boringDistance.min, Math.max(...heights));
     const highest = overlayFor(hinge.hinge.constant, hinge.hinge.boringDistance.max, Math.min(...heights));
     return {
-      error: `fronts.reveal: the fronts need ${mm(wanted.value)} overlay (${wanted.why}), but ${hinge.name} with the catalog's plates gives ${mm(lowest)} to ${mm(highest)}; change the reveal or import a hinge or plate that reaches it`,
+      error: `fronts.reveal: the fronts need ${words.length(wanted.value)} overlay (${wanted.why}), but ${hinge.name} with the catalog's plates gives ${words.length(lowest)} to ${words.length(highest)}; change the reveal or import a hinge or plate that reaches it`,
     };
   }
   const { hinge, plate, b } = best;
@@ -70,9 +71,9 @@ export function chooseHinge(
     overlay: wanted,
     boringDistance: explain(
       b,
-      `overlay ${mm(wanted.value)} = hinge constant ${mm(hinge.hinge.constant)} + B − plate ${mm(plate.plate.height)}, B within ${mm(hinge.hinge.boringDistance.min)} to ${mm(hinge.hinge.boringDistance.max)} and nearest its middle`,
+      `overlay ${words.length(wanted.value)} = hinge constant ${words.length(hinge.hinge.constant)} + B − plate ${words.length(plate.plate.height)}, B within ${words.length(hinge.hinge.boringDistance.min)} to ${words.length(hinge.hinge.boringDistance.max)} and nearest its middle`,
     ),
     plateHeight: explain(plate.plate.height, `the plate that puts B nearest the middle of the hinge's range (${plate.name})`),
-    cupFromEdge: explain(cupCentreFromEdge(b, cupDiameter), `B ${mm(b)} plus half the Ø${cupDiameter} cup`),
+    cupFromEdge: explain(cupCentreFromEdge(b, cupDiameter), `B ${words.length(b)} plus half the Ø${cupDiameter} cup`),
   };
 }

@@ -1,5 +1,5 @@
 import { CUP_FROM_END } from '../checks/hinge-end-distance';
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { GRID_TOLERANCE, holeHeights, type SystemGrid } from '../grid/system-grid';
 import { explain, type Explained } from './explained';
 import type { HingeFitting, PlateFitting } from './hinge-choice';
@@ -52,6 +52,7 @@ function outside(value: number, range: { min: number; max: number }): number {
  * would clash: then the door is too short.
  */
 export function hingeHeights(
+  words: LengthWording,
   count: number,
   doorLength: number,
   dy: number,
@@ -73,9 +74,10 @@ export function hingeHeights(
     chosen.push(nearest((c) => Math.abs(c - target)));
   }
   chosen.push(last);
+  const ends = `${words.length(CUP_FROM_END.min)} to ${words.length(CUP_FROM_END.max)}`;
   const tooClose = chosen.some((c, i) => i > 0 && c - chosen[i - 1] < body);
   if (tooClose) {
-    return { error: `fronts: the front is ${mm(doorLength)} along its hinge edge, too short for ${count} hinges ${mm(body)} apart with the first and last 76 to 100 mm from its ends` };
+    return { error: `fronts: the front is ${words.length(doorLength)} along its hinge edge, too short for ${count} hinges ${words.length(body)} apart with the first and last ${ends} from its ends` };
   }
   const grid32 = rows === 'free' ? 'its plate clear of the joints' : `its plate's holes on system holes`;
   return {
@@ -84,9 +86,9 @@ export function hingeHeights(
       cup: explain(
         c,
         i === 0
-          ? `${mm(c)} from the end at y = 0 (76 to 100 mm), ${grid32}`
+          ? `${words.length(c)} from the end at y = 0 (${ends}), ${grid32}`
           : i === count - 1
-            ? `${mm(doorLength - c)} from the far end (76 to 100 mm), ${grid32}`
+            ? `${words.length(doorLength - c)} from the far end (${ends}), ${grid32}`
             : `spread evenly between the outer hinges, ${grid32}`,
       ),
     })),

@@ -1,5 +1,7 @@
 import type { Catalog } from '../catalog/fitting';
+import { lengthWording } from '../checks/wording';
 import type { Carcass, Panel } from '../model/job-document';
+import type { LengthUnit } from '../units/length-unit';
 import { formatIssues } from '../model/validation-messages';
 import { planBox, type CarcassBox } from './carcass-box';
 import { carcassPlanInput, type CarcassPlanInput } from './carcass-plan-input';
@@ -41,25 +43,32 @@ function merge(...steps: PartPlacements[]): PartPlacements {
   };
 }
 
-/**
- * Plans one carcass from its description: sides on the 32 mm system with their construction bores, top,
- * bottom, back, kickboard, fronts with their hinges, plates or mechanisms, and shelves. Bad input is
- * refused with one message per problem, each led by the path of the value it concerns; nothing is made.
- */
 /** The input as the carcass keeps it to be planned again: the job's materials, system and limits come from the job. */
 function description(input: CarcassPlanInput): Record<string, unknown> {
   const { materials: _materials, system: _system, limits: _limits, ...own } = input;
   return own;
 }
 
-export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
+export interface PlanOptions {
+  /** The unit the reasons, notes and refusals print lengths in (the reader's choice); millimetres unless told. */
+  unit?: LengthUnit;
+}
+
+/**
+ * Plans one carcass from its description: sides on the 32 mm system with their construction bores, top,
+ * bottom, back, kickboard, fronts with their hinges, plates or mechanisms, and shelves. Bad input is
+ * refused with one message per problem, each led by the path of the value it concerns; nothing is made.
+ * Only the words follow `options.unit`: every number of the plan and its panels is in millimetres.
+ */
+export function planCarcass(data: unknown, catalog: Catalog, options: PlanOptions = {}): PlanResult {
   const parsed = carcassPlanInput.safeParse(data);
   if (!parsed.success) return { ok: false, errors: formatIssues(parsed.error) };
   const input = parsed.data;
-  const boxed = planBox(input);
+  const words = lengthWording(options.unit);
+  const boxed = planBox(input, words);
   if ('errors' in boxed) return { ok: false, errors: boxed.errors };
   const { box } = boxed;
-  const ctx: PlanContext = { input, box, catalog, materials: new Map(input.materials.map((m) => [m.id, m])), opening: wholeOpening(input.height) };
+  const ctx: PlanContext = { input, box, catalog, materials: new Map(input.materials.map((m) => [m.id, m])), opening: wholeOpening(input.height), words };
   const fronts = input.fronts.type === 'sections' ? planSections(ctx, input.fronts) : planOpening(ctx, input.fronts);
   if ('errors' in fronts) return { ok: false, errors: fronts.errors };
   const T = box.thickness;
@@ -88,7 +97,7 @@ export function planCarcass(data: unknown, catalog: Catalog): PlanResult {
   }
   if (mounting.type === 'kickboard') panels.push(carcassPanel(ctx, 'kickboard', 'kickboard', 'kickboard', { width: input.width, height: mounting.height }));
   panels.push(...shelved.panels, ...fronts.panels);
-  const notes = [...fronts.notes, ...shelved.plans.filter((s) => !s.ok).map((s) => `Shelf ${s.panel} sags more than the limit; keep its span under ${Math.floor(s.maxSpan.value)} mm or stiffen it.`)];
+  const notes = [...fronts.notes, ...shelved.plans.filter((s) => !s.ok).map((s) => `Shelf ${s.panel} sags more than the limit; keep its span under ${words.length(Math.floor(s.maxSpan.value))} or stiffen it.`)];
   if (!box.balance.balanced) notes.unshift(`The sides are not balanced: ${box.balance.why}.`);
   return {
     ok: true,

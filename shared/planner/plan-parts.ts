@@ -1,4 +1,5 @@
 import type { Catalog } from '../catalog/fitting';
+import type { LengthWording } from '../checks/wording';
 import type { Material, Panel, PanelRole, Placement } from '../model/job-document';
 import type { CarcassBox } from './carcass-box';
 import type { CarcassPlanInput } from './carcass-plan-input';
@@ -19,13 +20,17 @@ export interface Opening {
   label: string;
 }
 
-/** What every step of the planner reads: the checked input, the box, the catalog and the opening its fronts cover. */
+/**
+ * What every step of the planner reads: the checked input, the box, the catalog, the opening its fronts
+ * cover, and how its reasons word lengths (the reader's unit, as the checks word their findings).
+ */
 export interface PlanContext {
   input: CarcassPlanInput;
   box: CarcassBox;
   catalog: Catalog;
   materials: ReadonlyMap<string, Material>;
   opening: Opening;
+  words: LengthWording;
 }
 
 /** The whole front of the carcass, top to bottom. */

@@ -1,4 +1,4 @@
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { holeHeights } from '../grid/system-grid';
 import type { Panel } from '../model/job-document';
 import type { SectionFrontInput, SectionsInput } from './carcass-plan-input';
@@ -79,9 +79,9 @@ export function planSections(ctx: PlanContext, fronts: SectionsInput): FrontsPla
       const target = from.value + section.height;
       const y = holes.reduce((a, b) => (Math.abs(b - target) < Math.abs(a - target) ? b : a), holes[0]);
       if (y === undefined || y <= from.value + box.thickness || y >= input.height - box.thickness) {
-        return { errors: [`fronts.sections[${i}].height: ${mm(section.height)} leaves no room for the sections above it`] };
+        return { errors: [`fronts.sections[${i}].height: ${ctx.words.length(section.height)} leaves no room for the sections above it`] };
       }
-      to = explain(y, `the system hole nearest ${mm(target)} (${mm(from.value)} + ${mm(section.height)}), the centre of dividing shelf ${i + 1}`);
+      to = explain(y, `the system hole nearest ${ctx.words.length(target)} (${ctx.words.length(from.value)} + ${ctx.words.length(section.height)}), the centre of dividing shelf ${i + 1}`);
       const divider = fixedShelf(ctx, y, `divider-${i + 1}`, `dividing shelf ${i + 1}`, to.why);
       plan.panels.push(divider.panel);
       plan.parts.left.push(...divider.side);

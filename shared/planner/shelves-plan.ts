@@ -1,4 +1,4 @@
-import { mm } from '../checks/wording';
+import type { LengthWording } from '../checks/wording';
 import { maxShelfSpan, shelfDeflection } from '../compute/shelf-sag';
 import { holeHeights } from '../grid/system-grid';
 import type { Panel, Placement } from '../model/job-document';
@@ -39,7 +39,7 @@ function sagOf(ctx: PlanContext, span: number, depth: number): Pick<ShelfPlan, '
   return {
     sag: explain(sag, `δ = 5wL⁴/(384EI) under 40 lb/ft² (1.9 kPa), ${board.name} E = ${board.modulus} N/mm²`),
     limit: explain(span / ratio, `span / ${ratio}`),
-    maxSpan: explain(longest, `the longest ${mm(thickness)} ${board.name} span within span / ${ratio}`),
+    maxSpan: explain(longest, `the longest ${ctx.words.length(thickness)} ${board.name} span within span / ${ratio}`),
     ok: sag <= span / ratio,
   };
 }
@@ -92,7 +92,7 @@ export function planShelves(
   const high = shelves.type === 'adjustable' ? (shelves.to ?? input.height - T - input.system.pitch) : input.height - T - input.system.pitch;
   const inRange = holeHeights(box.grid).filter((y) => y >= low && y <= high);
   const heights = inRange.filter(free);
-  if (heights.length < shelves.count) return { errors: [`shelves: ${shelves.count} shelves do not fit the free system holes between ${mm(low)} and ${mm(high)}`] };
+  if (heights.length < shelves.count) return { errors: [`shelves: ${shelves.count} shelves do not fit the free system holes between ${ctx.words.length(low)} and ${ctx.words.length(high)}`] };
   const parts = noPlacements();
   const panels: Panel[] = [];
   const plans: ShelfPlan[] = [];
@@ -114,7 +114,7 @@ export function planShelves(
       panel: panel.id,
       kind: shelves.type,
       y: explain(y, 'the pin height nearest an even spacing; it can be moved to any drilled height'),
-      span: explain(span, `${box.innerWidth.why}, less ${mm(shelves.play)} play at each end`),
+      span: explain(span, `${box.innerWidth.why}, less ${ctx.words.length(shelves.play)} play at each end`),
       depth: box.shelfDepth,
       ...sagOf(ctx, span, depth),
     });

@@ -2,6 +2,7 @@ import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { beforeEach, describe, expect, it } from 'vitest';
 import type { Panel } from '../../../shared/model/job-document';
+import type { LengthUnit } from '../../../shared/units/length-unit';
 import { makeJob, makePanel } from '../../../shared/testing/make-job';
 import { AuthStore } from '../auth/auth-store';
 import { selectionOf } from './document/selection';
@@ -12,14 +13,14 @@ const job = makeJob([makePanel('left', { placements: [{ id: 'plate-0-1', fitting
 
 const door = makeJob([makePanel('door', { role: 'door', width: 400, height: 700 })]);
 
-function setUp(editor = true, { archived = false, of = job } = {}) {
+function setUp(editor = true, { archived = false, of = job, units = signal<LengthUnit>('mm') } = {}) {
   const panel = signal<Panel | undefined>(of.panels[0]);
   const jobDetail = signal({ job: { archived } });
   TestBed.configureTestingModule({
     providers: [
       EditorStore,
       { provide: EditorSource, useValue: { panel, record: panel, job: signal(of), jobDetail } },
-      { provide: AuthStore, useValue: { can: () => editor, units: () => 'mm' } },
+      { provide: AuthStore, useValue: { can: () => editor, units } },
     ],
   });
   return TestBed.inject(EditorStore);
@@ -27,6 +28,17 @@ function setUp(editor = true, { archived = false, of = job } = {}) {
 
 describe('EditorStore', () => {
   beforeEach(() => TestBed.resetTestingModule());
+
+  it("starts the step at the member's usual one and takes the new unit's when the units change", () => {
+    const units = signal<LengthUnit>('mm');
+    const store = setUp(true, { units });
+    expect(store.step()).toBe(1);
+    // 1/16 in = 25.4 / 16 = 1.5875 mm (the international inch, 25.4 mm: NIST SP 811, published).
+    units.set('in-32');
+    expect(store.step()).toBe(1.5875);
+    store.step.set(3.175);
+    expect(store.step()).toBe(3.175);
+  });
 
   it('snaps a dragged plate from hole to hole and records the whole drag as one step', () => {
     const store = setUp();

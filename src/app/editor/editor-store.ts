@@ -3,6 +3,7 @@ import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
 import type { Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
+import { usualStep } from '../../../shared/units/step-choices';
 import { addPlacement } from './document/commands/add-placement';
 import { applyFindingFix } from './document/commands/apply-finding-fix';
 import { deleteItems } from './document/commands/delete-items';
@@ -51,7 +52,8 @@ export class EditorStore {
   /** Starts empty with every (re)loaded panel. */
   readonly selection = linkedSignal<Selection>(() => (this.source.record(), NO_SELECTION));
   readonly face = signal<Face>('A');
-  readonly step = signal(1);
+  /** Where fittings off the system rows land, in mm: the member's usual step (1 mm, 1/16"), again when the units change. */
+  readonly step = linkedSignal(() => usualStep(this.auth.units()));
   readonly checksOn = signal(checksWanted());
 
   readonly panel = computed(() => this.history()?.present);

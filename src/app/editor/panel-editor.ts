@@ -14,6 +14,7 @@ import { filter, fromEvent } from 'rxjs';
 import { PURPOSE_ORDER, PURPOSE_STYLES } from '../../../shared/export/palette';
 import { CatalogStore } from '../catalog/catalog-store';
 import { CautionList } from '../ui/caution-list';
+import { stepChoices } from '../../../shared/units/step-choices';
 import { Lengths } from '../ui/lengths';
 import { cautionsOfUnits } from '../ui/job-cautions';
 import { panelFrame } from './panel-frame';
@@ -74,7 +75,8 @@ export class PanelEditor implements LeavesSafely {
 
   protected readonly legend = PURPOSE_ORDER.map((purpose) => ({ purpose, ...PURPOSE_STYLES[purpose] }));
   protected readonly saveWords = SAVE_WORDS;
-  protected readonly steps = [0.1, 0.5, 1, 5, 10];
+  /** The Step menu in the member's units: round mm, or the marks of an inch rule (the system rows stay metric). */
+  protected readonly steps = computed(() => stepChoices(this.lengths.unit()).map((mm) => ({ mm, label: this.lengths.text(mm) })));
   protected readonly readout = computed(() => {
     const at = this.stage()?.cursor();
     return at ? `x ${this.lengths.text(at.x)}  y ${this.lengths.text(at.y)}` : '';

@@ -9,6 +9,7 @@ import { carcassPlanInput, type CarcassPlanInputData } from '../../../shared/pla
 import { planCarcass } from '../../../shared/planner/plan-carcass';
 import type { ChangedPanelChoice } from '../../../shared/planner/replan';
 import { CatalogStore } from '../catalog/catalog-store';
+import { Lengths } from '../ui/lengths';
 import { jobUrl } from '../jobs/jobs-api';
 
 /**
@@ -21,6 +22,8 @@ export class PlannerStore {
   private readonly http = inject(HttpClient);
   /** The shop's catalog, as the server plans with it: a shop's own hinge or lift mechanism can be chosen. */
   private readonly catalog = inject(CatalogStore).catalog;
+  /** The reasons the plan gives are worded in the member's units, as its figures are shown. */
+  private readonly unit = inject(Lengths).unit;
 
   private readonly route = inject(ActivatedRoute);
   readonly jobId = toSignal(this.route.paramMap.pipe(map((params) => Number(params.get('jobId')))), { initialValue: 0 });
@@ -43,7 +46,7 @@ export class PlannerStore {
     const input = this.description();
     const settings = this.settings();
     if (!input || !settings) return undefined;
-    return planCarcass({ ...input, materials: settings.materials, system: settings.system, limits: settings.limits }, this.catalog());
+    return planCarcass({ ...input, materials: settings.materials, system: settings.system, limits: settings.limits }, this.catalog(), { unit: this.unit() });
   });
   readonly plan = computed(() => {
     const result = this.result();

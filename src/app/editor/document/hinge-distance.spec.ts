@@ -36,4 +36,12 @@ describe('a hinge cup across the door', () => {
     expect(syncBoringDistances(synced, catalog)).toBe(synced);
     expect(hingeCupWhy(synced.placements[0], hinge)).toMatch(/^Cup centre 21 mm from the hinge edge/);
   });
+
+  it("says why in the member's units, the cup's diameter the bit's in mm", () => {
+    const cup = makeJob([makePanel('door', { role: 'door', placements: [{ id: 'h', fitting: 'hinge-full-overlay-45', x: 22, y: 100, face: 'A' }] })]).panels[0].placements[0];
+    // The international inch is 25.4 mm (NIST SP 811, published): 22 mm = 0.8661 in = 27.72/32 → 7/8; B 4.5 mm = 5.67/32 → 3/16;
+    // the hinge's 3 to 7 mm: 3.78/32 → 1/8 and 8.82/32 → 9/32.
+    expect(hingeCupWhy(cup, hinge, 'in-32')).toBe('Cup centre 7/8" from the hinge edge: cup-boring distance 3/16" plus half the Ø35 cup; this hinge takes 1/8" to 9/32".');
+    expect(hingeCupWhy(cup, hinge)).toBe('Cup centre 22 mm from the hinge edge: cup-boring distance 4.5 mm plus half the Ø35 cup; this hinge takes 3 to 7 mm.');
+  });
 });

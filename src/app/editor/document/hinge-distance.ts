@@ -1,6 +1,8 @@
 import type { Catalog, Fitting } from '../../../../shared/catalog/fitting';
 import { cupCentreFromEdge } from '../../../../shared/compute/hinge-geometry';
 import type { Panel, Placement } from '../../../../shared/model/job-document';
+import { formatLength } from '../../../../shared/units/format-length';
+import type { LengthUnit } from '../../../../shared/units/length-unit';
 import { roundMm } from './commands/move-items';
 
 type HingeFitting = Extract<Fitting, { purpose: 'hinge-cup' }>;
@@ -31,16 +33,19 @@ export function hingeCupX(x: number, placement: Pick<Placement, 'rotation'>, fit
   return { x: roundMm(b + half), why: hingeWhy(b, half, min, max) };
 }
 
-function hingeWhy(b: number, half: number, min: number, max: number): string {
-  return `Cup centre ${roundMm(b + half)} mm from the hinge edge: cup-boring distance ${roundMm(b)} mm plus half the Ø${roundMm(2 * half)} cup; this hinge takes ${min} to ${max} mm.`;
+/** The words, lengths in the member's unit; the cup's diameter is the bit's, in mm. */
+function hingeWhy(b: number, half: number, min: number, max: number, unit: LengthUnit = 'mm'): string {
+  const length = (mm: number) => (unit === 'mm' ? `${roundMm(mm)} mm` : formatLength(mm, unit));
+  const range = unit === 'mm' ? `${min} to ${max} mm` : `${length(min)} to ${length(max)}`;
+  return `Cup centre ${length(b + half)} from the hinge edge: cup-boring distance ${length(b)} plus half the Ø${roundMm(2 * half)} cup; this hinge takes ${range}.`;
 }
 
-/** The words for a hinge cup as it stands, or undefined for any other placement. */
-export function hingeCupWhy(placement: Placement, fitting: Fitting | undefined): string | undefined {
+/** The words for a hinge cup as it stands, in the member's unit, or undefined for any other placement. */
+export function hingeCupWhy(placement: Placement, fitting: Fitting | undefined, unit: LengthUnit = 'mm'): string | undefined {
   if (!measuresFromHingeEdge(placement, fitting)) return undefined;
   const { min, max } = fitting.hinge.boringDistance;
   const half = cupCentreFromEdge(0, cupDiameter(fitting));
-  return hingeWhy(placement.x - half, half, min, max);
+  return hingeWhy(placement.x - half, half, min, max, unit);
 }
 
 /**

@@ -34,10 +34,10 @@ export class PropertiesForm {
     const panel = this.store.panel();
     return panel ? placementFields(panel, this.fitting()) : [];
   });
-  /** Why a hinge cup stands where it does across the door. */
+  /** Why a hinge cup stands where it does across the door, in the member's units. */
   protected readonly why = computed(() => {
     const p = this.placement();
-    return p && hingeCupWhy(p, this.fitting());
+    return p && hingeCupWhy(p, this.fitting(), this.lengths.unit());
   });
   /** A selection of several things, counted in words. */
   protected readonly selectedWords = computed(() => {

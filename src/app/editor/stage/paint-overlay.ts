@@ -2,6 +2,8 @@ import Konva from 'konva';
 import type { Finding } from '../../../../shared/checks';
 import type { PanelLayout } from '../../../../shared/layout/panel-layout';
 import type { Box } from '../../../../shared/layout/bore';
+import { formatLength } from '../../../../shared/units/format-length';
+import type { LengthUnit } from '../../../../shared/units/length-unit';
 import type { Hit } from './hit-index';
 import { PLACEHOLDER_HALF } from './hit-index';
 import { ACCENT, LABEL_FONT, RING_COLORS } from './paint-style';
@@ -18,6 +20,8 @@ export interface OverlayScene {
   anchor?: Point;
   /** A box selection being drawn, in screen px. */
   band?: { a: Point; b: Point };
+  /** The member's unit, which the dimensions are written in. */
+  unit: LengthUnit;
 }
 
 function screenBox(view: View, box: Box): { x: number; y: number; width: number; height: number } {
@@ -26,23 +30,29 @@ function screenBox(view: View, box: Box): { x: number; y: number; width: number;
   return { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y) };
 }
 
-function label(text: string, x: number, y: number, color = ACCENT): Konva.Label {
-  const tag = new Konva.Label({ x, y });
+function label(text: string, x: number, y: number, color = ACCENT, name?: string): Konva.Label {
+  const tag = new Konva.Label({ x, y, name });
   tag.add(new Konva.Tag({ fill: '#FFFFFF', opacity: 0.9, cornerRadius: 3 }));
   tag.add(new Konva.Text({ text, fontSize: 12, fontFamily: LABEL_FONT, fill: color, padding: 3 }));
   return tag;
 }
 
+/** The dimensions' words in the member's unit: `x 23 mm`, `y 12 3/8"`. The document's numbers stay in mm. */
+export function dimensionTexts(anchor: Point, unit: LengthUnit): { x: string; y: string } {
+  return { x: `x ${formatLength(anchor.x, unit)}`, y: `y ${formatLength(anchor.y, unit)}` };
+}
+
 /** Ordinate dimensions of the selection: x from the reference edge, y from the lower edge. */
-function dimensions(layer: Konva.Layer, view: View, anchor: Point): void {
+function dimensions(layer: Konva.Layer, view: View, anchor: Point, unit: LengthUnit): void {
   const p = toScreen(view, anchor);
   const edge = toScreen(view, { x: 0, y: anchor.y });
   const floor = toScreen(view, { x: anchor.x, y: 0 });
   const arrow = { stroke: ACCENT, fill: ACCENT, strokeWidth: 1, pointerLength: 6, pointerWidth: 5, pointerAtBeginning: true };
   layer.add(new Konva.Arrow({ points: [edge.x, p.y, p.x, p.y], ...arrow }));
   layer.add(new Konva.Arrow({ points: [p.x, floor.y, p.x, p.y], ...arrow }));
-  layer.add(label(`x ${anchor.x}`, (edge.x + p.x) / 2 - 18, p.y - 22));
-  layer.add(label(`y ${anchor.y}`, p.x + 6, (floor.y + p.y) / 2 - 9));
+  const words = dimensionTexts(anchor, unit);
+  layer.add(label(words.x, (edge.x + p.x) / 2 - 18, p.y - 22, ACCENT, 'dimension-x'));
+  layer.add(label(words.y, p.x + 6, (floor.y + p.y) / 2 - 9, ACCENT, 'dimension-y'));
 }
 
 /** Rings around every bore a finding concerns, and around a missing fitting's placeholder. */
@@ -83,7 +93,7 @@ export function paintOverlay(layer: Konva.Layer, scene: OverlayScene): void {
   findingRings(layer, scene);
   for (const hit of scene.selected)
     layer.add(new Konva.Rect({ ...screenBox(scene.view, hit.box), stroke: ACCENT, strokeWidth: 1.5, dash: [6, 3], cornerRadius: 2 }));
-  if (scene.anchor) dimensions(layer, scene.view, scene.anchor);
+  if (scene.anchor) dimensions(layer, scene.view, scene.anchor, scene.unit);
   if (scene.band) {
     const { a, b } = scene.band;
     layer.add(new Konva.Rect({ x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y), stroke: ACCENT, strokeWidth: 1, fill: 'rgba(14,107,102,0.08)' }));

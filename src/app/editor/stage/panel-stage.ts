@@ -3,6 +3,7 @@ import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
 import { fromEvent, map } from 'rxjs';
 import type { Box } from '../../../../shared/layout/bore';
+import { Lengths } from '../../ui/lengths';
 import { EditorStore } from '../editor-store';
 import { panelFrame } from '../panel-frame';
 import { HitIndex, hitItems } from './hit-index';
@@ -50,6 +51,7 @@ export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
 })
 export class PanelStage {
   private readonly store = inject(EditorStore);
+  private readonly unit = inject(Lengths).unit;
   private readonly host: HTMLElement = inject(ElementRef).nativeElement;
   private readonly canvasHost = viewChild.required<ElementRef<HTMLDivElement>>('canvas');
 
@@ -224,7 +226,7 @@ export class PanelStage {
       const layout = this.store.layout();
       const view = this.viewState();
       if (!konva || !layout || !view) return;
-      paintOverlay(konva.overlay, { view, layout, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band() });
+      paintOverlay(konva.overlay, { view, layout, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band(), unit: this.unit() });
       konva.overlay.batchDraw();
     });
   }
