@@ -3,7 +3,8 @@
  * bores and a perforated panel of 5,000, with live checks and, as the baseline in the same run, without
  * them (`?checks=off`). Starts the server as the browser tests do (E2E_SKIP_BUILD=1 reuses the last
  * build), or uses BENCH_URL with the demo accounts. BENCH_PROFILE=1 adds a CPU profile of one drag with
- * checks on per panel and prints where its time went, by function.
+ * checks on per panel and prints where its time went, by function; with BENCH_SCREENSHOT=1 too, a
+ * screenshot of each panel after that drag (tests/e2e/screenshots/editor-bench-*.png).
  *
  *   npm run bench:editor
  */
@@ -100,6 +101,25 @@ function topFunctions(profile: { nodes: ProfileNode[]; samples: number[]; timeDe
     .map(([key, t]) => `${((100 * t) / total).toFixed(1).padStart(5)} %  ${(t / 1000).toFixed(0).padStart(5)} ms  ${key}`);
 }
 
+/**
+ * Where the plate is on screen, found by clicking it until the properties name it: the stage may still
+ * settle its size after it first shows its zoom, and on the perforated panel (18 %) the plate is a few
+ * pixels across.
+ */
+async function pickPlate(page: Page, bench: BenchPanel): Promise<{ start: { x: number; y: number }; view: ReturnType<typeof fitView> }> {
+  for (let attempt = 0; attempt < 20; attempt++) {
+    const box = await page.locator('bw-panel-stage').boundingBox();
+    if (!box) throw new Error('no stage');
+    const view = fitView(bench.size, box, false);
+    const at = toScreen(view, PLATE);
+    const start = { x: box.x + at.x, y: box.y + at.y };
+    await page.mouse.click(start.x, start.y);
+    if ((await page.locator('bw-properties-form .what strong', { hasText: 'plate' }).count()) > 0) return { start, view };
+    await page.waitForTimeout(500);
+  }
+  throw new Error('the plate could not be picked on the stage');
+}
+
 /** Drags the plate up and down the row, MOVES pointer moves, and returns the frame intervals seen meanwhile. */
 async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = false): Promise<DragRun> {
   await page.goto(url);
@@ -107,11 +127,7 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
   await page.locator('bw-placement-list').waitFor({ state: 'attached' });
   // The stage has its view (it shows the zoom) only once it has measured itself: a press before that picks nothing.
   await page.locator('.zoom', { hasText: '%' }).waitFor();
-  const box = await page.locator('bw-panel-stage').boundingBox();
-  if (!box) throw new Error('no stage');
-  const view = fitView(bench.size, box, false);
-  const at = toScreen(view, PLATE);
-  const start = { x: box.x + at.x, y: box.y + at.y };
+  const { start, view } = await pickPlate(page, bench);
   // As source text: tsx would wrap a function's inner functions in a helper the page does not have.
   await page.evaluate(`(() => {
     window.benchFrames = [];
@@ -153,7 +169,8 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
   // The list shows the drop once the page has caught up with the moves (later on a busy machine than the release).
   const plate = page.locator('bw-placement-list .placement').first();
   await plate.filter({ hasNotText: `y ${PLATE.y},` }).waitFor({ state: 'attached', timeout: 60_000 }).catch(async () => {
-    throw new Error(`the drag did not move the plate: ${await plate.textContent()}`);
+    await screenshot(page, `editor-bench-${bench.columns * bench.rows}-not-moved`);
+    throw new Error(`the drag did not move the plate (see the screenshot editor-bench-${bench.columns * bench.rows}-not-moved): ${await plate.textContent()}`);
   });
   if (profile && process.env['BENCH_SCREENSHOT']) await screenshot(page, `editor-bench-${bench.columns * bench.rows}`);
   await page.keyboard.press('Control+z');

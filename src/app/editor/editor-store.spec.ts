@@ -67,6 +67,18 @@ describe('EditorStore', () => {
     expect(store.canUndo()).toBe(false);
   });
 
+  it('leaves the panel as it was for a move that stays within one snap, and moves it at the next hole', () => {
+    const store = setUp();
+    store.select(selectionOf(['plate-0-1']));
+    store.startDrag();
+    store.dragTo('plate-0-1', { x: 0, y: 20 }, false);
+    const first = store.panel();
+    store.dragTo('plate-0-1', { x: 1, y: 24 }, false);
+    expect(store.panel()).toBe(first);
+    store.dragTo('plate-0-1', { x: 0, y: 52 }, false);
+    expect(store.panel()?.placements[0]).toMatchObject({ x: 37, y: 185 });
+  });
+
   it('goes back to where a drag began on Escape', () => {
     const store = setUp();
     store.select(selectionOf(['plate-0-1']));

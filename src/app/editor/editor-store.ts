@@ -1,6 +1,6 @@
 import { computed, effect, inject, Injectable, linkedSignal, signal } from '@angular/core';
 import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
-import type { Fix } from '../../../shared/checks/finding';
+import { findingKey, type Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
 import { addPlacement } from './document/commands/add-placement';
@@ -30,6 +30,14 @@ export interface Point {
 /** Live checks can be switched off with `?checks=off`, for the frame-time bench's baseline. */
 function checksWanted(): boolean {
   return typeof location === 'undefined' || new URLSearchParams(location.search).get('checks') !== 'off';
+}
+
+/**
+ * Whether two lists of findings say the same, so that a check giving what was already shown (most moves of
+ * a drag, and every answer of the worker, a copy) repaints no ring and renders no list.
+ */
+function sameFindings(a: readonly Finding[], b: readonly Finding[]): boolean {
+  return a.length === b.length && a.every((f, i) => f.severity === b[i].severity && f.message === b[i].message && f.advice === b[i].advice && findingKey(f) === findingKey(b[i]));
 }
 
 /**
@@ -97,6 +105,8 @@ export class EditorStore {
     // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor).
     return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() }) : [];
   });
+  /** How far the drag under way last moved the selection from where it began. */
+  private dragOffset: { dx: number; dy: number } | undefined;
   /** The number of the first request of the drag under way: answers before it are of an earlier drag. */
   private readonly dragAskedFrom = signal(0);
   /** During a drag with the checks in a worker: its newest answer for this drag, if one has come. */
@@ -109,7 +119,7 @@ export class EditorStore {
    * answer is shown (until the first comes, the findings the drag began with); on the drop, the panel is
    * checked here again, so what stays on screen is always the full check of the panel as it is.
    */
-  readonly findings = computed(() => (this.checksOn() ? (this.dragAnswer()?.findings ?? this.restingFindings()) : []));
+  readonly findings = computed(() => (this.checksOn() ? (this.dragAnswer()?.findings ?? this.restingFindings()) : []), { equal: sameFindings });
   /** The findings shown are of an earlier position of the drag: the worker has not answered for the latest. */
   readonly findingsPending = computed(() => {
     const asked = this.live.asked();
@@ -243,6 +253,7 @@ export class EditorStore {
   startDrag(): void {
     if (!this.editable()) return;
     this.dragAskedFrom.set(this.live.asked());
+    this.dragOffset = undefined;
     this.history.update((h) => h && history.setMark(h));
   }
 
@@ -260,7 +271,12 @@ export class EditorStore {
     const fitting = lead && this.catalog().get(lead.fitting);
     const snapped = snapPlacement(wanted, start, fitting, { grid, step: this.step(), free: free || !lead });
     const spot = free || !lead ? snapped : { ...snapped, x: hingeCupX(snapped.x, lead, fitting).x };
-    const next = moveItems(h.mark, { selection: this.selection(), dx: spot.x - start.x, dy: spot.y - start.y });
+    const offset = { dx: spot.x - start.x, dy: spot.y - start.y };
+    // Most moves of a pointer stay within one snap: the panel is then as it was, and nothing is laid out,
+    // checked or drawn again.
+    if (h.present !== h.mark && this.dragOffset?.dx === offset.dx && this.dragOffset.dy === offset.dy) return;
+    this.dragOffset = offset;
+    const next = moveItems(h.mark, { selection: this.selection(), ...offset });
     this.history.set(history.preview(h, syncBoringDistances(next, this.catalog())));
   }
 
