@@ -43,8 +43,23 @@ export function layoutPanel(panel: Panel, catalog: Catalog, system: SystemSettin
     for (const [a, b] of fitting.joins) joined.add(pairKey(expandedBoreId(placement.id, a), expandedBoreId(placement.id, b)));
     placed.push({ placement, fitting, bores, keepOuts: placeKeepOuts(placement, fitting) });
   }
-  const loose = panel.bores.map((b) => looseBore(b, panel.thickness));
-  return { bores: loose.concat(...placed.map((p) => p.bores)), placed, unknown, joined };
+  return { bores: looseBores(panel).concat(...placed.map((p) => p.bores)), placed, unknown, joined };
+}
+
+/** The loose bores laid out, by the panel's bore list they came from (documents are immutable, so one list lays out one way per thickness). */
+const laidOut = new WeakMap<Panel['bores'], { thickness: number; bores: PanelBore[] }>();
+
+/**
+ * The panel's own bores as the layout lists them, laid out once for each list of bores: a drag moves
+ * placements and keeps the list, so that a panel of thousands of holes does not lay them all out again
+ * on every move. The bores given out are never changed by those who read them.
+ */
+function looseBores(panel: Panel): PanelBore[] {
+  const known = laidOut.get(panel.bores);
+  if (known && known.thickness === panel.thickness) return known.bores;
+  const bores = panel.bores.map((b) => looseBore(b, panel.thickness));
+  laidOut.set(panel.bores, { thickness: panel.thickness, bores });
+  return bores;
 }
 
 /** A panel's full bore list: loose bores and expanded placements. */

@@ -1,6 +1,10 @@
 import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { beforeEach, describe, expect, it } from 'vitest';
+import { checkPanel } from '../../../shared/checks';
+import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
+import type { Catalog } from '../../../shared/catalog/fitting';
+import type { JobDocument } from '../../../shared/model/job-document';
 import type { Panel } from '../../../shared/model/job-document';
 import type { LengthUnit } from '../../../shared/units/length-unit';
 import { makeJob, makePanel } from '../../../shared/testing/make-job';
@@ -8,17 +12,36 @@ import { AuthStore } from '../auth/auth-store';
 import { selectionOf } from './document/selection';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
+import { LiveChecks } from './live-checks';
 
 const job = makeJob([makePanel('left', { placements: [{ id: 'plate-0-1', fitting: 'plate-0', x: 37, y: 121, face: 'A' }] })]);
 
 const door = makeJob([makePanel('door', { role: 'door', width: 400, height: 700 })]);
 
-function setUp(editor = true, { archived = false, of = job, units = signal<LengthUnit>('mm') } = {}) {
+/** Three mounting plates on one spot: one dragged away leaves two that still share their holes. */
+const stacked = makeJob([makePanel('left', { placements: ['a', 'b', 'c'].map((id) => ({ id, fitting: 'plate-0', x: 37, y: 121, face: 'A' as const })) })]);
+
+/** A worker that answers only when told, with whatever it is told: the store must show it only while a drag lasts. */
+class HeldLiveChecks {
+  readonly asked = signal(0);
+  readonly answer = signal<{ seq: number; findings: ReturnType<typeof checkPanel> } | undefined>(undefined);
+  readonly panels: Panel[] = [];
+  working(): boolean {
+    return true;
+  }
+  ask(_job: JobDocument, panel: Panel, _catalog: Catalog): void {
+    this.panels.push(panel);
+    this.asked.update((n) => n + 1);
+  }
+}
+
+function setUp(editor = true, { archived = false, of = job, units = signal<LengthUnit>('mm'), live = undefined as HeldLiveChecks | undefined } = {}) {
   const panel = signal<Panel | undefined>(of.panels[0]);
   const jobDetail = signal({ job: { archived } });
   TestBed.configureTestingModule({
     providers: [
       EditorStore,
+      live ? { provide: LiveChecks, useValue: live } : LiveChecks,
       { provide: EditorSource, useValue: { panel, record: panel, job: signal(of), jobDetail } },
       { provide: AuthStore, useValue: { can: () => editor, units } },
     ],
@@ -54,6 +77,18 @@ describe('EditorStore', () => {
     store.undo();
     expect(store.panel()?.placements[0]).toMatchObject({ x: 37, y: 121 });
     expect(store.canUndo()).toBe(false);
+  });
+
+  it('leaves the panel as it was for a move that stays within one snap, and moves it at the next hole', () => {
+    const store = setUp();
+    store.select(selectionOf(['plate-0-1']));
+    store.startDrag();
+    store.dragTo('plate-0-1', { x: 0, y: 20 }, false);
+    const first = store.panel();
+    store.dragTo('plate-0-1', { x: 1, y: 24 }, false);
+    expect(store.panel()).toBe(first);
+    store.dragTo('plate-0-1', { x: 0, y: 52 }, false);
+    expect(store.panel()?.placements[0]).toMatchObject({ x: 37, y: 185 });
   });
 
   it('goes back to where a drag began on Escape', () => {
@@ -120,5 +155,46 @@ describe('EditorStore', () => {
     expect(store.hasSelection()).toBe(false);
     store.redo();
     expect(store.hasSelection()).toBe(false);
+  });
+
+  it('shows the worker\'s answer during a drag, marked pending until it answers the latest move, and the full check after the drop', () => {
+    const live = new HeldLiveChecks();
+    const store = setUp(true, { of: stacked, live });
+    const full = () => checkPanel(stacked, store.panel()!, builtinCatalog(), { fixes: false, unit: 'mm' });
+    const atRest = store.findings();
+    expect(atRest).toEqual(full());
+    store.select(selectionOf(['c']));
+    store.startDrag();
+    store.dragTo('c', { x: 0, y: 384 }, false);
+    TestBed.tick();
+    expect(live.panels.at(-1)?.placements.find((p) => p.id === 'c')?.y).toBe(505);
+    expect(store.findingsPending()).toBe(true);
+    expect(store.findings(), 'until the worker answers, the findings the drag began with').toBe(atRest);
+    live.answer.set({ seq: live.asked(), findings: [] });
+    expect(store.findingsPending()).toBe(false);
+    expect(store.findings()).toEqual([]);
+    store.dragTo('c', { x: 0, y: 416 }, false);
+    TestBed.tick();
+    expect(store.findingsPending()).toBe(true);
+    store.endDrag();
+    // After the drop, whatever the worker said: the full check of the panel as dropped, with the two plates
+    // left behind still sharing their holes.
+    expect(store.findingsPending()).toBe(false);
+    expect(store.findings()).toEqual(full());
+    expect(store.findings().some((f) => f.code === 'hole-shared' && f.placements.every((id) => id === 'a' || id === 'b'))).toBe(true);
+  });
+
+  it('drops an answer of an earlier drag', () => {
+    const live = new HeldLiveChecks();
+    const store = setUp(true, { of: stacked, live });
+    store.select(selectionOf(['c']));
+    store.startDrag();
+    store.dragTo('c', { x: 0, y: 384 }, false);
+    TestBed.tick();
+    store.endDrag();
+    const dropped = store.findings();
+    store.startDrag();
+    live.answer.set({ seq: live.asked(), findings: [] });
+    expect(store.findings()).toBe(dropped);
   });
 });

@@ -1,6 +1,6 @@
-import { computed, inject, Injectable, linkedSignal, signal } from '@angular/core';
+import { computed, effect, inject, Injectable, linkedSignal, signal } from '@angular/core';
 import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
-import type { Fix } from '../../../shared/checks/finding';
+import { findingKey, type Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
 import type { Face, JobDocument, Panel } from '../../../shared/model/job-document';
 import { usualStep } from '../../../shared/units/step-choices';
@@ -20,6 +20,7 @@ import { panelGrid, snapPlacement } from './document/snap-placement';
 import { AuthStore } from '../auth/auth-store';
 import { CatalogStore } from '../catalog/catalog-store';
 import { EditorSource } from './editor-source';
+import { LiveChecks } from './live-checks';
 
 type Command<P> = (panel: Panel, params: P) => Panel;
 export interface Point {
@@ -33,6 +34,14 @@ function checksWanted(): boolean {
 }
 
 /**
+ * Whether two lists of findings say the same, so that a check giving what was already shown (most moves of
+ * a drag, and every answer of the worker, a copy) repaints no ring and renders no list.
+ */
+function sameFindings(a: readonly Finding[], b: readonly Finding[]): boolean {
+  return a.length === b.length && a.every((f, i) => f.severity === b[i].severity && f.message === b[i].message && f.advice === b[i].advice && findingKey(f) === findingKey(b[i]));
+}
+
+/**
  * The panel being edited: its history of drilling (each edit a command, a drag one step), what is
  * selected, and what the shared layout and checks make of it on every change.
  */
@@ -40,6 +49,7 @@ function checksWanted(): boolean {
 export class EditorStore {
   private readonly source = inject(EditorSource);
   private readonly auth = inject(AuthStore);
+  private readonly live = inject(LiveChecks);
   /** The shop's catalog (built-in fittings and the shop's own); the built-in one until it has loaded. */
   readonly catalog = inject(CatalogStore).catalog;
 
@@ -85,17 +95,53 @@ export class EditorStore {
     },
     { equal: (a, b) => JSON.stringify(a) === JSON.stringify(b) },
   );
-  readonly findings = computed(() => {
-    const job = this.job();
-    const panel = this.panel();
+  /** The panel outside a drag; while one lasts, the panel as it was when the drag began. */
+  private readonly restingPanel = computed(() => {
+    const h = this.history();
+    return h && (h.mark ?? h.present);
+  });
+  /** The full check of the resting panel, on the main thread: what every edit but a drag's moves shows. */
+  private readonly restingFindings = computed(() => {
+    const job = this.source.job();
+    const panel = this.restingPanel();
     // Live checks only report; the fixes of a finding are tried when the user opens it (fixesFor).
     return job && panel && this.checksOn() ? checkPanel(job, panel, this.catalog(), { fixes: false, unit: this.auth.units() }) : [];
+  });
+  /** How far the drag under way last moved the selection from where it began. */
+  private dragOffset: { dx: number; dy: number } | undefined;
+  /** The number of the first request of the drag under way: answers before it are of an earlier drag. */
+  private readonly dragAskedFrom = signal(0);
+  /** During a drag with the checks in a worker: its newest answer for this drag, if one has come. */
+  private readonly dragAnswer = computed(() => {
+    const answer = this.live.answer();
+    return this.dragging() && this.live.working() && answer && answer.seq > this.dragAskedFrom() ? answer : undefined;
+  });
+  /**
+   * The full check's findings. During a drag the worker checks the moved panel once a frame and the newest
+   * answer is shown (until the first comes, the findings the drag began with); on the drop, the panel is
+   * checked here again, so what stays on screen is always the full check of the panel as it is.
+   */
+  readonly findings = computed(() => (this.checksOn() ? (this.dragAnswer()?.findings ?? this.restingFindings()) : []), { equal: sameFindings });
+  /** The findings shown are of an earlier position of the drag: the worker has not answered for the latest. */
+  readonly findingsPending = computed(() => {
+    const asked = this.live.asked();
+    return this.checksOn() && this.dragging() && this.live.working() && asked > this.dragAskedFrom() && this.dragAnswer()?.seq !== asked;
   });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
   readonly selectedPlacements = computed(() => {
     const ids = this.selection().placements;
     return this.panel()?.placements.filter((p) => ids.has(p.id)) ?? [];
   });
+
+  constructor() {
+    // Effects run once a frame at most, so a burst of pointer moves asks the worker once, for where it ended.
+    effect(() => {
+      const job = this.source.job();
+      const panel = this.panel();
+      if (job && panel && this.checksOn() && this.dragging() && panel !== this.restingPanel() && this.live.working())
+        this.live.ask(job, panel, this.catalog(), this.auth.units());
+    });
+  }
 
   select(selection: Selection): void {
     this.selection.set(selection);
@@ -208,6 +254,8 @@ export class EditorStore {
   /** A drag begins: the history remembers where. */
   startDrag(): void {
     if (!this.editable()) return;
+    this.dragAskedFrom.set(this.live.asked());
+    this.dragOffset = undefined;
     this.history.update((h) => h && history.setMark(h));
   }
 
@@ -225,7 +273,12 @@ export class EditorStore {
     const fitting = lead && this.catalog().get(lead.fitting);
     const snapped = snapPlacement(wanted, start, fitting, { grid, step: this.step(), free: free || !lead });
     const spot = free || !lead ? snapped : { ...snapped, x: hingeCupX(snapped.x, lead, fitting).x };
-    const next = moveItems(h.mark, { selection: this.selection(), dx: spot.x - start.x, dy: spot.y - start.y });
+    const offset = { dx: spot.x - start.x, dy: spot.y - start.y };
+    // Most moves of a pointer stay within one snap: the panel is then as it was, and nothing is laid out,
+    // checked or drawn again.
+    if (h.present !== h.mark && this.dragOffset?.dx === offset.dx && this.dragOffset.dy === offset.dy) return;
+    this.dragOffset = offset;
+    const next = moveItems(h.mark, { selection: this.selection(), ...offset });
     this.history.set(history.preview(h, syncBoringDistances(next, this.catalog())));
   }
 

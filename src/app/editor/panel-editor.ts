@@ -28,6 +28,7 @@ import { PanelSaver } from './panel-saver';
 import { RepeatDialog } from './repeat-dialog';
 import { PanelDownloads } from '../packs/panel-downloads';
 import { CatalogList } from './side/catalog-list';
+import { LiveChecks } from './live-checks';
 import { FindingsList } from './side/findings-list';
 import { PlacementList } from './side/placement-list';
 import { PropertiesForm } from './side/properties-form';
@@ -59,7 +60,7 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
     RouterLink,
     ShortcutList,
   ],
-  providers: [EditorSource, EditorStore, PanelSaver],
+  providers: [EditorSource, EditorStore, LiveChecks, PanelSaver],
   templateUrl: './panel-editor.html',
   styleUrl: './panel-editor.scss',
   host: { '(keydown)': 'handleKey($event)', '(window:beforeunload)': 'warnBeforeUnload($event)' },
@@ -114,9 +115,14 @@ export class PanelEditor implements LeavesSafely {
       )
       .subscribe(() => catalog.reload());
     const title = inject(Title);
+    // From a computed text, so that the title is written when it changes, not on every move of a drag.
+    const pageTitle = computed(() => {
+      const name = this.store.panel()?.name;
+      return name === undefined ? undefined : `${name} · ${this.store.editable() ? 'Panel editor' : 'Panel'} · Borewright`;
+    });
     effect(() => {
-      const panel = this.store.panel();
-      if (panel) title.setTitle(`${panel.name} · ${this.store.editable() ? 'Panel editor' : 'Panel'} · Borewright`);
+      const text = pageTitle();
+      if (text !== undefined) title.setTitle(text);
     });
     this.showFocusOnOpen();
   }

@@ -12,6 +12,7 @@ import { selectionOf } from './document/selection';
 import { EditorApi } from './editor-api';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
+import { LiveChecks } from './live-checks';
 import { AUTOSAVE_MS, PanelSaver } from './panel-saver';
 
 // A shelf pin on the front row of an 18 mm side (system holes at 9 + 32k): no finding until the test makes one.
@@ -26,6 +27,7 @@ function setUp(confirm: boolean) {
   TestBed.configureTestingModule({
     providers: [
       EditorStore,
+      LiveChecks,
       PanelSaver,
       { provide: EditorSource, useValue: { panel, record, job: signal(job), jobDetail: signal(undefined), reload } },
       { provide: AuthStore, useValue: { can: () => true, units: () => 'mm' } },

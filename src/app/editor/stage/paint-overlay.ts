@@ -22,6 +22,8 @@ export interface OverlayScene {
   band?: { a: Point; b: Point };
   /** The member's unit, which the dimensions are written in. */
   unit: LengthUnit;
+  /** The panel's own bores: the layout's first ones, drawn from them, so unchanged while this is. */
+  loose: readonly unknown[];
 }
 
 function screenBox(view: View, box: Box): { x: number; y: number; width: number; height: number } {
@@ -43,7 +45,7 @@ export function dimensionTexts(anchor: Point, unit: LengthUnit): { x: string; y:
 }
 
 /** Ordinate dimensions of the selection: x from the reference edge, y from the lower edge. */
-function dimensions(layer: Konva.Layer, view: View, anchor: Point, unit: LengthUnit): void {
+function dimensions(layer: Konva.Container, view: View, anchor: Point, unit: LengthUnit): void {
   const p = toScreen(view, anchor);
   const edge = toScreen(view, { x: 0, y: anchor.y });
   const floor = toScreen(view, { x: anchor.x, y: 0 });
@@ -56,7 +58,7 @@ function dimensions(layer: Konva.Layer, view: View, anchor: Point, unit: LengthU
 }
 
 /** Rings around every bore a finding concerns, and around a missing fitting's placeholder. */
-function findingRings(layer: Konva.Layer, scene: OverlayScene): void {
+function findingRings(layer: Konva.Container, scene: OverlayScene): void {
   const { view, layout } = scene;
   // Only the bores the findings name, found in one pass: a map of every bore would cost each move of a drag.
   const named = new Set(scene.findings.flatMap((f) => f.bores));
@@ -87,15 +89,62 @@ function findingRings(layer: Konva.Layer, scene: OverlayScene): void {
   }
 }
 
-/** The selection, its dimensions, the finding rings and a box selection band, in screen space. */
-export function paintOverlay(layer: Konva.Layer, scene: OverlayScene): void {
-  layer.destroyChildren();
-  findingRings(layer, scene);
-  for (const hit of scene.selected)
-    layer.add(new Konva.Rect({ ...screenBox(scene.view, hit.box), stroke: ACCENT, strokeWidth: 1.5, dash: [6, 3], cornerRadius: 2 }));
-  if (scene.anchor) dimensions(layer, scene.view, scene.anchor, scene.unit);
-  if (scene.band) {
-    const { a, b } = scene.band;
-    layer.add(new Konva.Rect({ x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y), stroke: ACCENT, strokeWidth: 1, fill: 'rgba(14,107,102,0.08)' }));
+/**
+ * Where the rings stand: the findings, the view, and the places of what they ring that may move. The
+ * panel's own bores move only with the panel's bores; of the placements' bores, keep-outs and placeholders,
+ * only those the findings name are read, so that a drag on a panel of thousands of holes does not walk them.
+ */
+interface RingsFrom {
+  findings: readonly Finding[];
+  view: View;
+  loose: readonly unknown[];
+  /** The named fitted bores', keep-outs' and placeholders' places. */
+  places: string;
+}
+
+function ringedPlaces(scene: OverlayScene): string {
+  const bores = new Set(scene.findings.flatMap((f) => f.bores));
+  const placements = new Set(scene.findings.flatMap((f) => (f.bores.length === 0 ? f.placements : [])));
+  const unknown = new Set(scene.findings.flatMap((f) => f.placements));
+  const places: (number | string)[] = [];
+  for (const placed of scene.layout.placed) {
+    for (const b of placed.bores) if (bores.has(b.id) && b.kind === 'face') places.push(b.id, b.x, b.y, b.diameter);
+    if (placements.has(placed.placement.id)) for (const k of placed.keepOuts) places.push(placed.placement.id, ...k.box);
+  }
+  for (const p of scene.layout.unknown) if (unknown.has(p.id)) places.push(p.id, p.x, p.y);
+  return places.join(' ');
+}
+
+/**
+ * The overlay in screen space: the finding rings, drawn again only when the findings, the view or the place
+ * of something ringed changed (a drag moves the selection on every frame, rarely a ring), and the
+ * selection, its dimensions and a box selection band, drawn on every paint.
+ */
+export class OverlayPainter {
+  private readonly rings = new Konva.Group();
+  private readonly marks = new Konva.Group();
+  private ringsFrom: RingsFrom | undefined;
+
+  constructor(layer: Konva.Layer) {
+    layer.add(this.rings, this.marks);
+  }
+
+  paint(scene: OverlayScene): void {
+    const from = this.ringsFrom;
+    const kept = from !== undefined && from.findings === scene.findings && from.view === scene.view && from.loose === scene.loose;
+    const places = ringedPlaces(scene);
+    if (!kept || from.places !== places) {
+      this.rings.destroyChildren();
+      findingRings(this.rings, scene);
+      this.ringsFrom = { findings: scene.findings, view: scene.view, loose: scene.loose, places };
+    }
+    this.marks.destroyChildren();
+    for (const hit of scene.selected)
+      this.marks.add(new Konva.Rect({ ...screenBox(scene.view, hit.box), stroke: ACCENT, strokeWidth: 1.5, dash: [6, 3], cornerRadius: 2 }));
+    if (scene.anchor) dimensions(this.marks, scene.view, scene.anchor, scene.unit);
+    if (scene.band) {
+      const { a, b } = scene.band;
+      this.marks.add(new Konva.Rect({ x: Math.min(a.x, b.x), y: Math.min(a.y, b.y), width: Math.abs(b.x - a.x), height: Math.abs(b.y - a.y), stroke: ACCENT, strokeWidth: 1, fill: 'rgba(14,107,102,0.08)' }));
+    }
   }
 }

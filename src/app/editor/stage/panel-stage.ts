@@ -9,7 +9,7 @@ import { panelFrame } from '../panel-frame';
 import { HitIndex, hitItems } from './hit-index';
 import { BorePainter } from './paint-bores';
 import { paintGrid } from './paint-grid';
-import { paintOverlay } from './paint-overlay';
+import { OverlayPainter } from './paint-overlay';
 import { localPoint, pointerTool } from './pointer-tool';
 import { fitView, toPanel, viewOfBox, zoomAt, type Point, type View } from './view';
 
@@ -67,7 +67,7 @@ export class PanelStage {
   });
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
-  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; drag: Konva.Layer; overlay: Konva.Layer; painter: BorePainter } | undefined>(undefined);
+  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; drag: Konva.Layer; overlay: Konva.Layer; painter: BorePainter; overlayPainter: OverlayPainter } | undefined>(undefined);
   private readonly items = computed(() => {
     const panel = this.store.panel();
     const layout = this.store.layout();
@@ -124,7 +124,7 @@ export class PanelStage {
         resize.disconnect();
         stage.destroy();
       });
-      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.drag) });
+      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.drag), overlayPainter: new OverlayPainter(layers.overlay) });
     });
     pointerTool(this.host, {
       store: this.store,
@@ -224,9 +224,10 @@ export class PanelStage {
     effect(() => {
       const konva = this.konva();
       const layout = this.store.layout();
+      const loose = this.store.panel()?.bores;
       const view = this.viewState();
-      if (!konva || !layout || !view) return;
-      paintOverlay(konva.overlay, { view, layout, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band(), unit: this.unit() });
+      if (!konva || !layout || !loose || !view) return;
+      konva.overlayPainter.paint({ view, layout, loose, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band(), unit: this.unit() });
       konva.overlay.batchDraw();
     });
   }
