@@ -1,4 +1,4 @@
-import { and, ne, sql } from 'drizzle-orm';
+import { and, eq, gt, ne, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { sessions } from '../db/schema';
 
@@ -14,4 +14,13 @@ export async function deleteSessionsOf(db: Database, userId: number, keep?: stri
     .where(keep === undefined ? ofUser : and(ofUser, ne(sessions.sid, keep)))
     .returning({ sid: sessions.sid });
   return rows.length;
+}
+
+/** Whether the session `sid` is still stored, unexpired and signed in as this member (a long-lived stream asks). */
+export async function sessionSignedInAs(db: Database, sid: string, userId: number): Promise<boolean> {
+  const rows = await db
+    .select({ sid: sessions.sid })
+    .from(sessions)
+    .where(and(eq(sessions.sid, sid), gt(sessions.expire, new Date()), sql`(${sessions.sess} #>> '{passport,user}') = ${String(userId)}`));
+  return rows.length > 0;
 }

@@ -124,7 +124,7 @@ describe('API fuzz', () => {
       id: ['1'],
       index: ['0', '1'],
     });
-    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer });
+    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
     routes = router.stack.flatMap((layer) =>
       layer.route ? [...new Set(layer.route.stack.map((h) => h.method.toUpperCase()))].map((method) => ({ method, path: `/api${layer.route!.path}` })) : [],
     );
