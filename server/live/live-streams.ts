@@ -51,11 +51,11 @@ export class LiveStreams {
       }).catch((err: unknown) => req.log.warn({ err }, 'reading job events failed'));
     };
 
+    // Listening first: when it cannot start, the request still answers with an error of its own.
+    const unsubscribe = await this.jobEvents.subscribe(jobId, pump);
     res.writeHead(200, { 'Content-Type': 'text/event-stream; charset=utf-8', 'X-Accel-Buffering': 'no' });
     res.write(`retry: ${RETRY_MS}\n\n`);
-    const unsubscribe = await this.jobEvents.subscribe(jobId, pump);
     pump();
-    await joinPresence(this.db, stream, jobId, member);
 
     const heartbeat = setInterval(() => {
       void (async () => {
@@ -80,8 +80,15 @@ export class LiveStreams {
         })()),
     };
     this.open.add(open);
+    try {
+      await joinPresence(this.db, stream, jobId, member);
+    } catch (err) {
+      req.log.warn({ err }, 'joining presence failed');
+      await open.end();
+      return;
+    }
+    // Watched only once joined, so that a leave never comes before its join; the browser may have gone meanwhile.
     res.on('close', () => void open.end());
-    // The browser may have gone while the stream was being set up.
     if (res.closed) void open.end();
   }
 
