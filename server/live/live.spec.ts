@@ -1,9 +1,13 @@
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { JobDetail, PanelRecord } from '../../shared/api/contract';
+import type { JobDetail, PanelRecord, User } from '../../shared/api/contract';
+import { createApp } from '../app';
+import { deleteSessionsOf } from '../auth/sessions.repository';
+import { createLogger } from '../logger';
 import { HttpMember, type LiveReader } from '../testing/live-stream-reader';
-import { createTestApp, type TestApp } from '../testing/test-app';
+import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../testing/test-app';
+import { LiveStreams } from './live-streams';
 
 describe('the live stream of a job', () => {
   let t: TestApp;
@@ -108,5 +112,37 @@ describe('the live stream of a job', () => {
     expect(planned.data.panelIds.length).toBeGreaterThan(0);
     await member.json('/api/auth/sign-out', { method: 'POST' });
     await watching.untilEnded();
+  });
+});
+
+describe('the heartbeat of a live stream', () => {
+  let t: TestApp;
+  let server: Server;
+  let base: string;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    // A beat every 100 ms instead of 25 s, so the test need not wait.
+    const liveStreams = new LiveStreams(t.database.db, t.database.jobEvents, 100);
+    const app = createApp({ db: t.database.db, jobEvents: t.database.jobEvents, liveStreams, config: testConfig(), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer });
+    server = createServer(app);
+    await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+    base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+  });
+  afterAll(async () => {
+    server.closeAllConnections();
+    await new Promise((resolve) => server.close(resolve));
+    await t.close();
+  });
+
+  it('beats with a comment, and ends the stream once the session is gone from the database (a sign-out on another server)', async () => {
+    const member = await HttpMember.signIn(base, 'viewer@greyfield.example');
+    const { user } = await member.json<{ user: User }>('/api/auth/me');
+    const reader = await member.stream('/api/jobs/1/events');
+    await reader.next('presence');
+    await expect.poll(() => reader.comments.includes('heartbeat'), { timeout: 5000 }).toBe(true);
+    expect(reader.ended).toBe(false);
+    await deleteSessionsOf(t.database.db, user.id);
+    await reader.untilEnded();
   });
 });
