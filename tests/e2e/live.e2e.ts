@@ -48,7 +48,7 @@ describe('two members on one job, live', () => {
     // Tomas opens the same panel: his editor names Ruth as having it open too.
     await tomas.page.getByRole('link', { name: 'Flap unit, left, flap', exact: true }).click();
     await tomas.page.locator('bw-panel-stage canvas').first().waitFor();
-    await expect.poll(() => tomas.page.locator('.title bw-present-members').innerText(), { timeout: 15_000 }).toContain('Ruth Greyfield');
+    await expect.poll(() => tomas.page.locator('.title h1 bw-present-members').innerText(), { timeout: 15_000 }).toContain('Ruth Greyfield');
     await screenshot(tomas.page, 'live-editor-presence');
 
     // Ruth saves the panel: Tomas's editor says so at once, before he saves anything.

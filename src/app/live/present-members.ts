@@ -7,23 +7,24 @@ export interface PresentOther {
   where?: string;
 }
 
-/** "Also here: …": the other members the live stream says have this job or panel open. */
+/** "Also here: …": the other members the live stream says have this job or panel open; inline, so it can sit in a title's line. */
 @Component({
   selector: 'bw-present-members',
   imports: [MatIconModule],
   template: `
     @if (others().length > 0) {
-      <p class="present" role="status">
+      <span class="present" role="status">
         <mat-icon aria-hidden="true">group</mat-icon>
         <span class="label">{{ label() }}</span>
         @for (other of others(); track other.name) {
           <span class="who">{{ other.name }}@if (other.where) {<span class="where"> · {{ other.where }}</span>}</span>
         }
-      </p>
+      </span>
     }
   `,
   styles: `
-    .present { display: flex; flex-wrap: wrap; align-items: center; gap: 6px 8px; margin: 0; font: var(--mat-sys-body-medium); }
+    :host { margin-left: 8px; }
+    .present { display: inline-flex; flex-wrap: wrap; align-items: center; gap: 6px 8px; vertical-align: middle; font: var(--mat-sys-body-medium); }
     .present mat-icon { color: var(--mat-sys-primary); }
     .label { color: var(--mat-sys-on-surface-variant); }
     .who { padding: 2px 10px; border-radius: 12px; background: var(--mat-sys-secondary-container); color: var(--mat-sys-on-secondary-container); }
