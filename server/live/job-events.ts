@@ -26,11 +26,15 @@ export function jobEventsOver(source: ListenSource): JobEvents {
   const notify = (jobId: number) => listeners.get(jobId)?.forEach((listener) => listener());
   return {
     async subscribe(jobId, listener) {
-      started ??= source(
+      // A start that failed (the database unreachable) is tried again by the next subscription.
+      const starting = (started ??= source(
         (payload) => notify(Number(payload.split(':')[0])),
         () => [...listeners.keys()].forEach(notify),
-      );
-      await started;
+      ).catch((err: unknown) => {
+        if (started === starting) started = undefined;
+        throw err;
+      }));
+      await starting;
       const set = listeners.get(jobId) ?? new Set();
       listeners.set(jobId, set.add(listener));
       return () => {
