@@ -13,6 +13,8 @@ import { healthRoutes } from './http/health.routes';
 import type { RouteContext } from './http/route-context';
 import { jobsRoutes } from './jobs/jobs.routes';
 import { labelsRoutes } from './labels/labels.routes';
+import { LiveStreams } from './live/live-streams';
+import { liveRoutes } from './live/live.routes';
 import { mailRoutes } from './mail/outbox.routes';
 import { PackPool } from './packs/pack-pool';
 import { PackProgressBoard } from './packs/pack-progress';
@@ -39,7 +41,8 @@ export function createApiRouter(deps: AppDeps): Router {
     sessionSecret: deps.sessionSecret,
     // A pool starts no thread until a pack is asked for.
     packPool: deps.packPool ?? new PackPool(deps.logger),
-    packProgress: new PackProgressBoard(),
+    packProgress: new PackProgressBoard(db, (err) => deps.logger.warn({ err }, 'writing pack progress failed')),
+    liveStreams: deps.liveStreams ?? new LiveStreams(db, deps.jobEvents),
   };
   const router = Router();
   router.use((_req, res, next) => {
@@ -54,7 +57,7 @@ export function createApiRouter(deps: AppDeps): Router {
     context.authenticator.initialize(),
     context.authenticator.session(),
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes, liveRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

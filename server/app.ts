@@ -10,6 +10,8 @@ import { loggedUrl } from './http/logged-url';
 import { securityHeaders } from './http/security-headers';
 import type { Logger } from './logger';
 import type { Mailer } from './mail/mailer';
+import type { JobEvents } from './live/job-events';
+import type { LiveStreams } from './live/live-streams';
 import type { PackPool } from './packs/pack-pool';
 
 /** Where `ng build` puts the browser app. */
@@ -25,6 +27,10 @@ export interface AppDeps {
   mailer: Mailer;
   /** The worker threads that make bench packs; main.ts ends them at shutdown. A pool of its own when not given. */
   packPool?: PackPool;
+  /** Word of each job's new events from any server (the database handle's). */
+  jobEvents: JobEvents;
+  /** The live streams open here; main.ts ends them at shutdown. Made from db and jobEvents when not given. */
+  liveStreams?: LiveStreams;
   /** The time sessions are judged by; tests move it forward instead of waiting. */
   clock?: () => Date;
   clientDir?: string;

@@ -6,6 +6,7 @@ import { ConfigError, loadConfig } from './config';
 import { databaseTarget, openDatabase } from './db/client';
 import { acquireDataLock, DataFolderLockedError } from './db/data-lock';
 import { createLogger } from './logger';
+import { LiveStreams } from './live/live-streams';
 import { PackPool } from './packs/pack-pool';
 
 /** Requests still running get this long after SIGTERM before their connections are cut. */
@@ -61,7 +62,10 @@ async function main(): Promise<void> {
 
   const mail = await startMail(config, database.db, logger);
   const packPool = new PackPool(logger);
-  const server = createServer(createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer, packPool }));
+  const liveStreams = new LiveStreams(database.db, database.jobEvents);
+  const server = createServer(
+    createApp({ db: database.db, config, sessionSecret, logger, mailer: mail.mailer, packPool, jobEvents: database.jobEvents, liveStreams }),
+  );
   await listen(server, config.port, config.host).catch((err: NodeJS.ErrnoException) =>
     fail(`Borewright cannot listen on ${config.host}:${config.port}: ${err.code === 'EADDRINUSE' ? 'the port is taken (set PORT)' : err.message}`),
   );
@@ -91,9 +95,11 @@ async function main(): Promise<void> {
     stopping = true;
     logger.info({ signal }, 'stopping: no new connections, finishing requests');
     setTimeout(() => server.closeAllConnections(), DRAIN_MS).unref();
+    // Live streams never finish by themselves: end them (each leaves its presence) so the close can.
+    const streamsEnded = liveStreams.close();
     server.close(() => {
-      packPool
-        .close()
+      streamsEnded
+        .then(() => packPool.close())
         .then(() => mail.close())
         .then(() => database.close())
         .then(() => {

@@ -48,6 +48,7 @@ export function authRoutes(router: Router, context: RouteContext): void {
   // The signed-in session is destroyed; a fresh, empty one with its own token takes its place, so the
   // sign-in page can send a new sign-in without reloading.
   router.post('/auth/sign-out', async (req, res) => {
+    await context.liveStreams.endSession(req.sessionID);
     await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
     issueCsrfToken(req, res, cookie);
     res.status(204).end();

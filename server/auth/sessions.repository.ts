@@ -37,3 +37,12 @@ export async function deleteSessionsOf(db: Database, userId: number, keep?: stri
     .returning({ sid: sessions.sid });
   return rows.length;
 }
+
+/** Whether the session `sid` is still stored, unexpired and signed in as this member (a long-lived stream asks). */
+export async function sessionSignedInAs(db: Database, sid: string, userId: number): Promise<boolean> {
+  const rows = await db
+    .select({ sid: sessions.sid })
+    .from(sessions)
+    .where(and(eq(sessions.sid, sid), gt(sessions.expire, new Date()), sql`(${sessions.sess} #>> '{passport,user}') = ${String(userId)}`));
+  return rows.length > 0;
+}

@@ -107,7 +107,7 @@ describe('sign-in throttling', () => {
   it('keeps its counters in the database: a restarted server or a second one on it counts on', async () => {
     const from = '198.51.100.123';
     for (let i = 0; i < 2; i++) expect((await signIn(t.app, from, 'viewer@greyfield.example', 'guess')).status).toBe(401);
-    const second = createApp({ db: t.database.db, config: testConfig(config), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer });
+    const second = createApp({ db: t.database.db, config: testConfig(config), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
     const res = await signIn(second, from, 'viewer@greyfield.example', 'guess');
     expect([res.status, res.body.error.code]).toEqual([429, 'sign-in-wait']);
   });

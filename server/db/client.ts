@@ -5,6 +5,9 @@ import { PGlite, types } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
+import { jobEventsOver, type JobEvents } from '../live/job-events';
+import { JOB_EVENTS_CHANNEL } from '../live/job-events.repository';
+import { postgresListen } from '../live/postgres-listen';
 import { migrationsApplied, readJournal } from './migrations-applied';
 import * as schema from './schema';
 
@@ -24,6 +27,12 @@ export interface DatabaseHandle {
   readonly engine: DatabaseTarget['engine'];
   /** Applies the committed migrations of server/db/migrations that this database has not seen (none: two queries). */
   migrate(): Promise<void>;
+  /**
+   * Word of each job's new events, from this server or any other on the same database
+   * (server/live/): LISTEN on a connection of its own on PostgreSQL, PGlite's own listen on PGlite.
+   * Nothing listens until the first subscription.
+   */
+  readonly jobEvents: JobEvents;
   /** PGlite only: the data folder as a tarball, to start other in-memory databases from (test templates). */
   dumpDataDir?(): Promise<Uint8Array>;
   close(): Promise<void>;
@@ -77,11 +86,16 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
     ]);
     const pool = new pg.Pool({ connectionString: target.url, max: 10 });
     const db = drizzlePostgres({ client: pool, schema });
+    const jobEvents = jobEventsOver(postgresListen(pg.Client, target.url));
     return {
       db,
       engine: 'postgres',
+      jobEvents,
       migrate: () => migrateWhenBehind(db, () => migratePostgres(db, { migrationsFolder })),
-      close: () => pool.end(),
+      close: async () => {
+        await jobEvents.close();
+        await pool.end();
+      },
     };
   }
   // PGlite creates its own folder but not the ones above it.
@@ -92,11 +106,17 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
     parsers: DRIZZLE_PARSERS,
   });
   const db = drizzlePglite({ client: withoutQueryParsers(client), schema });
+  // One process holds a PGlite database, so its notifications are this server's own.
+  const jobEvents = jobEventsOver(async (onPayload) => client.listen(JOB_EVENTS_CHANNEL, onPayload));
   return {
     db,
     engine: 'pglite',
+    jobEvents,
     migrate: () => migrateWhenBehind(db, () => migratePglite(db, { migrationsFolder })),
     dumpDataDir: async () => new Uint8Array(await (await client.dumpDataDir('none')).arrayBuffer()),
-    close: () => client.close(),
+    close: async () => {
+      await jobEvents.close();
+      await client.close();
+    },
   };
 }

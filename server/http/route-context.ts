@@ -1,6 +1,7 @@
 import type { Authenticator } from '../auth/passport';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
+import type { LiveStreams } from '../live/live-streams';
 import type { Mailer } from '../mail/mailer';
 import type { PackPool } from '../packs/pack-pool';
 import type { PackProgressBoard } from '../packs/pack-progress';
@@ -16,6 +17,8 @@ export interface RouteContext {
   sessionSecret: string;
   /** The worker threads that make bench packs. */
   packPool: PackPool;
-  /** How far each pack being made here has got, by its download's ticket. */
+  /** How far each pack being made has got, by its download's ticket (kept in the database). */
   packProgress: PackProgressBoard;
+  /** The live streams open on this server. */
+  liveStreams: LiveStreams;
 }

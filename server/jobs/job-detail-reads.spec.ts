@@ -71,7 +71,7 @@ describe('job reads: entity tags and 304', () => {
   });
 
   it('never answers from what another server kept once the job changed through it', async () => {
-    const other = createApp({ db: t.database.db, config: testConfig(), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer });
+    const other = createApp({ db: t.database.db, config: testConfig(), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
     const elsewhere = await signedIn(other, 'designer@greyfield.example');
     const before = await read(designer, 3).expect(200);
     await elsewhere.patch('/api/jobs/3').send({ name: 'Clinic storage wall, phase 2', version: before.body.job.version }).expect(200);

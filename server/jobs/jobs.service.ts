@@ -12,6 +12,7 @@ import { findNulText, NUL_MESSAGE } from '../http/nul-text';
 import { nextDocumentId } from './document-ids';
 import * as repo from './jobs.repository';
 import { writableJob } from './writable-job';
+import { liveMember, recordJobEvent } from '../live/job-events.repository';
 
 type Summary = NonNullable<Awaited<ReturnType<typeof repo.findJobSummary>>>;
 
@@ -116,6 +117,7 @@ export async function updateJob(db: Database, actor: User, jobId: number, body: 
     if (current.version !== version || !(await repo.updateJobAtVersion(tx, jobId, version, changes))) throw staleVersion('this job', current.version);
     const action = changes.archived === true ? 'job.archived' : changes.archived === false ? 'job.unarchived' : 'job.updated';
     await recordActivity(tx, { userId: actor.id, jobId, action, details: { fields: Object.keys(changes) } });
+    await recordJobEvent(tx, jobId, 'job-changed', { version: version + 1, by: liveMember(actor) });
   });
   return jobSummary(db, jobId);
 }
@@ -134,6 +136,7 @@ export async function addCarcass(db: Database, actor: User, jobId: number, body:
     const row = await repo.insertCarcass(tx, jobId, carcassDraft({ ...body, id: body.id ?? nextDocumentId('carcass', taken) }));
     await repo.touchJob(tx, jobId);
     await recordActivity(tx, { userId: actor.id, jobId, action: 'carcass.created', details: { carcass: row.key, name: row.name } });
+    await recordJobEvent(tx, jobId, 'job-changed', { version: job.version, by: liveMember(actor) });
     return toCarcass(row);
   });
 }

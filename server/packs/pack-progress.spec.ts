@@ -1,19 +1,25 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { packProgress, type PackProgressAnswer } from '../../shared/api/pack-contract';
+import { createApp } from '../app';
+import { createLogger } from '../logger';
 import { ApiClient, signedIn } from '../testing/api-client';
 import { binaryBody } from '../testing/binary-body';
-import { createTestApp, type TestApp } from '../testing/test-app';
+import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../testing/test-app';
 
 describe('pack progress', () => {
   let t: TestApp;
   let viewer: ApiClient;
+  /** The same member through a second server on the same database: progress is kept there, not in one process. */
+  let elsewhere: ApiClient;
   beforeAll(async () => {
     t = await createTestApp();
     viewer = await signedIn(t.app, 'viewer@greyfield.example');
+    const second = createApp({ db: t.database.db, config: testConfig(), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
+    elsewhere = await signedIn(second, 'viewer@greyfield.example');
   });
   afterAll(() => t.close());
 
-  it('tells which panel the pack has reached while it downloads, and forgets the ticket once it is done', async () => {
+  it('tells which panel the pack has reached while it downloads, on any server, and forgets the ticket once it is done', async () => {
     const { body } = await viewer.get('/api/jobs').expect(200);
     const kitchen = body.jobs.find((j: { name: string }) => j.name === 'Larch Lane kitchen') as { id: number; panelCount: number };
     const ticket = 'kitchen-pack-0123456789';
@@ -26,7 +32,7 @@ describe('pack progress', () => {
       .then((res) => ((done = true), res));
     // The request thread answers while a worker makes the pack.
     while (!done) {
-      const res = await viewer.get(`/api/pack-progress/${ticket}`);
+      const res = await elsewhere.get(`/api/pack-progress/${ticket}`);
       if (res.status === 200) heard.push(packProgress.parse(res.body));
       await new Promise((r) => setTimeout(r, 10));
     }
@@ -36,7 +42,7 @@ describe('pack progress', () => {
     const reached = heard.map((p) => p.panel);
     expect(reached).toEqual([...reached].sort((a, b) => a - b));
     expect(reached.some((panel) => panel > 0 && panel <= kitchen.panelCount)).toBe(true);
-    expect((await viewer.get(`/api/pack-progress/${ticket}`).expect(404)).body.error.code).toBe('no-such-pack');
+    expect((await elsewhere.get(`/api/pack-progress/${ticket}`).expect(404)).body.error.code).toBe('no-such-pack');
     // A whole pack on a busy machine: more time than a plain request's test is given.
   }, 120_000);
 

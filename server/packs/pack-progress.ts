@@ -1,23 +1,60 @@
+import { eq, lt, sql } from 'drizzle-orm';
+import type { Database } from '../db/client';
+import { packProgress } from '../db/schema';
 import type { PackProgress } from './pack-order';
 
-/** Packs being made on this server, by the ticket their download named: how far each has got. */
+/**
+ * How far each pack being made has got, by the ticket its download named: a row in the database, so a
+ * poll answered by any server sees a pack made on another. A worker reports every panel; the row is
+ * written one write at a time with the newest report, so a fast pack costs few writes and the panel
+ * reached never goes back.
+ */
 export class PackProgressBoard {
-  private readonly packs = new Map<string, PackProgress>();
+  private readonly writing = new Map<string, Promise<void>>();
+
+  constructor(
+    private readonly db: Database,
+    private readonly onError: (err: unknown) => void,
+  ) {}
 
   /** Follows a pack from its start, with no panel reached yet, until `finish`. */
-  start(ticket: string, panels: number): (progress: PackProgress) => void {
-    this.packs.set(ticket, { panel: 0, panels });
+  async start(ticket: string, panels: number): Promise<(progress: PackProgress) => void> {
+    // A server that stopped while making a pack left its row behind.
+    await this.db.delete(packProgress).where(lt(packProgress.updatedAt, sql`now() - interval '1 hour'`));
+    await this.db
+      .insert(packProgress)
+      .values({ ticket, panel: 0, panels })
+      .onConflictDoUpdate({ target: packProgress.ticket, set: { panel: 0, panels, updatedAt: sql`now()` } });
+    let latest: PackProgress | undefined;
+    let busy = false;
+    const write = async (): Promise<void> => {
+      while (latest) {
+        const next = latest;
+        latest = undefined;
+        await this.db.update(packProgress).set({ panel: next.panel, panels: next.panels, updatedAt: sql`now()` }).where(eq(packProgress.ticket, ticket));
+      }
+    };
     return (progress) => {
-      if (this.packs.has(ticket)) this.packs.set(ticket, progress);
+      latest = progress;
+      if (busy) return;
+      busy = true;
+      const done = write()
+        .catch(this.onError)
+        .finally(() => (busy = false));
+      this.writing.set(ticket, done);
     };
   }
 
-  finish(ticket: string): void {
-    this.packs.delete(ticket);
+  /** The pack is done (or dropped): its row goes, after any write still on its way. */
+  async finish(ticket: string): Promise<void> {
+    await this.writing.get(ticket);
+    this.writing.delete(ticket);
+    await this.db.delete(packProgress).where(eq(packProgress.ticket, ticket));
   }
 
-  /** How far the pack of `ticket` has got; undefined when no such pack is being made here. */
-  get(ticket: string): PackProgress | undefined {
-    return this.packs.get(ticket);
+  /** How far the pack of `ticket` has got; undefined when no such pack is being made. */
+  async get(ticket: string): Promise<PackProgress | undefined> {
+    const [row] = await this.db.select({ panel: packProgress.panel, panels: packProgress.panels }).from(packProgress).where(eq(packProgress.ticket, ticket));
+    return row;
   }
 }

@@ -23,7 +23,7 @@ function sendFile(res: Response, file: packs.DownloadFile): void {
  */
 async function streamPack(res: Response, context: RouteContext, jobId: number, paper: 'a4' | 'letter', origin: string, unit: LengthUnit, ticket?: string): Promise<void> {
   const order = await packs.jobPackOrder(context.db, jobId, paper, context.clock(), origin, unit);
-  const making = context.packPool.make(order, ticket ? context.packProgress.start(ticket, order.job.panels.length) : undefined);
+  const making = context.packPool.make(order, ticket ? await context.packProgress.start(ticket, order.job.panels.length) : undefined);
   try {
     const { root } = await making.planned;
     res.attachment(`${root}.zip`).type('application/zip');
@@ -31,7 +31,7 @@ async function streamPack(res: Response, context: RouteContext, jobId: number, p
     // leaves the response to Express, which ends it, and the client sees a broken zip rather than a wrong one.
     await pipeline(making.zip, res);
   } finally {
-    if (ticket) context.packProgress.finish(ticket);
+    if (ticket) await context.packProgress.finish(ticket);
   }
 }
 
@@ -75,9 +75,9 @@ export function packsRoutes(router: Router, context: RouteContext): void {
     await streamPack(res, context, jobId, paper, linkOrigin(context.config, req), req.user!.units, progress);
   });
 
-  router.get('/pack-progress/:ticket', requirePermission('readJobs'), (req, res) => {
-    const progress = context.packProgress.get(String(req.params.ticket));
-    if (!progress) throw new AppError(404, 'no-such-pack', 'No pack is being made under this ticket: it has finished, or never started here.');
+  router.get('/pack-progress/:ticket', requirePermission('readJobs'), async (req, res) => {
+    const progress = await context.packProgress.get(String(req.params.ticket));
+    if (!progress) throw new AppError(404, 'no-such-pack', 'No pack is being made under this ticket: it has finished, or never started.');
     res.json(progress);
   });
 

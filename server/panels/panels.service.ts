@@ -10,6 +10,7 @@ import { AppError, invalidField, notFound, staleVersion } from '../http/app-erro
 import { nextDocumentId } from '../jobs/document-ids';
 import { carcassKeys, touchJob } from '../jobs/jobs.repository';
 import { writableJob } from '../jobs/writable-job';
+import { liveMember, recordJobEvent } from '../live/job-events.repository';
 import * as repo from './panels.repository';
 
 type BoardFields = Partial<z.output<typeof panelFieldsBody>>;
@@ -58,7 +59,9 @@ export async function addPanel(db: Database, actor: User, jobId: number, body: z
     });
     await touchJob(tx, jobId);
     await recordActivity(tx, { userId: actor.id, jobId, panelId, action: 'panel.created', details: { panel: key, name: body.name } });
-    return recordOf(tx, panelId);
+    const record = await recordOf(tx, panelId);
+    await recordJobEvent(tx, jobId, 'panel-added', { panelId, version: record.version, by: liveMember(actor) });
+    return record;
   });
 }
 
@@ -73,6 +76,7 @@ async function changePanel(
   panelId: number,
   version: number,
   action: string,
+  event: 'panel-saved' | 'panel-marked',
   apply: (tx: Database, current: PanelRow, job: JobRow) => Promise<{ changes?: repo.PanelChanges; details: Record<string, unknown> }>,
 ): Promise<PanelRecord> {
   return db.transaction(async (tx) => {
@@ -84,7 +88,10 @@ async function changePanel(
     if (!(await repo.updatePanelAtVersion(tx, panelId, version, changes))) throw stale();
     await touchJob(tx, current.jobId);
     await recordActivity(tx, { userId: actor.id, jobId: current.jobId, panelId, action, details: { panel: current.key, ...details } });
-    return recordOf(tx, panelId);
+    const record = await recordOf(tx, panelId);
+    const by = liveMember(actor);
+    await recordJobEvent(tx, current.jobId, event, { panelId, version: record.version, status: record.status, by });
+    return record;
   });
 }
 
@@ -97,7 +104,7 @@ export function updatePanel(db: Database, actor: User, panelId: number, body: z.
       fields: { '(body)': 'names no field to change' },
     });
   }
-  return changePanel(db, actor, panelId, version, 'panel.updated', async (tx, _current, job) => ({
+  return changePanel(db, actor, panelId, version, 'panel.updated', 'panel-saved', async (tx, _current, job) => ({
     changes: await boardChanges(tx, job, fields),
     details: { fields: named },
   }));
@@ -105,7 +112,7 @@ export function updatePanel(db: Database, actor: User, panelId: number, body: z.
 
 /** Replaces the panel's placements and bores (the editor saves the whole panel at once). */
 export function saveDrilling(db: Database, actor: User, panelId: number, body: z.output<typeof panelDrillingBody>): Promise<PanelRecord> {
-  return changePanel(db, actor, panelId, body.version, 'panel.drilling-saved', async (tx) => {
+  return changePanel(db, actor, panelId, body.version, 'panel.drilling-saved', 'panel-saved', async (tx) => {
     await repo.replaceDrilling(tx, panelId, body.placements.map(placementDraft), body.bores.map(boreDraft));
     return { details: { placements: body.placements.length, bores: body.bores.length } };
   });
@@ -118,7 +125,7 @@ export function saveDrilling(db: Database, actor: User, panelId: number, body: z
  * back to drilled records the member who went back, then: the activity log keeps the earlier marks.
  */
 export function setPanelStatus(db: Database, actor: User, panelId: number, body: z.output<typeof panelStatusBody>): Promise<PanelRecord> {
-  return changePanel(db, actor, panelId, body.version, 'panel.status-changed', async (_tx, current) => {
+  return changePanel(db, actor, panelId, body.version, 'panel.status-changed', 'panel-marked', async (_tx, current) => {
     const step = statusStep(current.status, body.status);
     if (!step.ok) throw statusRefused(current, body.status, step.reason);
     const planned = body.status === 'planned';
@@ -157,5 +164,6 @@ export async function deletePanel(db: Database, actor: User, panelId: number, ve
       action: 'panel.deleted',
       details: { panel: current.key, name: current.name },
     });
+    await recordJobEvent(tx, current.jobId, 'panel-deleted', { panelId, by: liveMember(actor) });
   });
 }

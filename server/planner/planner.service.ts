@@ -12,6 +12,7 @@ import { panels as panelTable } from '../db/schema';
 import { AppError } from '../http/app-error';
 import { carcassKeys, insertCarcass, touchJob, updateCarcass } from '../jobs/jobs.repository';
 import { writableJob } from '../jobs/writable-job';
+import { liveMember, recordJobEvent } from '../live/job-events.repository';
 import * as panels from '../panels/panels.repository';
 
 /**
@@ -30,6 +31,7 @@ export async function storePlannedCarcass(db: Database, actor: User, jobId: numb
     const existing = (await carcassKeys(tx, jobId)).get(plan.carcass.id);
     const stored = existing === undefined ? await addCarcass(tx, actor, jobId, plan) : await replan(tx, actor, jobId, existing, plan, choice);
     await touchJob(tx, jobId);
+    await recordJobEvent(tx, jobId, 'job-planned', { carcass: stored.carcass.id, panelIds: stored.panels.map((p) => p.dbId), by: liveMember(actor) });
     return stored;
   });
 }

@@ -43,6 +43,7 @@ export async function createTestApp(
     logger,
     mailer: mail.mailer,
     packPool,
+    jobEvents: database.jobEvents,
     clock: () => new Date(start + offset),
     clientDir: options.clientDir,
   });

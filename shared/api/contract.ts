@@ -118,6 +118,12 @@ export const dbId = z
 export const jobParams = z.object({ jobId: dbId });
 export const panelParams = z.object({ panelId: dbId });
 
+/** The last event id a live stream's client saw (its Last-Event-ID header); 0 replays the whole log. */
+export const liveEventId = z.string().regex(/^(0|[1-9][0-9]{0,14})$/, 'must be an event id').transform(Number);
+
+/** GET /api/jobs/:jobId/events: the panel open in the editor, if any (see live-contract.ts). */
+export const jobEventsQuery = z.object({ panel: dbId.optional(), lastEventId: liveEventId.optional() });
+
 export const jobListQuery = z.object({
   archived: z
     .enum(['true', 'false'], 'must be "true" or "false"')

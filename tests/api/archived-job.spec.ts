@@ -91,7 +91,7 @@ describe('an archived job is read-only on the server', () => {
   afterAll(() => t.close());
 
   it('has a row for every route that writes to a job or below it', () => {
-    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer });
+    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
     const below = router.stack.flatMap((layer) =>
       layer.route && /:(jobId|panelId|attachmentId)/.test(layer.route.path)
         ? [...new Set(layer.route.stack.map((h) => h.method.toUpperCase()))].filter((m) => m !== 'GET').map((m) => `${m} /api${layer.route!.path}`)

@@ -5,6 +5,7 @@ import { larchLaneKitchen } from '../../server/demo/larch-lane-kitchen';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
+import { firstBytes } from '../../server/testing/live-stream-reader';
 import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 import { CATALOG_ROUTES } from './role-matrix.catalog';
@@ -42,6 +43,7 @@ const ROUTES: Record<string, Row> = {
   },
   'GET /api/jobs/:jobId': { request: (c, f) => c.get(`/api/jobs/${f.jobId}`), expect: [401, 200, 200, 200, 200] },
   'PATCH /api/jobs/:jobId': { request: (c, f) => c.patch(`/api/jobs/${f.jobId}`).send({ archived: true, version: 1 }), expect: [401, 200, 200, 403, 403] },
+  'GET /api/jobs/:jobId/events': { request: (c, f) => firstBytes(c.get(`/api/jobs/${f.jobId}/events?panel=${f.panel.dbId}`)), expect: [401, 200, 200, 200, 200] },
   'GET /api/jobs/:jobId/document': { request: (c, f) => c.get(`/api/jobs/${f.jobId}/document`), expect: [401, 200, 200, 200, 200] },
   'POST /api/jobs/:jobId/carcasses': {
     request: (c, f) => c.post(`/api/jobs/${f.jobId}/carcasses`).send({ name: 'Box', width: 600, height: 722, depth: 560, material: 'mdf-19' }),
@@ -124,7 +126,7 @@ describe('role matrix', () => {
   afterAll(() => t.close());
 
   it('has a row for every route the API registers, and no other', () => {
-    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer });
+    const router = createApiRouter({ db: t.database.db, config: testConfig(), sessionSecret: 'x'.repeat(32), logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents });
     const registered = router.stack.flatMap((layer) =>
       layer.route ? [...new Set(layer.route.stack.map((handler) => handler.method.toUpperCase()))].map((method) => `${method} /api${layer.route!.path}`) : [],
     );

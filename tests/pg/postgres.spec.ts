@@ -10,6 +10,7 @@ import { jobAsDocument, listJobs } from '../../server/jobs/jobs.service';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { testConfig } from '../../server/testing/test-app';
+import { freshDemoDatabase } from './demo-database';
 
 const url = process.env.PG_TEST_URL;
 const restoreUrl = process.env.PG_TEST_RESTORE_URL;
@@ -21,13 +22,11 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
   let designer: ApiClient;
 
   beforeAll(async () => {
-    database = await openDatabase({ engine: 'postgres', url: url! });
-    await database.migrate();
-    await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
-    await seedDemoShop(database.db);
+    database = await freshDemoDatabase(url!);
     app = createApp({
       db: database.db,
       config: testConfig(),
+      jobEvents: database.jobEvents,
       sessionSecret: 'a test secret that is long enough to sign cookies',
       logger: createLogger('silent'),
       // These tests send no mail; the outbox is tested on PGlite (server/mail).

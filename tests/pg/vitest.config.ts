@@ -5,6 +5,8 @@ export default defineConfig({
   test: {
     include: ['tests/pg/**/*.spec.ts'],
     environment: 'node',
+    // The files share one database, and each starts by emptying it.
+    fileParallelism: false,
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

@@ -13,3 +13,4 @@ export { shopFittings } from './shop-fittings';
 export { attachments } from './attachments';
 export { signInAttempts, signInAddresses } from './sign-in-attempts';
 export { shopSettings } from './shop-settings';
+export { jobEvents, jobPresence, packProgress } from './live';

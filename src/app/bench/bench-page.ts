@@ -1,4 +1,5 @@
 import { Component, computed, effect, inject } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -10,6 +11,7 @@ import type { CautionId } from '../../../shared/export/cautions';
 import { AuthStore } from '../auth/auth-store';
 import { statusLabels } from '../jobs/panel-labels';
 import { CatalogStore } from '../catalog/catalog-store';
+import { JobLive } from '../live/job-live';
 import { CautionList } from '../ui/caution-list';
 import { cautionsOfUnits } from '../ui/job-cautions';
 import { PanelProgress } from '../ui/panel-progress';
@@ -33,7 +35,7 @@ import { BenchStore } from './bench-store';
     MatSlideToggleModule,
     PanelProgress,
   ],
-  providers: [BenchStore],
+  providers: [BenchStore, JobLive],
   templateUrl: './bench-page.html',
   styleUrl: './bench-page.scss',
 })
@@ -73,6 +75,10 @@ export class BenchPage {
       const job = this.store.job();
       this.title.setTitle(job ? `Bench: ${job.name} · Borewright` : 'Bench · Borewright');
     });
+    // Panels marked, saved or planned by someone else: the cards as the server has them now.
+    const live = inject(JobLive);
+    effect(() => live.follow(this.store.jobId()));
+    live.othersChanges.pipe(takeUntilDestroyed()).subscribe(() => this.store.refresh());
   }
 
   protected carcassOf(carcass: string | undefined): string {

@@ -240,6 +240,11 @@ export class BenchStore {
 
   reload(): void {
     this.problemText.set(null);
+    this.refresh();
+  }
+
+  /** The panels and findings as the server has them now, leaving what the page says alone (someone else changed them). */
+  refresh(): void {
     this.detail.reload();
     this.findingList.reload();
   }

@@ -24,6 +24,9 @@ import { NO_SELECTION, selectionOf } from './document/selection';
 import { editorAction, type EditorAction } from './editor-keys';
 import { EditorSource } from './editor-source';
 import { EditorStore } from './editor-store';
+import { JobLive } from '../live/job-live';
+import { PresentMembers } from '../live/present-members';
+import { PanelLive } from './panel-live';
 import { PanelSaver } from './panel-saver';
 import { RepeatDialog } from './repeat-dialog';
 import { PanelDownloads } from '../packs/panel-downloads';
@@ -56,11 +59,12 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
     PanelDownloads,
     PanelStage,
     PlacementList,
+    PresentMembers,
     PropertiesForm,
     RouterLink,
     ShortcutList,
   ],
-  providers: [EditorSource, EditorStore, LiveChecks, PanelSaver],
+  providers: [EditorSource, EditorStore, LiveChecks, PanelSaver, JobLive, PanelLive],
   templateUrl: './panel-editor.html',
   styleUrl: './panel-editor.scss',
   host: { '(keydown)': 'handleKey($event)', '(window:beforeunload)': 'warnBeforeUnload($event)' },
@@ -71,6 +75,7 @@ export class PanelEditor implements LeavesSafely {
   protected readonly source = inject(EditorSource);
   protected readonly store = inject(EditorStore);
   protected readonly saver = inject(PanelSaver);
+  protected readonly live = inject(PanelLive);
   protected readonly stage = viewChild(PanelStage);
   protected readonly lengths = inject(Lengths);
 

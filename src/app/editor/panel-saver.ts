@@ -35,7 +35,7 @@ export class PanelSaver {
   /** Versions of other panels this editor wrote to (applying to the opposite side). */
   private readonly otherVersions = signal(new Map<number, number>());
   private readonly busy = signal(false);
-  private readonly problem = signal<{ stale: boolean; message: string } | undefined>(undefined);
+  private readonly problem = signal<{ stale: boolean; message: string; live?: true } | undefined>(undefined);
 
   readonly dirty = computed(() => this.store.panel() !== undefined && this.store.panel() !== this.saved()?.panel);
   readonly state = computed((): SaveState => {
@@ -45,6 +45,8 @@ export class PanelSaver {
     return this.dirty() ? 'unsaved' : 'saved';
   });
   readonly failure = computed(() => this.problem()?.message);
+  /** Who changed the panel, when the live stream told of it before any save was refused. */
+  readonly changedElsewhereMessage = computed(() => (this.problem()?.live ? this.problem()?.message : undefined));
 
   /** The side panel across the carcass, where "apply to the opposite side" writes. */
   readonly opposite = computed(() => {
@@ -75,6 +77,14 @@ export class PanelSaver {
       if (!confirmed) return false;
     }
     return this.save();
+  }
+
+  /**
+   * The live stream says someone else changed the panel: saving stops (it would be refused), and the
+   * editor says who, until it is reloaded.
+   */
+  changedElsewhere(message: string): void {
+    this.problem.set({ stale: true, message, live: true });
   }
 
   /** Someone else saved: drop this editor's changes and load theirs. */

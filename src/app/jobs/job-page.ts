@@ -1,5 +1,6 @@
 import { DatePipe } from '@angular/common';
 import { Component, computed, effect, inject } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -14,6 +15,8 @@ import { AuthStore } from '../auth/auth-store';
 import { CatalogStore } from '../catalog/catalog-store';
 import { BenchPack } from '../packs/bench-pack';
 import { describeError, isStaleVersion } from '../core/api-problem';
+import { JobLive } from '../live/job-live';
+import { PresentMembers } from '../live/present-members';
 import { ConfirmDialog } from '../ui/confirm-dialog';
 import { Lengths } from '../ui/lengths';
 import { CautionList } from '../ui/caution-list';
@@ -35,8 +38,8 @@ const STALE_MESSAGE = 'Someone else changed this panel since you opened it.';
 /** One job: its header, carcasses and panels, the document export and the bench pack. */
 @Component({
   selector: 'bw-job-page',
-  imports: [BenchPack, CautionList, CutListImport, DatePipe, JobAttachments, JobFindings, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, RouterLink],
-  providers: [JobStore, JobFindingsStore],
+  imports: [BenchPack, CautionList, CutListImport, DatePipe, JobAttachments, JobFindings, MatButtonModule, MatIconModule, MatProgressBarModule, PanelProgress, PanelTable, PresentMembers, RouterLink],
+  providers: [JobStore, JobFindingsStore, JobLive],
   templateUrl: './job-page.html',
   styleUrl: './job-page.scss',
 })
@@ -48,6 +51,12 @@ export class JobPage {
   private readonly catalog = inject(CatalogStore).catalog;
   protected readonly store = inject(JobStore);
   protected readonly lengths = inject(Lengths);
+  private readonly live = inject(JobLive);
+  /** Who else has the job open, and which panel, by its name. */
+  protected readonly here = computed(() => {
+    const names = new Map(this.store.panels().map((p) => [p.dbId, p.name]));
+    return this.live.others().map((o) => ({ name: o.name, where: o.panelIds.map((id) => `editing “${names.get(id) ?? 'a panel'}”`).join(', ') }));
+  });
 
   /** Editing for roles that may, while the job is not archived. */
   protected readonly canEdit = computed(() => this.auth.can('editJobs') && this.store.job()?.archived === false);
@@ -67,6 +76,12 @@ export class JobPage {
       const job = this.store.job();
       if (job) this.title.setTitle(`${job.name} · Borewright`);
     });
+    effect(() => {
+      const id = this.store.job()?.id;
+      if (id !== undefined) this.live.follow(id);
+    });
+    // A panel saved, marked or planned by someone else: the rows as the server has them now.
+    this.live.othersChanges.pipe(takeUntilDestroyed()).subscribe(() => this.store.reload());
   }
 
   protected labelsAsked(): void {
