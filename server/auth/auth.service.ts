@@ -1,6 +1,7 @@
 import type { preferencesBody, User } from '../../shared/api/contract';
 import type * as z from 'zod';
 import type { Database } from '../db/client';
+import { acrossShops } from '../db/shop-scope';
 import { AppError } from '../http/app-error';
 import { spendComparisonTime, verifyPassword } from './passwords';
 import { findAccount, findAccountByEmail, updateUnits } from './users.repository';
@@ -23,7 +24,8 @@ export async function checkCredentials(
   email: string,
   password: string,
 ): Promise<{ user: User } | { refused: SignInRefusal }> {
-  const account = await findAccountByEmail(db, email);
+  // Sign-in is where a shop is not known yet: the address finds the account in whichever shop it is.
+  const account = await acrossShops(() => findAccountByEmail(db, email));
   if (!account) {
     await spendComparisonTime(password);
     return { refused: 'bad-credentials' };
@@ -43,9 +45,10 @@ export function mayUse(account: { active: boolean; demo: boolean }, demoAccounts
  * The signed-in user of a session, or undefined when the account is gone or no longer allowed: a
  * deactivated member's session is refused here even if its row has not been deleted yet.
  */
-export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<User | undefined> {
-  const account = await findAccount(db, id);
-  return account && mayUse(account, demoAccounts) ? toUser(account) : undefined;
+export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<{ user: User; shopId: number } | undefined> {
+  // Read before the request has a shop: the session's account says which shop it is.
+  const account = await acrossShops(() => findAccount(db, id));
+  return account && mayUse(account, demoAccounts) ? { user: toUser(account), shopId: account.shopId } : undefined;
 }
 
 /** The error a refused sign-in answers with. */

@@ -4,6 +4,7 @@ import { Strategy as LocalStrategy } from 'passport-local';
 import type { User } from '../../shared/api/contract';
 import type { Database } from '../db/client';
 import { checkCredentials, refusal, sessionUser, type SignInRefusal } from './auth.service';
+import { setRequestShop } from './request-shop';
 
 export type Authenticator = passport.Authenticator;
 
@@ -22,8 +23,12 @@ export function createAuthenticator(db: Database, demoAccounts: boolean): Authen
     }),
   );
   authenticator.serializeUser<number>((user, done) => done(null, user.id));
-  authenticator.deserializeUser<number>((id, done) => {
-    sessionUser(db, demoAccounts, id).then((user) => done(null, user ?? false), done);
+  // passport hands the request to a three-argument deserializer: the account's shop is the request's.
+  authenticator.deserializeUser<number>((req: Request, id: number, done: (err: unknown, user?: User | false) => void) => {
+    sessionUser(db, demoAccounts, id).then((found) => {
+      if (found) setRequestShop(req, found.shopId);
+      done(null, found?.user ?? false);
+    }, done);
   });
   return authenticator;
 }

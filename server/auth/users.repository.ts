@@ -14,9 +14,9 @@ export async function findAccountByEmail(db: Database, email: string) {
   return row;
 }
 
-/** The account with this id, without its password hash. */
+/** The account with this id and its shop, without its password hash. */
 export async function findAccount(db: Database, id: number) {
-  const [row] = await db.select(accountColumns).from(users).where(eq(users.id, id));
+  const [row] = await db.select({ ...accountColumns, shopId: users.shopId }).from(users).where(eq(users.id, id));
   return row;
 }
 

@@ -6,6 +6,7 @@ import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
 import { migrationsApplied, readJournal } from './migrations-applied';
+import { SCOPE_RESET, scopeStatements } from './shop-scope';
 import * as schema from './schema';
 
 /**
@@ -46,6 +47,87 @@ export function databaseTarget(config: { databaseUrl?: string; dataDir: string }
     : { engine: 'pglite', dataDir: path.join(config.dataDir, 'pglite') };
 }
 
+/**
+ * PGlite is one connection: a query in a shop's scope (shop-scope.ts) runs in a transaction of its own
+ * that first takes the app's role and the shop's setting, and a transaction takes them as it opens.
+ * PGlite holds other queries back while a transaction runs, so no other scope's query slips in.
+ */
+function shopScopedPglite(client: PGlite): PGlite {
+  return new Proxy(client, {
+    get(target, property) {
+      if (property === 'query') {
+        return (...args: Parameters<PGlite['query']>) => {
+          const scope = scopeStatements('transaction');
+          if (!scope) return target.query(...args);
+          return target.transaction(async (tx) => {
+            await tx.exec(scope);
+            return tx.query(...args);
+          });
+        };
+      }
+      if (property === 'transaction') {
+        return <T>(work: Parameters<PGlite['transaction']>[0]) => {
+          const scope = scopeStatements('transaction');
+          return target.transaction(async (tx) => {
+            if (scope) await tx.exec(scope);
+            return work(tx) as T;
+          });
+        };
+      }
+      const value: unknown = Reflect.get(target, property, target);
+      return typeof value === 'function' ? value.bind(target) : value;
+    },
+  });
+}
+
+/**
+ * A PostgreSQL pool whose connections, checked out in a shop's scope, take the app's role and the shop's
+ * setting for as long as they are out, and give them back on release. drizzle checks out a connection
+ * for each transaction and asks the pool for every other query.
+ */
+function shopScopedPool(pg: typeof import('pg').default, config: import('pg').PoolConfig): import('pg').Pool {
+  class ShopScopedPool extends pg.Pool {
+    // @ts-expect-error pg's overloads: drizzle calls connect() without a callback; with one, it is pg's own (its query()).
+    override connect(callback?: (...args: unknown[]) => void) {
+      if (callback) return super.connect(callback as never);
+      return this.scopedConnect();
+    }
+
+    private async scopedConnect(): Promise<import('pg').PoolClient> {
+      const connection = await super.connect();
+      const scope = scopeStatements('session');
+      if (!scope) return connection;
+      try {
+        await connection.query(scope);
+      } catch (error) {
+        connection.release(error as Error);
+        throw error;
+      }
+      const release = connection.release.bind(connection);
+      connection.release = (error?: Error | boolean) => {
+        connection.release = release;
+        if (error) return release(error);
+        connection.query(SCOPE_RESET).then(() => release(), (resetError: Error) => release(resetError));
+      };
+      return connection;
+    }
+
+    // @ts-expect-error pg's overloads: drizzle calls query(config, values) and awaits it.
+    override query(...args: Parameters<import('pg').Pool['query']>) {
+      if (!scopeStatements('session') || typeof args[args.length - 1] === 'function') return (super.query as (...a: unknown[]) => unknown)(...args);
+      return (async () => {
+        const connection = await this.scopedConnect();
+        try {
+          return await (connection.query as (...a: unknown[]) => Promise<unknown>)(...args);
+        } finally {
+          connection.release();
+        }
+      })();
+    }
+  }
+  return new ShopScopedPool(config) as unknown as import('pg').Pool;
+}
+
 /** Opens the database the target names. A PGlite data folder must be locked by the caller first (data-lock.ts). */
 export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHandle> {
   if (target.engine === 'postgres') {
@@ -55,7 +137,7 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
       import('drizzle-orm/node-postgres'),
       import('drizzle-orm/node-postgres/migrator'),
     ]);
-    const pool = new pg.Pool({ connectionString: target.url, max: 10 });
+    const pool = shopScopedPool(pg, { connectionString: target.url, max: 10 });
     const db = drizzlePostgres({ client: pool, schema });
     return {
       db,
@@ -70,7 +152,7 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
     dataDir: target.dataDir,
     loadDataDir: target.template ? new Blob([target.template]) : undefined,
   });
-  const db = drizzlePglite({ client, schema });
+  const db = drizzlePglite({ client: shopScopedPglite(client), schema });
   return {
     db,
     engine: 'pglite',

@@ -59,7 +59,7 @@ describe('backup and restore', () => {
   });
 
   it('holds the invitation and reset links and the outbox, and restores them', () => {
-    expect(Object.keys(backup.tables)).toEqual(['users', 'shop_fittings', 'shop_settings', 'jobs', 'carcasses', 'panels', 'placements', 'bores', 'activity', 'attachments', 'mail_tokens', 'outbox']);
+    expect(Object.keys(backup.tables)).toEqual(['shops', 'users', 'shop_fittings', 'shop_settings', 'jobs', 'carcasses', 'panels', 'placements', 'bores', 'activity', 'attachments', 'mail_tokens', 'outbox']);
   });
 
   it('refuses a database that already has rows, and a file of another kind', async () => {

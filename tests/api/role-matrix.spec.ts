@@ -5,7 +5,7 @@ import { larchLaneKitchen } from '../../server/demo/larch-lane-kitchen';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
-import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 import { CATALOG_ROUTES } from './role-matrix.catalog';
 import { BENCH_ROUTES } from './role-matrix.bench';
@@ -17,7 +17,7 @@ import { PLANNED_CARCASS } from './planned-carcass';
 
 /** A message in the outbox with the pack attached, sent before the rows run. */
 let caughtMessageId = 0;
-const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
+const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { shopId: DEMO_SHOP_ID, jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
 
 /**
  * Every API route and what each actor gets from it. A route registered on the API router without a
