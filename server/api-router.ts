@@ -4,6 +4,7 @@ import { attachmentsRoutes } from './attachments/attachments.routes';
 import { authRoutes } from './auth/auth.routes';
 import { csrfProtection } from './auth/csrf';
 import { createAuthenticator } from './auth/passport';
+import { requestShopScope } from './auth/request-shop';
 import { sessionMiddleware } from './auth/sessions';
 import { sessionTimeouts } from './auth/session-timeouts';
 import { catalogRoutes } from './catalog/catalog.routes';
@@ -56,6 +57,8 @@ export function createApiRouter(deps: AppDeps): Router {
     sessionTimeouts(config.session, context.clock),
     context.authenticator.initialize(),
     context.authenticator.session(),
+    // From here on every query runs as the signed-in member's shop (server/db/shop-scope.ts).
+    requestShopScope,
   );
   for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes, liveRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));

@@ -1,11 +1,12 @@
 import type { preferencesBody, User } from '../../shared/api/contract';
 import type * as z from 'zod';
 import type { Database } from '../db/client';
+import { acrossShops } from '../db/shop-scope';
 import { AppError } from '../http/app-error';
 import { spendComparisonTime, verifyPassword } from './passwords';
 import { findAccount, findAccountByEmail, updateUnits } from './users.repository';
 
-type Account = User & { demo: boolean; active: boolean };
+type Account = User & { demo: boolean; active: boolean; shopId: number };
 
 const toUser = ({ id, email, name, role, units }: Account): User => ({ id, email, name, role, units });
 
@@ -23,7 +24,8 @@ export async function checkCredentials(
   email: string,
   password: string,
 ): Promise<{ user: User } | { refused: SignInRefusal }> {
-  const account = await findAccountByEmail(db, email);
+  // Sign-in is where a shop is not known yet: the address finds the account in whichever shop it is.
+  const account = await acrossShops(() => findAccountByEmail(db, email));
   if (!account) {
     await spendComparisonTime(password);
     return { refused: 'bad-credentials' };
@@ -43,13 +45,20 @@ export function mayUse(account: { active: boolean; demo: boolean }, demoAccounts
  * The signed-in user of a session, or undefined when the account is gone or no longer allowed: a
  * deactivated member's session is refused here even if its row has not been deleted yet.
  */
-export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<User | undefined> {
-  return usableUser(await findAccount(db, id), demoAccounts);
+export async function sessionUser(db: Database, demoAccounts: boolean, id: number): Promise<SessionUser | undefined> {
+  // Read before the request has a shop: the session's account says which shop it is.
+  return usableUser(await acrossShops(() => findAccount(db, id)), demoAccounts);
 }
 
-/** The user of an account just read, or undefined when there is none or it is no longer allowed. */
-export function usableUser(account: Account | undefined, demoAccounts: boolean): User | undefined {
-  return account && mayUse(account, demoAccounts) ? toUser(account) : undefined;
+/** A signed-in user with the shop their account belongs to. */
+export interface SessionUser {
+  user: User;
+  shopId: number;
+}
+
+/** The user of an account just read, with its shop, or undefined when there is none or it is no longer allowed. */
+export function usableUser(account: Account | undefined, demoAccounts: boolean): SessionUser | undefined {
+  return account && mayUse(account, demoAccounts) ? { user: toUser(account), shopId: account.shopId } : undefined;
 }
 
 /** The error a refused sign-in answers with. */

@@ -3,7 +3,8 @@ import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { User } from '../../shared/api/contract';
 import type { Database } from '../db/client';
-import { checkCredentials, refusal, sessionUser, usableUser, type SignInRefusal } from './auth.service';
+import { checkCredentials, refusal, sessionUser, usableUser, type SessionUser, type SignInRefusal } from './auth.service';
+import { setRequestShop } from './request-shop';
 import { accountReadWithSession } from './session-store';
 
 export type Authenticator = passport.Authenticator;
@@ -24,11 +25,16 @@ export function createAuthenticator(db: Database, demoAccounts: boolean): Authen
     }),
   );
   authenticator.serializeUser<number>((user, done) => done(null, user.id));
+  // passport hands the request to a three-argument deserializer: the account's shop is the request's.
   authenticator.deserializeUser<number>((req: Request, id: number, done: (err: unknown, user?: User | false) => void) => {
+    const settle = (found: SessionUser | undefined) => {
+      if (found) setRequestShop(req, found.shopId);
+      done(null, found?.user ?? false);
+    };
     // Read with the session in this request (session-store.ts), so as fresh as a query of its own.
     const account = accountReadWithSession(req);
-    if (account?.id === id) return done(null, usableUser(account, demoAccounts) ?? false);
-    sessionUser(db, demoAccounts, id).then((user) => done(null, user ?? false), done);
+    if (account?.id === id) return settle(usableUser(account, demoAccounts));
+    sessionUser(db, demoAccounts, id).then(settle, done);
   });
   return authenticator;
 }

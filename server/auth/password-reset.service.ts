@@ -3,7 +3,8 @@ import type { PasswordResetAnswer, passwordResetBody } from '../../shared/api/te
 import { recordActivity } from '../activity/activity.repository';
 import type { Logger } from '../logger';
 import type { RouteContext } from '../http/route-context';
-import { liveMailToken, newMailToken, useMailToken } from '../team/mail-tokens';
+import { acrossShops, inShop } from '../db/shop-scope';
+import { inShopOfLink, liveMailToken, newMailToken, useMailToken } from '../team/mail-tokens';
 import * as team from '../team/team.repository';
 import { passwordResetMail } from '../team/team-mail';
 import { mayUse } from './auth.service';
@@ -16,8 +17,13 @@ import { deleteSessionsOf } from './sessions.repository';
  * tells a stranger who has an account. A new link replaces the member's earlier unused ones.
  */
 export async function requestPasswordReset(context: RouteContext, email: string, origin: string): Promise<void> {
-  const member = await team.findMemberByEmail(context.db, email);
+  // Asked by someone not signed in: the address (unique across shops) finds the member and so the shop.
+  const member = await acrossShops(() => team.findMemberByEmail(context.db, email));
   if (!member || !mayUse(member, context.config.demoAccounts)) return;
+  await inShop(member.shopId, () => sendPasswordReset(context, member, origin));
+}
+
+async function sendPasswordReset(context: RouteContext, member: { id: number; email: string }, origin: string): Promise<void> {
   const now = context.clock();
   const lifetimeMs = context.config.mailLinks.passwordResetMs;
   const { token, tokenHash } = newMailToken();
@@ -43,16 +49,22 @@ export function requestPasswordResetLater(context: RouteContext, email: string, 
 }
 
 /** Whose password a reset link changes, while it works: 404 unknown, 410 used or expired, saying which. */
-export async function passwordResetFor({ db, clock }: RouteContext, token: string): Promise<PasswordResetAnswer> {
-  const reset = await liveMailToken(db, 'password-reset', token, clock());
-  return { email: reset.email, expiresAt: reset.expiresAt.toISOString() };
+export function passwordResetFor({ db, clock }: RouteContext, token: string): Promise<PasswordResetAnswer> {
+  return inShopOfLink(db, 'password-reset', token, async () => {
+    const reset = await liveMailToken(db, 'password-reset', token, clock());
+    return { email: reset.email, expiresAt: reset.expiresAt.toISOString() };
+  });
 }
 
 /**
  * Sets the new password and uses the link up in one transaction, and ends every other session of the
  * member: whoever had the old password is signed out. The session of this request, if any, stays.
  */
-export async function resetPassword({ db, clock }: RouteContext, token: string, body: z.output<typeof passwordResetBody>, sessionId: string | undefined): Promise<void> {
+export function resetPassword(context: RouteContext, token: string, body: z.output<typeof passwordResetBody>, sessionId: string | undefined): Promise<void> {
+  return inShopOfLink(context.db, 'password-reset', token, () => resetPasswordInShop(context, token, body, sessionId));
+}
+
+async function resetPasswordInShop({ db, clock }: RouteContext, token: string, body: z.output<typeof passwordResetBody>, sessionId: string | undefined): Promise<void> {
   const now = clock();
   await liveMailToken(db, 'password-reset', token, now);
   const passwordHash = await hashPassword(body.password);

@@ -4,7 +4,7 @@ import { users } from '../db/schema';
 import type { LengthUnit } from '../../shared/units/length-unit';
 
 /** An account as the server uses it: everything but the password hash. */
-export const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active };
+export const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active, shopId: users.shopId };
 
 /** The account with this address (any case), with its password hash. */
 export async function findAccountByEmail(db: Database, email: string) {
@@ -15,7 +15,7 @@ export async function findAccountByEmail(db: Database, email: string) {
   return row;
 }
 
-/** The account with this id, without its password hash. */
+/** The account with this id and its shop, without its password hash. */
 export async function findAccount(db: Database, id: number) {
   const [row] = await db.select(accountColumns).from(users).where(eq(users.id, id));
   return row;

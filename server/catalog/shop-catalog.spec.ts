@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import { shopFittings } from '../db/schema';
-import { createTestApp, type TestApp } from '../testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
 import { shopCatalog } from './shop-catalog';
 
 describe('shopCatalog', () => {
@@ -15,9 +15,9 @@ describe('shopCatalog', () => {
     const builtin = builtinCatalog();
     const pin = builtin.get('shelf-pin-5')!;
     await t.database.db.insert(shopFittings).values([
-      { fittingId: 'shop-pin', fitting: { ...pin, id: 'shop-pin', name: 'Shop pin' } },
-      { fittingId: 'shelf-pin-5', fitting: { ...pin, name: 'Clashing pin' } },
-      { fittingId: 'broken', fitting: { id: 'broken' } as never },
+      { shopId: DEMO_SHOP_ID, fittingId: 'shop-pin', fitting: { ...pin, id: 'shop-pin', name: 'Shop pin' } },
+      { shopId: DEMO_SHOP_ID, fittingId: 'shelf-pin-5', fitting: { ...pin, name: 'Clashing pin' } },
+      { shopId: DEMO_SHOP_ID, fittingId: 'broken', fitting: { id: 'broken' } as never },
     ]);
     const catalog = await shopCatalog(t.database.db);
     expect(catalog.get('shop-pin')?.name).toBe('Shop pin');
@@ -30,7 +30,7 @@ describe('shopCatalog', () => {
     const light = builtinCatalog().get('lift-light');
     if (light?.purpose !== 'lift-mechanism') throw new Error('the built-in catalog has no light mechanism');
     const { rangeFor: _, ...lift } = light.lift;
-    await t.database.db.insert(shopFittings).values([{ fittingId: 'old-lift', fitting: { ...light, id: 'old-lift', lift } as never }]);
+    await t.database.db.insert(shopFittings).values([{ shopId: DEMO_SHOP_ID, fittingId: 'old-lift', fitting: { ...light, id: 'old-lift', lift } as never }]);
     const stored = (await shopCatalog(t.database.db)).get('old-lift');
     expect(stored?.purpose === 'lift-mechanism' && stored.lift.rangeFor).toBe('mechanism');
   });

@@ -6,6 +6,8 @@ import { recordActivity } from '../activity/activity.repository';
 import { hashPassword } from '../auth/passwords';
 import { ConfigError, loadConfig } from '../config';
 import { databaseTarget, openDatabase, type Database } from '../db/client';
+import { inShop } from '../db/shop-scope';
+import { insertShop, listShops } from '../shops/shops.repository';
 import { acquireDataLock, DataFolderLockedError } from '../db/data-lock';
 import * as team from '../team/team.repository';
 import { EXIT, type CliIo } from './cli-io';
@@ -31,14 +33,21 @@ function problem(io: CliIo, message: string): number {
   return EXIT.unusable;
 }
 
-/** Stores the member and its activity entry in one transaction; refuses an address already taken. */
+/** The shop a member added here joins: the installation's one shop, made as "Workshop" when there is none yet. */
+async function installationShop(db: Database): Promise<number> {
+  const shops = await listShops(db);
+  if (shops.length > 1) throw new RefusedMember('this database holds several shops, and adding a member to one of them is not offered here; nothing was added.');
+  return shops[0]?.id ?? insertShop(db, 'Workshop');
+}
+
+/** Stores the member and its activity entry in one transaction, in the installation's shop; refuses an address already taken in any shop. */
 export async function addMember(db: Database, member: { email: string; name: string; role: 'admin' | 'designer' | 'bench' | 'viewer'; password: string }): Promise<void> {
   const passwordHash = await hashPassword(member.password);
-  await db.transaction(async (tx) => {
-    if (await team.findMemberByEmail(tx, member.email)) throw new RefusedMember(`${member.email} is already a member of the shop; nothing was added.`);
+  if (await team.findMemberByEmail(db, member.email)) throw new RefusedMember(`${member.email} is already a member of the shop; nothing was added.`);
+  await inShop(await installationShop(db), () => db.transaction(async (tx) => {
     const added = await team.insertMember(tx, { email: member.email, name: member.name, role: member.role, passwordHash });
     await recordActivity(tx, { userId: null, action: 'member.added', details: { member: added.id, name: added.name, email: added.email, role: added.role, via: 'command line' } });
-  });
+  }));
 }
 
 /** `borewright admin add`: a member without an invitation, for a database without an admin. */

@@ -9,6 +9,7 @@ import { jobEventsOver, type JobEvents } from '../live/job-events';
 import { JOB_EVENTS_CHANNEL } from '../live/job-events.repository';
 import { postgresListen } from '../live/postgres-listen';
 import { migrationsApplied, readJournal } from './migrations-applied';
+import { SCOPE_RESET, scopeStatements } from './shop-scope';
 import * as schema from './schema';
 
 /**
@@ -57,12 +58,17 @@ const DRIZZLE_PARSERS = Object.fromEntries(
  */
 function withoutQueryParsers(client: PGlite): PGlite {
   const query = client.query.bind(client);
-  client.query = ((text: string, params?: unknown[], options?: { parsers?: unknown }) => {
-    if (!options?.parsers) return query(text, params, options as never);
-    const { parsers: _given, ...rest } = options;
-    return query(text, params, rest as never);
-  }) as PGlite['query'];
+  client.query = ((text: string, params?: unknown[], options?: QueryOptions) => query(text, params, parsersDropped(options))) as PGlite['query'];
   return client;
+}
+
+type QueryOptions = Parameters<PGlite['query']>[2];
+
+/** A query's options without drizzle's parsers, which PGlite already has (withoutQueryParsers). */
+function parsersDropped(options: QueryOptions): QueryOptions {
+  if (!options?.parsers) return options;
+  const { parsers: _given, ...rest } = options;
+  return rest;
 }
 
 /**
@@ -75,6 +81,88 @@ export function databaseTarget(config: { databaseUrl?: string; dataDir: string }
     : { engine: 'pglite', dataDir: path.join(config.dataDir, 'pglite') };
 }
 
+/**
+ * PGlite is one connection: a query in a shop's scope (shop-scope.ts) runs in a transaction of its own
+ * that first takes the app's role and the shop's setting, and a transaction takes them as it opens.
+ * PGlite holds other queries back while a transaction runs, so no other scope's query slips in.
+ */
+function shopScopedPglite(client: PGlite): PGlite {
+  return new Proxy(client, {
+    get(target, property) {
+      if (property === 'query') {
+        return (...args: Parameters<PGlite['query']>) => {
+          const scope = scopeStatements('transaction');
+          if (!scope) return target.query(...args);
+          const [text, params, options] = args;
+          return target.transaction(async (tx) => {
+            await tx.exec(scope);
+            return tx.query(text, params, parsersDropped(options));
+          });
+        };
+      }
+      if (property === 'transaction') {
+        return <T>(work: Parameters<PGlite['transaction']>[0]) => {
+          const scope = scopeStatements('transaction');
+          return target.transaction(async (tx) => {
+            if (scope) await tx.exec(scope);
+            return work(tx) as T;
+          });
+        };
+      }
+      const value: unknown = Reflect.get(target, property, target);
+      return typeof value === 'function' ? value.bind(target) : value;
+    },
+  });
+}
+
+/**
+ * A PostgreSQL pool whose connections, checked out in a shop's scope, take the app's role and the shop's
+ * setting for as long as they are out, and give them back on release. drizzle checks out a connection
+ * for each transaction and asks the pool for every other query.
+ */
+function shopScopedPool(pg: typeof import('pg').default, config: import('pg').PoolConfig): import('pg').Pool {
+  class ShopScopedPool extends pg.Pool {
+    // @ts-expect-error pg's overloads: drizzle calls connect() without a callback; with one, it is pg's own (its query()).
+    override connect(callback?: (...args: unknown[]) => void) {
+      if (callback) return super.connect(callback as never);
+      return this.scopedConnect();
+    }
+
+    private async scopedConnect(): Promise<import('pg').PoolClient> {
+      const connection = await super.connect();
+      const scope = scopeStatements('session');
+      if (!scope) return connection;
+      try {
+        await connection.query(scope);
+      } catch (error) {
+        connection.release(error as Error);
+        throw error;
+      }
+      const release = connection.release.bind(connection);
+      connection.release = (error?: Error | boolean) => {
+        connection.release = release;
+        if (error) return release(error);
+        connection.query(SCOPE_RESET).then(() => release(), (resetError: Error) => release(resetError));
+      };
+      return connection;
+    }
+
+    // @ts-expect-error pg's overloads: drizzle calls query(config, values) and awaits it.
+    override query(...args: Parameters<import('pg').Pool['query']>) {
+      if (!scopeStatements('session') || typeof args[args.length - 1] === 'function') return (super.query as (...a: unknown[]) => unknown)(...args);
+      return (async () => {
+        const connection = await this.scopedConnect();
+        try {
+          return await (connection.query as (...a: unknown[]) => Promise<unknown>)(...args);
+        } finally {
+          connection.release();
+        }
+      })();
+    }
+  }
+  return new ShopScopedPool(config) as unknown as import('pg').Pool;
+}
+
 /** Opens the database the target names. A PGlite data folder must be locked by the caller first (data-lock.ts). */
 export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHandle> {
   if (target.engine === 'postgres') {
@@ -84,7 +172,7 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
       import('drizzle-orm/node-postgres'),
       import('drizzle-orm/node-postgres/migrator'),
     ]);
-    const pool = new pg.Pool({ connectionString: target.url, max: 10 });
+    const pool = shopScopedPool(pg, { connectionString: target.url, max: 10 });
     const db = drizzlePostgres({ client: pool, schema });
     const jobEvents = jobEventsOver(postgresListen(pg.Client, target.url));
     return {
@@ -105,7 +193,7 @@ export async function openDatabase(target: DatabaseTarget): Promise<DatabaseHand
     loadDataDir: target.template ? new Blob([target.template]) : undefined,
     parsers: DRIZZLE_PARSERS,
   });
-  const db = drizzlePglite({ client: withoutQueryParsers(client), schema });
+  const db = drizzlePglite({ client: shopScopedPglite(withoutQueryParsers(client)), schema });
   // One process holds a PGlite database, so its notifications are this server's own.
   const jobEvents = jobEventsOver(async (onPayload) => client.listen(JOB_EVENTS_CHANNEL, onPayload));
   return {

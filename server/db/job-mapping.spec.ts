@@ -3,6 +3,8 @@ import { parseJobDocument } from '../../shared/model/parse-job';
 import type { JobDocument } from '../../shared/model/job-document';
 import { larchLaneKitchen } from '../demo/larch-lane-kitchen';
 import { insertJobDraft, loadJobRows } from '../jobs/jobs.repository';
+import { insertShop } from '../shops/shops.repository';
+import { inShop } from './shop-scope';
 import { openTestDatabase } from '../testing/test-database';
 import type { DatabaseHandle } from './client';
 import { fromJobDocument, toJobDocument } from './job-mapping';
@@ -41,20 +43,22 @@ const everything = parsed({
 
 describe('job mapping', () => {
   let database: DatabaseHandle;
+  let shopId: number;
   beforeAll(async () => {
     database = await openTestDatabase('empty');
+    shopId = await insertShop(database.db, 'Mapping shop');
   });
   afterAll(() => database.close());
 
   it('gives back the same document after a trip through the tables', async () => {
-    const jobId = await database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything)));
+    const jobId = await inShop(shopId, () => database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything))));
     const rows = await loadJobRows(database.db, jobId);
     expect(rows).toBeDefined();
     expect(toJobDocument(rows!)).toEqual(everything);
   });
 
   it('keeps the document order whatever order the rows come in', async () => {
-    const jobId = await database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything)));
+    const jobId = await inShop(shopId, () => database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything))));
     const rows = (await loadJobRows(database.db, jobId))!;
     const shuffled = { ...rows, panels: [...rows.panels].reverse(), bores: [...rows.bores].reverse(), carcasses: [...rows.carcasses].reverse() };
     expect(toJobDocument(shuffled)).toEqual(everything);

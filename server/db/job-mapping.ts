@@ -38,10 +38,10 @@ export type JobRows = {
 
 /** Row fields the document determines; the repository adds the ids the database hands out. */
 export type JobDraft = Pick<JobRow, 'name' | 'client' | 'notes' | 'system' | 'limits' | 'materials'>;
-export type CarcassDraft = Omit<CarcassRow, 'id' | 'jobId'>;
-export type PanelDraft = Omit<PanelRow, 'id' | 'jobId' | 'carcassId' | 'version' | 'updatedAt' | 'statusBy' | 'statusAt'>;
-export type PlacementDraft = Omit<PlacementRow, 'id' | 'panelId'>;
-export type BoreDraft = Omit<BoreRow, 'id' | 'panelId'>;
+export type CarcassDraft = Omit<CarcassRow, 'id' | 'shopId' | 'jobId'>;
+export type PanelDraft = Omit<PanelRow, 'id' | 'shopId' | 'jobId' | 'carcassId' | 'version' | 'updatedAt' | 'statusBy' | 'statusAt'>;
+export type PlacementDraft = Omit<PlacementRow, 'id' | 'shopId' | 'panelId'>;
+export type BoreDraft = Omit<BoreRow, 'id' | 'shopId' | 'panelId'>;
 
 export type JobDocumentDraft = {
   job: JobDraft;

@@ -1,7 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
 import { createJob, jobAsDocument, listJobs } from '../jobs/jobs.service';
+import { DEMO_SHOP_ID } from '../testing/test-app';
 import { openTestDatabase } from '../testing/test-database';
+import { inShop } from './shop-scope';
 import type { DatabaseHandle } from './client';
 import { jobs, users } from './schema';
 import { dumpTables, restoreTables, RestoreError, type Backup } from './table-dump';
@@ -13,7 +15,7 @@ describe('backup and restore', () => {
   beforeAll(async () => {
     [source, target] = await Promise.all([openTestDatabase('demo'), openTestDatabase('empty')]);
     const [owner] = await source.db.select().from(users).limit(1);
-    await createJob(source.db, { ...owner }, { name: 'Job with "quotes" and ünïcode <b>', client: 'O\'Brien' });
+    await inShop(DEMO_SHOP_ID, () => createJob(source.db, { ...owner }, { name: 'Job with "quotes" and ünïcode <b>', client: 'O\'Brien' }));
     // Through JSON and back, as the file on disk would be.
     backup = JSON.parse(JSON.stringify(await dumpTables(source.db, new Date('2030-01-02T03:04:05Z'))));
   });
@@ -32,7 +34,7 @@ describe('backup and restore', () => {
   it('continues every id after the restored ones', async () => {
     const [{ max }] = await target.db.select({ max: sql<number>`max(${jobs.id})` }).from(jobs);
     const [owner] = await target.db.select().from(users).limit(1);
-    const created = await createJob(target.db, owner, { name: 'After the restore' });
+    const created = await inShop(DEMO_SHOP_ID, () => createJob(target.db, owner, { name: 'After the restore' }));
     expect(created.id).toBe(max + 1);
   });
 
@@ -59,7 +61,7 @@ describe('backup and restore', () => {
   });
 
   it('holds the invitation and reset links and the outbox, and restores them', () => {
-    expect(Object.keys(backup.tables)).toEqual(['users', 'shop_fittings', 'shop_settings', 'jobs', 'carcasses', 'panels', 'placements', 'bores', 'activity', 'attachments', 'mail_tokens', 'outbox']);
+    expect(Object.keys(backup.tables)).toEqual(['shops', 'users', 'shop_fittings', 'shop_settings', 'jobs', 'carcasses', 'panels', 'placements', 'bores', 'activity', 'attachments', 'mail_tokens', 'outbox']);
   });
 
   it('refuses a database that already has rows, and a file of another kind', async () => {

@@ -1,16 +1,16 @@
 import { readFileSync } from 'node:fs';
 import { getTableName, sql, type SQL } from 'drizzle-orm';
 import type { Database } from './client';
-import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, shopSettings, users } from './schema';
+import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, shopSettings, shops, users } from './schema';
 
 /**
- * Every table a backup holds, parents before children (the order a restore inserts them): the shop's
+ * Every table a backup holds, parents before children (the order a restore inserts them): the shops, their
  * data and settings, its invitation and reset links (an open invitation still works after a restore) and the
  * outbox. Left out are the transient tables: sessions (everyone signs in again) and the sign-in
  * throttle's counters and usual addresses, and what the live streams keep (job_events, job_presence,
  * pack_progress).
  */
-const TABLES = [users, shopFittings, shopSettings, jobs, carcasses, panels, placements, bores, activity, attachments, mailTokens, outbox];
+const TABLES = [shops, users, shopFittings, shopSettings, jobs, carcasses, panels, placements, bores, activity, attachments, mailTokens, outbox];
 
 export const BACKUP_FORMAT = 'borewright.backup/1';
 

@@ -6,19 +6,27 @@ import type { Database } from '../db/client';
 import { countJobs } from '../jobs/jobs.repository';
 import { importJob } from '../jobs/jobs.service';
 import { clinicStorageWall } from './clinic-storage-wall';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from './greyfield-people';
+import { inShop } from '../db/shop-scope';
+import { countShops, insertShop } from '../shops/shops.repository';
+import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SHOP_NAME } from './greyfield-people';
 import { larchLaneKitchen } from './larch-lane-kitchen';
 import { loftStudyBookcase } from './loft-study-bookcase';
 
 export const DEMO_JOBS: readonly JobDocumentInput[] = [larchLaneKitchen, loftStudyBookcase, clinicStorageWall];
 
 /**
- * Fills an empty database with the Greyfield Joinery demo shop: its four people and three jobs,
- * stored through the same import as an uploaded file. A database with any user or job is left alone.
- * Returns whether it seeded.
+ * Fills an empty database with the Greyfield Joinery demo shop: the shop, its four people and three jobs,
+ * stored through the same import as an uploaded file, as that shop. A database with any shop, user or
+ * job is left alone. Returns whether it seeded.
  */
 export async function seedDemoShop(db: Database): Promise<boolean> {
-  if ((await countUsers(db)) > 0 || (await countJobs(db)) > 0) return false;
+  if ((await countShops(db)) > 0 || (await countUsers(db)) > 0 || (await countJobs(db)) > 0) return false;
+  const shopId = await insertShop(db, DEMO_SHOP_NAME);
+  await inShop(shopId, () => seedPeopleAndJobs(db));
+  return true;
+}
+
+async function seedPeopleAndJobs(db: Database): Promise<void> {
   // One hash for all four: the password is published in the README, so a shared salt gives nothing away.
   const hash = await hashPassword(DEMO_PASSWORD);
   const people = await insertUsers(db, DEMO_PEOPLE.map((p) => ({ ...p, passwordHash: hash, demo: true })));
@@ -28,5 +36,4 @@ export async function seedDemoShop(db: Database): Promise<boolean> {
     if (!parsed.ok) throw new Error(`demo job "${input.name}" is not a valid document:\n${parsed.errors.join('\n')}`);
     await importJob(db, { id: owner.id, email: owner.email, name: owner.name, role: owner.role, units: owner.units }, parsed.value);
   }
-  return true;
 }

@@ -2,6 +2,7 @@ import type { AddressInfo } from 'node:net';
 import { SMTPServer } from 'smtp-server';
 import type { Database } from '../db/client';
 import type { Logger } from '../logger';
+import { inShop } from '../db/shop-scope';
 import { insertOutboxMessage } from './outbox.repository';
 import { parseMail } from './parse-mail';
 
@@ -18,6 +19,9 @@ async function readAll(stream: NodeJS.ReadableStream): Promise<Buffer> {
   for await (const chunk of stream) chunks.push(Buffer.from(chunk as Buffer));
   return Buffer.concat(chunks);
 }
+
+/** Which shop's outbox a caught message goes to: set by our own mailer (mailer.ts), read only here. */
+export const SHOP_HEADER = 'X-Borewright-Shop';
 
 /**
  * The local mail catcher (design.md §5): an SMTP server on 127.0.0.1 that keeps every message it receives
@@ -37,14 +41,16 @@ export function startCatcher(db: Database, logger: Logger): Promise<Catcher> {
         .then(async (raw) => {
           if (stream.sizeExceeded) throw Object.assign(new Error('The message is too large.'), { responseCode: 552 });
           const mail = await parseMail(raw);
-          await insertOutboxMessage(db, {
+          const shop = Number(mail.headers.get(SHOP_HEADER.toLowerCase()) ?? '');
+          if (!Number.isSafeInteger(shop) || shop <= 0) throw Object.assign(new Error('The message names no shop.'), { responseCode: 554 });
+          await inShop(shop, () => insertOutboxMessage(db, {
             sender: mail.from?.text ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ''),
             recipients: session.envelope.rcptTo.map((r) => r.address),
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             attachments: mail.attachments.map((a) => ({ name: a.filename ?? 'attachment', contentType: a.contentType, bytes: a.size })),
             raw,
-          });
+          }));
         })
         .then(
           () => callback(),

@@ -6,7 +6,7 @@ import { outbox } from '../db/schema';
 import { signPackLink } from '../packs/pack-links';
 import { ApiClient, signedIn } from '../testing/api-client';
 import { binaryBody } from '../testing/binary-body';
-import { createTestApp, TEST_SESSION_SECRET, type TestApp } from '../testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, TEST_SESSION_SECRET, type TestApp } from '../testing/test-app';
 
 const MANIFEST = /bench pack\/manifest\.json$/;
 
@@ -90,11 +90,11 @@ describe('sending a pack by mail through the local catcher', () => {
 
   it('refuses a link it did not sign with 403, and an expired one with 410', async () => {
     const anyone = new ApiClient(t.app);
-    const forged = signPackLink('another secret that is long enough to sign', { jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
+    const forged = signPackLink('another secret that is long enough to sign', { shopId: DEMO_SHOP_ID, jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
     expect((await anyone.get(`/api/pack-links/${forged}`).expect(403)).body.error.code).toBe('bad-link');
     expect((await anyone.get('/api/pack-links/nonsense').expect(403)).body.error.code).toBe('bad-link');
     // The app's clock stands at its start, so the link expired a day before that.
-    const expired = signPackLink(TEST_SESSION_SECRET, { jobId, paper: 'a4', expiresAt: Date.now() - 86_400_000 });
+    const expired = signPackLink(TEST_SESSION_SECRET, { shopId: DEMO_SHOP_ID, jobId, paper: 'a4', expiresAt: Date.now() - 86_400_000 });
     const res = await anyone.get(`/api/pack-links/${expired}`).expect(410);
     expect(res.body.error).toMatchObject({ code: 'link-expired', message: expect.stringContaining('expired') });
   });

@@ -2,7 +2,8 @@ import nodemailer from 'nodemailer';
 import type { Config } from '../config';
 import type { Database } from '../db/client';
 import type { Logger } from '../logger';
-import { startCatcher } from './catcher';
+import { currentShop } from '../db/shop-scope';
+import { SHOP_HEADER, startCatcher } from './catcher';
 
 /** A message as the features write it; the mailer adds the shop's sender address. */
 export interface OutgoingMail {
@@ -37,7 +38,9 @@ export async function startMail(config: Pick<Config, 'smtpUrl' | 'mailFrom'>, db
   const transport = catcher ? nodemailer.createTransport({ host: '127.0.0.1', port: catcher.port, secure: false, ignoreTLS: true }) : nodemailer.createTransport(config.smtpUrl);
   const mailer: Mailer = {
     async send({ fromName, ...mail }) {
-      await transport.sendMail({ ...mail, from: { name: fromName, address: config.mailFrom } });
+      // The catcher keeps each message in the outbox of the shop whose work sent it.
+      const headers = catcher ? { [SHOP_HEADER]: String(currentShop() ?? '') } : undefined;
+      await transport.sendMail({ ...mail, headers, from: { name: fromName, address: config.mailFrom } });
     },
   };
   return {

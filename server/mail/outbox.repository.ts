@@ -11,7 +11,7 @@ export async function insertOutboxMessage(db: Database, message: OutboxDraft): P
 
 /** The latest messages, newest first, without their raw bytes. */
 export function listOutbox(db: Database, limit: number) {
-  const { raw: _raw, ...summary } = getTableColumns(outbox);
+  const { raw: _raw, shopId: _shop, ...summary } = getTableColumns(outbox);
   return db.select(summary).from(outbox).orderBy(desc(outbox.at), desc(outbox.id)).limit(limit);
 }
 

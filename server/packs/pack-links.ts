@@ -4,6 +4,8 @@ import { AppError } from '../http/app-error';
 
 /** What a pack link grants: one job's pack on one paper, until a time. */
 export interface PackLink {
+  /** The shop of the member who sent it: whoever opens the link is signed in to none. */
+  shopId: number;
   jobId: number;
   paper: PaperName;
   /** Milliseconds since the epoch. */
@@ -20,7 +22,7 @@ const mac = (secret: string, payload: string) => createHmac('sha256', secret).up
 
 /** The token of a link: the grant in base64url, a dot, and its HMAC-SHA256 under the session secret. */
 export function signPackLink(secret: string, link: PackLink): string {
-  const payload = Buffer.from(JSON.stringify([link.jobId, link.paper, link.expiresAt])).toString('base64url');
+  const payload = Buffer.from(JSON.stringify([link.jobId, link.paper, link.expiresAt, link.shopId])).toString('base64url');
   return `${payload}.${mac(secret, payload).toString('base64url')}`;
 }
 
@@ -33,9 +35,11 @@ export function verifyPackLink(secret: string, token: string, now: Date): PackLi
   const given = Buffer.from(signature, 'base64url');
   const expected = mac(secret, payload);
   if (given.length !== expected.length || !timingSafeEqual(given, expected)) throw refused();
-  const [jobId, paper, expiresAt] = JSON.parse(Buffer.from(payload, 'base64url').toString('utf8')) as [number, PaperName, number];
+  const [jobId, paper, expiresAt, shopId] = JSON.parse(Buffer.from(payload, 'base64url').toString('utf8')) as [number, PaperName, number, number | undefined];
+  // A link signed before shops were kept in links names none; it is sent again rather than guessed.
+  if (shopId === undefined) throw refused();
   if (now.getTime() > expiresAt) {
     throw new AppError(410, 'link-expired', `This download link expired on ${new Date(expiresAt).toISOString().slice(0, 10)}. Ask for the pack to be sent again.`);
   }
-  return { jobId, paper, expiresAt };
+  return { shopId, jobId, paper, expiresAt };
 }

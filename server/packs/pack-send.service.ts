@@ -5,6 +5,7 @@ import type { PackSent, packSendBody } from '../../shared/api/pack-contract';
 import { PAPER } from '../../shared/export/paper';
 import { recordActivity } from '../activity/activity.repository';
 import type { RouteContext } from '../http/route-context';
+import { requireShop } from '../db/shop-scope';
 import { PACK_LINK_DAYS, signPackLink } from './pack-links';
 import { jobPackOrder } from './packs.service';
 
@@ -36,7 +37,7 @@ export async function sendPack(context: RouteContext, actor: User, jobId: number
   const jobName = order.job.name;
   const zip = await zipUpTo(making.zip, context.config.packAttachLimitBytes);
   const expiresAt = new Date(date.getTime() + PACK_LINK_DAYS * 86_400_000);
-  const link = zip ? undefined : `${origin}/api/pack-links/${signPackLink(context.sessionSecret, { jobId, paper: body.paper, expiresAt: expiresAt.getTime() })}`;
+  const link = zip ? undefined : `${origin}/api/pack-links/${signPackLink(context.sessionSecret, { shopId: requireShop(), jobId, paper: body.paper, expiresAt: expiresAt.getTime() })}`;
 
   const lines = [
     `${actor.name} sent you the bench pack of “${jobName}”, with the template sheets on ${PAPER[body.paper].name}.`,

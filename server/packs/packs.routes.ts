@@ -8,6 +8,7 @@ import { packZipStream } from '../export/pack-zip';
 import { AppError } from '../http/app-error';
 import { jsonBody } from '../http/body';
 import type { RouteContext } from '../http/route-context';
+import { inShop } from '../db/shop-scope';
 import { verifyPackLink } from './pack-links';
 import { sendPack } from './pack-send.service';
 import * as packs from './packs.service';
@@ -88,8 +89,8 @@ export function packsRoutes(router: Router, context: RouteContext): void {
 
   // No sign-in: the signed token is the permission, for a recipient without an account.
   router.get('/pack-links/:token', async (req, res) => {
-    const { jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
+    const { shopId, jobId, paper } = verifyPackLink(context.sessionSecret, req.params.token, clock());
     // Whoever opens a mailed link has told us no units: the pack is in millimetres, as the job is.
-    await streamPack(res, context, jobId, paper, linkOrigin(context.config), 'mm');
+    await inShop(shopId, () => streamPack(res, context, jobId, paper, linkOrigin(context.config), 'mm'));
   });
 }

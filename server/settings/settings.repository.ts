@@ -3,20 +3,19 @@ import type { MachineSettings } from '../../shared/export/machine-settings';
 import type { Database } from '../db/client';
 import { shopSettings, users } from '../db/schema';
 
-/** The shop's one settings row, with the name of who saved it; none until an admin saves them. */
+/** The shop's settings row (the scope's shop has one at most), with the name of who saved it; none until an admin saves them. */
 export async function findShopSettings(db: Database) {
   const [row] = await db
     .select({ machine: shopSettings.machine, updatedAt: shopSettings.updatedAt, updatedBy: users.name })
     .from(shopSettings)
-    .leftJoin(users, eq(users.id, shopSettings.updatedBy))
-    .where(eq(shopSettings.id, 1));
+    .leftJoin(users, eq(users.id, shopSettings.updatedBy));
   return row;
 }
 
-/** Writes the machine settings into the one row, making it the first time. */
+/** Writes the machine settings into the shop's row, making it the first time. */
 export async function saveMachineSettings(db: Database, machine: MachineSettings, updatedBy: number, updatedAt: Date) {
   await db
     .insert(shopSettings)
-    .values({ id: 1, machine, updatedBy, updatedAt })
-    .onConflictDoUpdate({ target: shopSettings.id, set: { machine, updatedBy, updatedAt } });
+    .values({ machine, updatedBy, updatedAt })
+    .onConflictDoUpdate({ target: shopSettings.shopId, set: { machine, updatedBy, updatedAt } });
 }

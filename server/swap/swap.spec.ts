@@ -10,7 +10,7 @@ import { activity, panels, shopFittings } from '../db/schema';
 import { larchLaneKitchen } from '../demo/larch-lane-kitchen';
 import { ApiClient, signedIn } from '../testing/api-client';
 import { attachmentName, binaryBody } from '../testing/binary-body';
-import { createTestApp, type TestApp } from '../testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
 
 const HINGES = 'from=hinge-full-overlay-45&to=hinge-full-overlay-48';
 const RUNNERS = 'from=runner-500&to=runner-400';
@@ -84,7 +84,7 @@ describe('swap check API', () => {
         ],
         hinge: { cupBore: 'cup', overlay: 'full', constant: 13, boringDistance: { min: 3, max: 7 }, openingAngle: 110, source },
       });
-      await t.database.db.insert(shopFittings).values({ fittingId: shop.id, fitting: shop });
+      await t.database.db.insert(shopFittings).values({ shopId: DEMO_SHOP_ID, fittingId: shop.id, fitting: shop });
       try {
         const job = await kitchen();
         const { report } = swapAnswer.parse((await viewer.get(`/api/jobs/${job.job.id}/swap?from=hinge-full-overlay-45&to=shop-hinge-52`).expect(200)).body);

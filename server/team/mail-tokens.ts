@@ -2,6 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, gt, isNull } from 'drizzle-orm';
 import { LINK_ERRORS, mailTokenShape } from '../../shared/api/team-contract';
 import type { Database } from '../db/client';
+import { acrossShops, inShop } from '../db/shop-scope';
 import { mailTokens } from '../db/schema';
 import type { MailTokenPurpose } from '../db/schema/mail-tokens';
 import { AppError } from '../http/app-error';
@@ -57,6 +58,16 @@ async function findByToken(db: Database, purpose: MailTokenPurpose, token: strin
     .from(mailTokens)
     .where(and(eq(mailTokens.tokenHash, hashMailToken(token)), eq(mailTokens.purpose, purpose)));
   return row;
+}
+
+/**
+ * Runs `work` as the shop the link belongs to: a link is opened by someone not signed in, so its token
+ * is the one thing that says which shop (found across shops, by its hash alone). With no such link,
+ * `work` runs as no shop and finds nothing, answering as for any unknown link.
+ */
+export async function inShopOfLink<T>(db: Database, purpose: MailTokenPurpose, token: string, work: () => Promise<T>): Promise<T> {
+  const row = await acrossShops(() => findByToken(db, purpose, token));
+  return inShop(row?.shopId ?? null, work);
 }
 
 /** The link's row while it still works; otherwise 404 (unknown or withdrawn) or 410 (used, expired), saying which. */

@@ -24,7 +24,7 @@ export async function findMember(db: Database, id: number, lock = false): Promis
 /** The member with this address (any case), if any. */
 export async function findMemberByEmail(db: Database, email: string) {
   const [row] = await db
-    .select({ ...memberColumns, demo: users.demo })
+    .select({ ...memberColumns, demo: users.demo, shopId: users.shopId })
     .from(users)
     .where(sameAddress(users.email, email));
   return row;

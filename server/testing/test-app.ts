@@ -6,6 +6,9 @@ import { startMail, type Mailer } from '../mail/mailer';
 import { PackPool } from '../packs/pack-pool';
 import { openTestDatabase } from './test-database';
 
+/** The demo template's shop: the seed makes the first shop of an empty database. */
+export const DEMO_SHOP_ID = 1;
+
 /** The session secret of every test app: tests sign pack links with it. */
 export const TEST_SESSION_SECRET = 'a test secret that is long enough to sign cookies';
 

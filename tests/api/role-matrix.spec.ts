@@ -6,7 +6,7 @@ import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { signPackLink } from '../../server/packs/pack-links';
 import { firstBytes } from '../../server/testing/live-stream-reader';
-import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, TEST_SESSION_SECRET, testConfig, type TestApp } from '../../server/testing/test-app';
 import { ACTORS, emailOf, type Actor, type Fixture, type Row } from './role-matrix-row';
 import { CATALOG_ROUTES } from './role-matrix.catalog';
 import { BENCH_ROUTES } from './role-matrix.bench';
@@ -15,10 +15,14 @@ import { SWAP_ROUTES } from './role-matrix.swap';
 import { TEAM_ROUTES } from './role-matrix.team';
 import { UPLOADS_ROUTES } from './role-matrix.uploads';
 import { PLANNED_CARCASS } from './planned-carcass';
+import JSZip from 'jszip';
+import { binaryBody } from '../../server/testing/binary-body';
+import { addSecondShop, type SecondShop } from '../../server/testing/second-shop';
+import { OTHER_SHOP_REQUESTS, otherShopExpect } from './role-matrix.other-shop';
 
 /** A message in the outbox with the pack attached, sent before the rows run. */
 let caughtMessageId = 0;
-const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
+const packLink = (jobId: number) => signPackLink(TEST_SESSION_SECRET, { shopId: DEMO_SHOP_ID, jobId, paper: 'a4', expiresAt: Date.now() + 60_000 });
 
 /**
  * Every API route and what each actor gets from it. A route registered on the API router without a
@@ -99,6 +103,25 @@ describe('role matrix', () => {
   let t: TestApp;
   let owner: ApiClient;
   const clients = new Map<Actor, ApiClient>();
+  /** A second shop on the same server, with one of everything (server/testing/second-shop.ts). */
+  let other: SecondShop;
+  let otherBefore: unknown;
+
+  /** Everything the second shop's admin can read of it, to show that nothing asked from the demo shop changed it. */
+  async function otherShopState() {
+    const read = async (url: string) => (await other.admin.get(url).expect(200)).body;
+    return {
+      document: await read(`/api/jobs/${other.jobId}/document`),
+      jobs: await read('/api/jobs?archived=false'),
+      archived: await read('/api/jobs?archived=true'),
+      team: await read('/api/team'),
+      catalog: await read('/api/catalog'),
+      attachments: await read(`/api/jobs/${other.jobId}/attachments`),
+      settings: await read('/api/settings/machine'),
+      outbox: await read('/api/outbox'),
+      activity: await read('/api/activity'),
+    };
+  }
 
   async function clientFor(actor: Actor): Promise<ApiClient> {
     if (actor !== 'signed out') return signedIn(t.app, emailOf(actor));
@@ -122,6 +145,8 @@ describe('role matrix', () => {
     for (const actor of ACTORS) clients.set(actor, await clientFor(actor));
     await owner.post(`/api/jobs/${(await fixture()).jobId}/pack/send`).send({ to: ['bench@greyfield.example'], paper: 'a4' }).expect(200);
     caughtMessageId = (await owner.get('/api/outbox').expect(200)).body.messages[0].id;
+    other = await addSecondShop(t);
+    otherBefore = await otherShopState();
   });
   afterAll(() => t.close());
 
@@ -143,4 +168,49 @@ describe('role matrix', () => {
       expect(got).toEqual(Object.fromEntries(ACTORS.map((actor, i) => [actor, row.expect[i]])));
     });
   }
+
+  // Isolation from outside: the demo shop's people, with the second shop's ids. Never a 403 that a row of
+  // the demo shop would not get too: that would tell them the id exists.
+  describe('with ids of another shop', () => {
+    for (const [route, row] of Object.entries(ROUTES)) {
+      it(route, async () => {
+        const got: Record<string, number> = {};
+        for (const actor of ACTORS) {
+          const client = row.ownClient ? await clientFor(actor) : clients.get(actor)!;
+          const override = OTHER_SHOP_REQUESTS[route];
+          got[actor] = (await (override ? override(client, other) : row.request(client, { jobId: other.jobId, panel: other.panel }, actor))).status;
+        }
+        const expected = otherShopExpect(route, row.expect);
+        expect(got).toEqual(Object.fromEntries(ACTORS.map((actor, i) => [actor, expected[i]])));
+      });
+    }
+
+    it('changed nothing of the other shop', async () => {
+      expect(await otherShopState()).toEqual(otherBefore);
+    });
+
+    it("shows none of the other shop's things in the demo shop's lists, exports, packs, labels and mail", async () => {
+      const text = async (url: string) => JSON.stringify((await owner.get(url).expect(200)).body);
+      const lists = [
+        await text('/api/jobs?archived=false'),
+        await text('/api/jobs?archived=true'),
+        await text('/api/catalog'),
+        await text('/api/team'),
+        await text('/api/activity'),
+        await text('/api/outbox'),
+        await text('/api/mail/recipients'),
+        await text('/api/settings/machine'),
+      ];
+      for (const list of lists) for (const thing of ['second-shop', 'Second Shop', 'Second Admin']) expect(list).not.toContain(thing);
+      const jobIds = (await owner.get('/api/jobs?archived=false').expect(200)).body.jobs.map((j: { id: number }) => j.id);
+      expect(jobIds).not.toContain(other.jobId);
+      // The demo shop's own pack and document name only its own job and fittings: every text file of the zip is read.
+      const ownJob = jobIds[0];
+      const pack = await owner.get(`/api/jobs/${ownJob}/pack.zip`).buffer(true).parse(binaryBody).expect(200);
+      const zip = await JSZip.loadAsync(pack.body as Buffer);
+      const texts = await Promise.all(Object.values(zip.files).filter((f) => !f.dir && /\.(csv|svg|dxf|json|txt|nc|html)$/.test(f.name)).map((f) => f.async('string')));
+      expect(texts.length).toBeGreaterThan(0);
+      for (const file of [...texts, await text(`/api/jobs/${ownJob}/document`)]) expect(file).not.toContain(other.fittingId);
+    });
+  });
 });

@@ -6,7 +6,7 @@ import { seedDemoShop } from '../../server/demo/seed-demo';
 export async function freshDemoDatabase(url: string): Promise<DatabaseHandle> {
   const database = await openDatabase({ engine: 'postgres', url });
   await database.migrate();
-  await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity, job_events, job_presence, pack_progress restart identity cascade`);
+  await database.db.execute(sql`truncate shops, users, sessions, jobs, carcasses, panels, placements, bores, activity, job_events, job_presence, pack_progress restart identity cascade`);
   await seedDemoShop(database.db);
   return database;
 }

@@ -1,9 +1,11 @@
-import { sql } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PanelRecord } from '../../shared/api/contract';
 import { createApp } from '../../server/app';
 import { openDatabase, type DatabaseHandle } from '../../server/db/client';
-import { sessions } from '../../server/db/schema';
+import { jobs, sessions, shops } from '../../server/db/schema';
+import { inShop } from '../../server/db/shop-scope';
+import { insertShop } from '../../server/shops/shops.repository';
 import { dumpTables, restoreTables } from '../../server/db/table-dump';
 import { seedDemoShop } from '../../server/demo/seed-demo';
 import { jobAsDocument, listJobs } from '../../server/jobs/jobs.service';
@@ -117,12 +119,36 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     expect((admins as unknown as { rows: { n: number }[] }).rows[0].n).toBe(1);
   });
 
+  it("keeps each shop's rows to itself with row-level security, even for a query that names no shop", async () => {
+    const db = database.db;
+    const [{ id: demoShop }] = await db.select({ id: shops.id }).from(shops);
+    const otherShop = await insertShop(db, 'Other Shop');
+    const [{ id: otherJob }] = await inShop(otherShop, () => db.insert(jobs).values({ name: 'Other job', system: {} as never, limits: {} as never, materials: [] }).returning({ id: jobs.id }));
+    // The app's role on PostgreSQL too: not a superuser, not the owner, no way around the policies.
+    const role = await inShop(demoShop, () => db.execute(sql`select current_user as name, rolsuper, rolbypassrls from pg_roles where rolname = current_user`));
+    expect((role as unknown as { rows: unknown[] }).rows).toEqual([{ name: 'borewright_app', rolsuper: false, rolbypassrls: false }]);
+    // No filter on shop at all, as a forgetful repository would write it, both outside and inside a transaction.
+    const seen = await inShop(demoShop, () => db.select({ id: jobs.id, shopId: jobs.shopId }).from(jobs));
+    expect(seen.length).toBeGreaterThan(0);
+    expect(seen.filter((j) => j.shopId !== demoShop)).toEqual([]);
+    const inTransaction = await inShop(demoShop, () => db.transaction((tx) => tx.select({ id: jobs.id }).from(jobs).where(eq(jobs.id, otherJob))));
+    expect(inTransaction).toEqual([]);
+    expect(await inShop(null, () => db.$count(jobs))).toBe(0);
+    expect(await inShop(otherShop, () => db.$count(jobs))).toBe(1);
+    // And from outside: the other shop's job is not there for the demo shop's designer, and is left as it was.
+    await designer.get(`/api/jobs/${otherJob}`).expect(404);
+    await designer.patch(`/api/jobs/${otherJob}`).send({ name: 'Taken over', version: 1 }).expect(404);
+    expect((await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, otherJob)))[0].name).toBe('Other job');
+    // A pooled connection goes back as the connecting role: outside any shop it sees every shop's rows again.
+    expect(await db.$count(jobs)).toBe(seen.length + 1);
+  });
+
   it('restores a backup made with PGlite, so a shop can move to a PostgreSQL server', async () => {
     const local = await openDatabase({ engine: 'pglite' });
     await local.migrate();
     await seedDemoShop(local.db);
     const backup = JSON.parse(JSON.stringify(await dumpTables(local.db, new Date())));
-    await database.db.execute(sql`truncate users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
+    await database.db.execute(sql`truncate shops, users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
     await restoreTables(database.db, backup);
     for (const { id } of await listJobs(local.db, false)) expect(await jobAsDocument(database.db, id)).toEqual(await jobAsDocument(local.db, id));
     await local.close();

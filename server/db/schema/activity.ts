@@ -1,4 +1,5 @@
 import { index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { jobs } from './jobs';
 import { users } from './users';
 
@@ -10,6 +11,7 @@ export const activity = pgTable(
   'activity',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     userId: integer('user_id').references(() => users.id, { onDelete: 'set null' }),
     jobId: integer('job_id').references(() => jobs.id, { onDelete: 'cascade' }),
@@ -17,5 +19,5 @@ export const activity = pgTable(
     action: text('action').notNull(),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
   },
-  (t) => [index('activity_job_at_idx').on(t.jobId, t.at), index('activity_at_idx').on(t.at)],
+  (t) => [index('activity_shop_at_idx').on(t.shopId, t.at), index('activity_job_at_idx').on(t.jobId, t.at), index('activity_at_idx').on(t.at)],
 );

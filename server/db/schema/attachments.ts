@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { check, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { bytes } from './bytes';
 import { jobs } from './jobs';
 import { users } from './users';
@@ -9,6 +10,7 @@ export const attachments = pgTable(
   'attachments',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     jobId: integer('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -19,5 +21,5 @@ export const attachments = pgTable(
     uploadedBy: integer('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
     uploadedAt: timestamp('uploaded_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('attachments_job_idx').on(t.jobId), check('attachments_size_check', sql`${t.size} >= 0`)],
+  (t) => [index('attachments_shop_idx').on(t.shopId), index('attachments_job_idx').on(t.jobId), check('attachments_size_check', sql`${t.size} >= 0`)],
 );

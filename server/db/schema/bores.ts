@@ -1,4 +1,5 @@
-import { check, doublePrecision, integer, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { check, doublePrecision, index, integer, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { sql } from 'drizzle-orm';
 import { edge, face, type Edge, type Face } from '../../../shared/model/job-document';
 import { panels } from './panels';
@@ -12,6 +13,7 @@ export const bores = pgTable(
   'bores',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     panelId: integer('panel_id')
       .notNull()
       .references(() => panels.id, { onDelete: 'cascade' }),
@@ -26,6 +28,7 @@ export const bores = pgTable(
     depth: doublePrecision('depth').notNull(),
   },
   (t) => [
+    index('bores_shop_idx').on(t.shopId),
     unique('bores_panel_key_unique').on(t.panelId, t.key),
     check('bores_face_check', oneOf(t.face, face.options)),
     check('bores_edge_check', oneOf(t.edge, edge.options)),

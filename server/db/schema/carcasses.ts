@@ -1,4 +1,5 @@
-import { check, doublePrecision, integer, jsonb, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { check, doublePrecision, index, integer, jsonb, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { jobs } from './jobs';
 import { oneOf } from './check';
 
@@ -6,6 +7,7 @@ export const carcasses = pgTable(
   'carcasses',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     jobId: integer('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -21,5 +23,5 @@ export const carcasses = pgTable(
     /** The planner's description it was made from (the document's `plannedFrom`); null when drawn by hand. */
     plannedFrom: jsonb('planned_from').$type<Record<string, unknown>>(),
   },
-  (t) => [unique('carcasses_job_key_unique').on(t.jobId, t.key), check('carcasses_mounting_check', oneOf(t.mounting, ['floor', 'wall']))],
+  (t) => [index('carcasses_shop_idx').on(t.shopId), unique('carcasses_job_key_unique').on(t.jobId, t.key), check('carcasses_mounting_check', oneOf(t.mounting, ['floor', 'wall']))],
 );

@@ -1,4 +1,5 @@
 /** Every table of the database; drizzle-kit reads this file, the client gets it as its schema. */
+export { shops } from './shops';
 export { users } from './users';
 export { sessions } from './sessions';
 export { jobs } from './jobs';

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import type { Material, ShopLimits, SystemSettings } from '../../../shared/model/job-document';
 
 /**
@@ -10,6 +11,7 @@ export const jobs = pgTable(
   'jobs',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     name: text('name').notNull(),
     client: text('client'),
     notes: text('notes'),
@@ -25,5 +27,5 @@ export const jobs = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [check('jobs_version_check', sql`${t.version} >= 1`)],
+  (t) => [index('jobs_shop_updated_idx').on(t.shopId, t.updatedAt), check('jobs_version_check', sql`${t.version} >= 1`)],
 );

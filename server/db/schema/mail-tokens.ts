@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { check, index, integer, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { role, type Role } from '../../../shared/api/contract';
 import { oneOf } from './check';
 import { users } from './users';
@@ -16,6 +17,7 @@ export const mailTokens = pgTable(
   'mail_tokens',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     purpose: text('purpose').$type<MailTokenPurpose>().notNull(),
     tokenHash: text('token_hash').notNull(),
     email: text('email').notNull(),
@@ -29,6 +31,7 @@ export const mailTokens = pgTable(
     usedAt: timestamp('used_at', { withTimezone: true }),
   },
   (t) => [
+    index('mail_tokens_shop_idx').on(t.shopId),
     uniqueIndex('mail_tokens_hash_unique').on(t.tokenHash),
     index('mail_tokens_email_idx').on(sql`lower(${t.email})`),
     check('mail_tokens_purpose_check', oneOf(t.purpose, mailTokenPurposes)),

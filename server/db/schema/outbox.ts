@@ -1,4 +1,5 @@
 import { index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { bytes } from './bytes';
 
 export interface OutboxAttachmentRow {
@@ -15,6 +16,7 @@ export const outbox = pgTable(
   'outbox',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     sender: text('sender').notNull(),
     recipients: jsonb('recipients').$type<string[]>().notNull(),
@@ -23,5 +25,5 @@ export const outbox = pgTable(
     attachments: jsonb('attachments').$type<OutboxAttachmentRow[]>().notNull().default([]),
     raw: bytes('raw').notNull(),
   },
-  (t) => [index('outbox_at_idx').on(t.at)],
+  (t) => [index('outbox_shop_at_idx').on(t.shopId, t.at)],
 );

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, unique } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { panelRole, panelStatus, type PanelRole, type PanelStatus } from '../../../shared/model/job-document';
 import { carcasses } from './carcasses';
 import { jobs } from './jobs';
@@ -13,6 +14,7 @@ export const panels = pgTable(
   'panels',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     jobId: integer('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -36,6 +38,7 @@ export const panels = pgTable(
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
+    index('panels_shop_idx').on(t.shopId),
     unique('panels_job_key_unique').on(t.jobId, t.key),
     index('panels_carcass_idx').on(t.carcassId),
     check('panels_role_check', oneOf(t.role, panelRole.options)),

@@ -1,4 +1,5 @@
 import { boolean, check, doublePrecision, index, integer, jsonb, pgTable, text, unique } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { sql } from 'drizzle-orm';
 import { face, type Face, type Rotation } from '../../../shared/model/job-document';
 import { panels } from './panels';
@@ -8,6 +9,7 @@ export const placements = pgTable(
   'placements',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     panelId: integer('panel_id')
       .notNull()
       .references(() => panels.id, { onDelete: 'cascade' }),
@@ -22,6 +24,7 @@ export const placements = pgTable(
     params: jsonb('params').$type<Record<string, number>>(),
   },
   (t) => [
+    index('placements_shop_idx').on(t.shopId),
     unique('placements_panel_key_unique').on(t.panelId, t.key),
     index('placements_fitting_idx').on(t.fitting),
     check('placements_face_check', oneOf(t.face, face.options)),

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { boolean, check, integer, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { boolean, check, index, integer, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
+import { shopIdColumn } from './shops';
 import { role, type Role } from '../../../shared/api/contract';
 import { LENGTH_UNITS, type LengthUnit } from '../../../shared/units/length-unit';
 import { oneOf } from './check';
@@ -8,6 +9,7 @@ export const users = pgTable(
   'users',
   {
     id: integer('id').primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     email: text('email').notNull(),
     name: text('name').notNull(),
     role: text('role').$type<Role>().notNull(),
@@ -22,6 +24,8 @@ export const users = pgTable(
   },
   (t) => [
     // Sign-in lowercases the address; the index makes "A@x" and "a@x" one account.
+    index('users_shop_idx').on(t.shopId),
+    // One account, one shop: an address is unique across shops, so sign-in finds its shop by it.
     uniqueIndex('users_email_unique').on(sql`lower(${t.email})`),
     check('users_role_check', oneOf(t.role, role.options)),
     check('users_units_check', oneOf(t.units, LENGTH_UNITS)),

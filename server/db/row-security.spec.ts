@@ -1,0 +1,68 @@
+import { eq, getTableName, sql } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { addSecondShop, type SecondShop } from '../testing/second-shop';
+import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
+import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, shopSettings, users } from './schema';
+import { inShop } from './shop-scope';
+
+const SHOP_OWNED = [users, jobs, carcasses, panels, placements, bores, activity, attachments, shopFittings, shopSettings, mailTokens, outbox];
+
+/**
+ * The second wall: queries that name no shop at all (as a repository that forgot its filter would)
+ * still see and change only the scope's shop, because the app's role is held to row-level security.
+ */
+describe('row-level security on PGlite', () => {
+  let t: TestApp;
+  let second: SecondShop;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    second = await addSecondShop(t);
+  }, 120_000);
+  afterAll(() => t.close());
+
+  const rows = async (query: ReturnType<typeof sql>) => ((await t.database.db.execute(query)) as unknown as { rows: Record<string, unknown>[] }).rows;
+
+  it("runs a shop's queries as a role that is neither a superuser nor able to bypass row-level security", async () => {
+    const [role] = await inShop(DEMO_SHOP_ID, () => rows(sql`select current_user as name, rolsuper, rolbypassrls from pg_roles where rolname = current_user`));
+    expect(role).toEqual({ name: 'borewright_app', rolsuper: false, rolbypassrls: false });
+    for (const table of ['shops', ...SHOP_OWNED.map(getTableName)]) {
+      const [rls] = await rows(sql`select relrowsecurity, relforcerowsecurity from pg_class where relname = ${table}`);
+      expect({ table, ...rls }).toEqual({ table, relrowsecurity: true, relforcerowsecurity: true });
+    }
+  });
+
+  it('gives a query without any shop filter only the rows of the shop in scope, for every shop-owned table', async () => {
+    for (const table of SHOP_OWNED) {
+      const name = getTableName(table);
+      for (const shopId of [DEMO_SHOP_ID, second.shopId]) {
+        // Outside any scope (the owner, as migrations and backups run) the shop's rows are counted by their column.
+        const [{ n: own }] = await rows(sql`select count(*)::int as n from ${table} where shop_id = ${shopId}`);
+        // The second shop has rows in every table but loose bores (its kitchen drills through placements alone).
+        if (shopId === second.shopId && table !== bores) expect(own, `${name} of shop ${shopId}`).toBeGreaterThan(0);
+        const seen = await inShop(shopId, () => t.database.db.select({ shopId: table.shopId }).from(table));
+        expect({ name, shopId, n: seen.length, others: seen.filter((r) => r.shopId !== shopId).length }).toEqual({ name, shopId, n: own, others: 0 });
+      }
+      expect(await inShop(null, () => t.database.db.$count(table)), `${name} as no shop`).toBe(0);
+    }
+  });
+
+  it("neither changes nor deletes another shop's row named by its id, and refuses a row written for another shop", async () => {
+    const db = t.database.db;
+    const changed = await inShop(DEMO_SHOP_ID, () => db.update(jobs).set({ name: 'Taken over' }).where(eq(jobs.id, second.jobId)).returning({ id: jobs.id }));
+    expect(changed).toEqual([]);
+    const deleted = await inShop(DEMO_SHOP_ID, () => db.delete(panels).where(eq(panels.id, second.panel.dbId)).returning({ id: panels.id }));
+    expect(deleted).toEqual([]);
+    const [job] = await db.select({ name: jobs.name }).from(jobs).where(eq(jobs.id, second.jobId));
+    expect(job.name).toBe('Larch Lane kitchen');
+    expect(await db.$count(panels, eq(panels.id, second.panel.dbId))).toBe(1);
+    const planted = inShop(DEMO_SHOP_ID, () => db.insert(jobs).values({ shopId: second.shopId, name: 'Planted', system: {} as never, limits: {} as never, materials: [] }));
+    await expect(planted).rejects.toMatchObject({ cause: { message: expect.stringMatching(/row-level security/) } });
+  });
+
+  it('lets a shop read its own shop row only, and change none', async () => {
+    const seen = await inShop(second.shopId, () => rows(sql`select id from shops`));
+    expect(seen).toEqual([{ id: second.shopId }]);
+    await expect(inShop(second.shopId, () => rows(sql`update shops set status = 'active'`))).rejects.toMatchObject({ cause: { message: expect.stringMatching(/permission denied/) } });
+  });
+});
