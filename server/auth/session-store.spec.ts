@@ -2,6 +2,8 @@ import type { SessionData } from 'express-session';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DatabaseHandle } from '../db/client';
 import { sessions } from '../db/schema';
+import { inShop } from '../db/shop-scope';
+import { insertShop } from '../shops/shops.repository';
 import { openTestDatabase } from '../testing/test-database';
 import { accountReadWithSession, DrizzleSessionStore } from './session-store';
 import { insertUsers } from './users.repository';
@@ -47,7 +49,8 @@ describe('DrizzleSessionStore', () => {
   });
 
   it('reads the account with a signed-in session for that request alone, and keeps it out of the session', async () => {
-    const [member] = await insertUsers(database.db, [{ email: 'reader@example.test', name: 'Reader', role: 'viewer', passwordHash: 'x' }]);
+    const shopId = await insertShop(database.db, 'Reader shop');
+    const [member] = await inShop(shopId, () => insertUsers(database.db, [{ email: 'reader@example.test', name: 'Reader', role: 'viewer', passwordHash: 'x' }]));
     await call((cb) => store.set('signed-in', session(later(), member.id), cb));
     await call((cb) => store.set('visitor', signedOut(later()), cb));
     const made = async (sid: string) => {
@@ -56,7 +59,7 @@ describe('DrizzleSessionStore', () => {
       return { req, session: store.createSession(req, sess!) };
     };
     const signedIn = await made('signed-in');
-    expect(accountReadWithSession(signedIn.req)).toMatchObject({ id: member.id, role: 'viewer', active: true });
+    expect(accountReadWithSession(signedIn.req)).toMatchObject({ id: member.id, role: 'viewer', active: true, shopId });
     expect(JSON.parse(JSON.stringify(signedIn.session))).not.toHaveProperty('account');
     expect(Object.getOwnPropertySymbols(signedIn.session)).toEqual([]);
     expect(accountReadWithSession((await made('visitor')).req)).toBeUndefined();
