@@ -1,11 +1,15 @@
 // Times the bench pack of a generated 300-panel job, streamed as the server and the command line stream it,
-// with its peak memory: made by this thread alone (as the server makes it) and by two threads (as the
-// command line does on a machine of two cores or more), the zips checked to be the same; then, as the
-// baseline, jszip alone zipping the same files already made. Run with `npm run bench:pack`.
+// with its peak memory: made by one thread alone (as the server makes it) and by two threads (as the
+// command line does on a machine of two cores or more), each in a process of its own so that neither
+// inherits the other's memory, the zips checked to be the same; then, as the baseline, jszip alone
+// zipping the same files already made. Run with `npm run bench:pack`.
 import JSZip from 'jszip';
+import { execFile } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { loadavg } from 'node:os';
 import { Writable } from 'node:stream';
+import { promisify } from 'node:util';
+import { fileURLToPath } from 'node:url';
 import { pipeline } from 'node:stream/promises';
 import { GENERATOR, packTools } from '../../server/export/export-platform';
 import { planPackAhead } from '../../server/export/files-ahead';
@@ -46,8 +50,10 @@ const job = generateJob(100);
 const tools = await packTools();
 // With the drilling programs, as the server's pack carries them (by the default machine settings).
 const machine = DEFAULT_MACHINE_SETTINGS;
-// One date for every run, so that the zips of one and of two threads can be compared byte for byte.
-const date = new Date();
+// One date for every run, so that the zips of one and of two threads can be compared byte for byte: a run
+// by a number of threads (`--threads <n> <date>`) is told the date by the run that started it.
+const [, , flag, threadsArg, dateArg] = process.argv;
+const date = flag === '--threads' ? new Date(dateArg) : new Date();
 const plan = (threads = 1): Pack => planPackAhead({ ctx: { job, catalog: builtinCatalog(), date, generator: GENERATOR }, paper: 'a4', machine, ...tools }, threads);
 
 // One small pack first, so that loading and compiling the libraries is not counted.
@@ -68,8 +74,18 @@ async function packWith(threads: number) {
   return { ...packed, before };
 }
 
-const runs = [];
-for (const threads of [1, 2]) runs.push({ threads, ...(await packWith(threads)) });
+type Run = Awaited<ReturnType<typeof packWith>>;
+
+if (flag === '--threads') {
+  process.stdout.write(JSON.stringify(await packWith(Number(threadsArg))));
+  process.exit(0);
+}
+
+const runs: (Run & { threads: number })[] = [];
+for (const threads of [1, 2]) {
+  const { stdout } = await promisify(execFile)(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), '--threads', String(threads), date.toISOString()], { maxBuffer: 1e6 });
+  runs.push({ threads, ...(JSON.parse(stdout) as Run) });
+}
 if (runs[1].result.sha256 !== runs[0].result.sha256) throw new Error('the zips made by one and by two threads differ');
 
 // The baseline: every file made first and held, then zipped by jszip alone, streamed the same way.
