@@ -19,9 +19,14 @@ export interface PanelTask {
   base: string;
 }
 
-/** Threads to make a pack's files with where the pack has the machine to itself: its cores, up to two. */
+/**
+ * Threads to make a pack's files with where the pack has the machine to itself: a second one only where a
+ * core is left over besides. On two cores V8's own threads (garbage collection, compiling) already use the
+ * second core while one thread packs, and a second packing thread measured no faster, with 4 s more CPU
+ * and 120 to 150 MB more memory (`npm run bench:pack`).
+ */
 export function packThreads(): number {
-  return Math.max(1, Math.min(2, availableParallelism()));
+  return Math.max(1, Math.min(2, availableParallelism() - 1));
 }
 
 /**

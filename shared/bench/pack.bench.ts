@@ -1,6 +1,6 @@
 // Times the bench pack of a generated 300-panel job, streamed as the server and the command line stream it,
 // with its peak memory: made by one thread alone (as the server makes it) and by two threads (as the
-// command line does on a machine of two cores or more), each in a process of its own so that neither
+// command line does on a machine of three cores or more), each in a process of its own so that neither
 // inherits the other's memory, the zips checked to be the same; then, as the baseline, jszip alone
 // zipping the same files already made. Run with `npm run bench:pack`.
 import JSZip from 'jszip';
