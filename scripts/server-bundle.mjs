@@ -15,9 +15,10 @@ export const ENTRIES = { main: 'server/main.ts', cli: 'server/cli/main.ts' };
 
 /**
  * Worker threads' modules built beside a bundle's entry point, by their file name. The bundle's code finds
- * them through BUNDLED_WORKERS_URL, its own folder's address (server/packs/pack-pool.ts).
+ * them through BUNDLED_WORKERS_URL, its own folder's address (server/export/worker-module.ts).
  */
-const WORKERS = { main: { 'pack-worker': 'server/packs/pack-worker.ts' } };
+const PANEL_FILES_WORKER = { 'panel-files-worker': 'server/export/panel-files-worker.ts' };
+const WORKERS = { main: { 'pack-worker': 'server/packs/pack-worker.ts', ...PANEL_FILES_WORKER }, cli: PANEL_FILES_WORKER };
 
 /**
  * Sources find their files (fonts, migrations, the built app) relative to themselves: each keeps its own

@@ -3,10 +3,10 @@ import { pipeline } from 'node:stream/promises';
 import { parseArgs } from 'node:util';
 import { notDrilled } from '../../shared/export/drilling-programs';
 import { DEFAULT_MACHINE_SETTINGS, machineSettings, type MachineSettings } from '../../shared/export/machine-settings';
-import { planPack } from '../../shared/export/pack';
 import { jobDrilling } from '../../shared/export/panel-drilling';
 import type { PaperName } from '../../shared/export/paper';
 import { GENERATOR, packTools } from '../export/export-platform';
+import { packThreads, planPackAhead } from '../export/files-ahead';
 import { packZipStream } from '../export/pack-zip';
 import { EXIT, type CliIo } from './cli-io';
 import { catalogOrSay } from './load-catalog';
@@ -114,7 +114,7 @@ export async function packCommand(args: string[], io: CliIo, progressStream?: Pr
   }
   const ctx = { job, catalog, date: new Date(), generator: GENERATOR, unit };
   const progress = progressLine(progressStream);
-  const pack = planPack({ ctx, paper, ...(machine ? { machine } : {}), ...(await packTools()), onProgress: progress.update });
+  const pack = planPackAhead({ ctx, paper, ...(machine ? { machine } : {}), ...(await packTools()), onProgress: progress.update }, packThreads());
   try {
     await pipeline(packZipStream(pack, ctx.date), target.createWriteStream());
     await rename(partial, output);

@@ -18,7 +18,8 @@ function lazyFile(file: PackFile): Readable {
 /**
  * The pack as a zip, streamed: each file is made when its turn comes, written with a data descriptor
  * (`streamFiles`) so that no file's size is needed up front, compressed unless it is a PDF (compressed
- * already). Pipe it to a response or a file; an error in making a file is an error of the stream.
+ * already). Pipe it to a response or a file; an error in making a file is an error of the stream. The
+ * pack is closed when the stream ends, fails or is destroyed.
  */
 export function packZipStream(pack: Pack, date: Date): NodeJS.ReadableStream {
   const zip = new JSZip();
@@ -26,5 +27,8 @@ export function packZipStream(pack: Pack, date: Date): NodeJS.ReadableStream {
     // No folder entries: every file carries its folders in its path, and the zip stays the same from run to run.
     zip.file(file.path, lazyFile(file), { binary: true, date, createFolders: false, compression: file.compress ? 'DEFLATE' : 'STORE' });
   }
-  return zip.generateNodeStream({ type: 'nodebuffer', streamFiles: true, compression: 'DEFLATE', compressionOptions: { level: 6 } });
+  const stream = zip.generateNodeStream({ type: 'nodebuffer', streamFiles: true, compression: 'DEFLATE', compressionOptions: { level: 6 } });
+  // Whatever makes files ahead (planPackAhead's worker threads) ends with the zip, however it ends.
+  if (pack.close) for (const event of ['end', 'error', 'close']) stream.once(event, pack.close);
+  return stream;
 }

@@ -2,20 +2,9 @@ import { availableParallelism } from 'node:os';
 import { Readable } from 'node:stream';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
+import { workerModule } from '../export/worker-module';
 import type { Logger } from '../logger';
 import type { PackMessage, PackOrder, PackProgress } from './pack-order';
-
-declare const BUNDLED_WORKERS_URL: string | undefined;
-
-/**
- * The worker's module. The server's bundle (scripts/server-bundle.mjs) builds it beside itself and says
- * where; from the sources (tests, development) it is the TypeScript file, loaded through tsx.
- */
-function workerModule(): { filename: string; execArgv: string[] } {
-  if (typeof BUNDLED_WORKERS_URL === 'string') return { filename: new URL('pack-worker.mjs', BUNDLED_WORKERS_URL).href, execArgv: [] };
-  // Only the loader: a worker takes none of the process's own flags (a profiler's, say) once given these.
-  return { filename: new URL('./pack-worker.ts', import.meta.url).href, execArgv: ['--import', 'tsx'] };
-}
 
 /** What a pack being made gives: its name and error count once checked, the zip as a stream. */
 export interface PackInMaking {
@@ -32,7 +21,7 @@ export class PackPool {
   private readonly pool: Piscina;
 
   constructor(logger: Logger, threads = Math.max(1, Math.min(2, availableParallelism() - 1))) {
-    const { filename, execArgv } = workerModule();
+    const { filename, execArgv } = workerModule('pack-worker', import.meta.url);
     this.pool = new Piscina({ filename, execArgv, minThreads: 0, maxThreads: threads, idleTimeout: 60_000 });
     // A worker that fails outside a task (its module does not load, say): the task waiting on it fails too.
     this.pool.on('error', (err: unknown) => logger.error({ err }, 'a pack worker failed'));

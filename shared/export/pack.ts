@@ -13,7 +13,7 @@ import { labelsPdf } from './labels';
 import { PACK_FORMAT, type ManifestFile, type PackManifest } from './manifest';
 import { packReadme, type PackFileNames } from './pack-readme';
 import { safeSegment, UniqueNames } from './pack-paths';
-import { jobDrilling } from './panel-drilling';
+import { jobDrilling, type PanelDrilling } from './panel-drilling';
 import { layerOf } from './panel-dxf';
 import { panelFiles, type ExportFile, type PanelFileOptions } from './panel-files';
 import { drawingsPdf } from './pdf-document';
@@ -36,6 +36,11 @@ export interface PackInput extends PanelFileOptions {
   labelLink?: (panel: Panel) => string;
   /** Told after each file is made: how many are done, of how many, what the last one was and, for a panel's file, the panel's id. */
   onProgress?: (done: number, total: number, label: string, panel?: string) => void;
+  /**
+   * A panel file's bytes made elsewhere (another thread, from the pack's `panels`), by the file's path in
+   * the zip; undefined to make it here. Hashed and told of as a file made here.
+   */
+  made?: (path: string) => Promise<Uint8Array> | undefined;
 }
 
 /** A file of the pack: its path in the zip and its bytes, made when asked for. */
@@ -43,6 +48,14 @@ export interface PackFile {
   path: string;
   compress: boolean;
   bytes: () => Promise<Uint8Array>;
+}
+
+/** A panel's files: what makes them anywhere (panelFiles with the pack's context and options) and their paths in order. */
+export interface PackPanel {
+  drilling: PanelDrilling;
+  /** The start of the panel's file names in its folder. */
+  base: string;
+  paths: string[];
 }
 
 export interface Pack {
@@ -55,6 +68,10 @@ export interface Pack {
   files: PackFile[];
   /** How many errors the checks found: a screen asks for a confirmation, the cover says so. */
   errors: number;
+  /** Each panel's files, in the order of `files`, where they can be made apart from the rest (planPack's). */
+  panels?: PackPanel[];
+  /** Ends whatever makes files ahead of the zip writer; called when the zip is done or stopped. */
+  close?: () => void;
 }
 
 const FIXED: PackFileNames = {
@@ -91,6 +108,7 @@ export function planPack(input: PackInput): Pack {
   Object.values(FIXED).forEach((name) => folders.take(name));
   const folderOf = new Map<string | undefined, { name: string; bases: UniqueNames }>();
   const panelEntries: { path: string; file: ExportFile; panel: string }[] = [];
+  const packPanels: PackPanel[] = [];
   for (const d of drilling) {
     const carcass = job.carcasses.find((c) => c.id === d.panel.carcass);
     const key = carcass?.id;
@@ -100,7 +118,9 @@ export function planPack(input: PackInput): Pack {
       folderOf.set(key, folder);
     }
     const base = folder.bases.take(safeSegment(d.panel.name, d.panel.id));
-    for (const file of panelFiles(ctx, d, base, input)) panelEntries.push({ path: `${folder.name}/${file.name}`, file, panel: d.panel.id });
+    const files = panelFiles(ctx, d, base, input);
+    for (const file of files) panelEntries.push({ path: `${folder.name}/${file.name}`, file, panel: d.panel.id });
+    packPanels.push({ drilling: d, base, paths: files.map((file) => `${root}/${folder.name}/${file.name}`) });
   }
 
   const fixed = (name: string, label: string, compress: boolean, produce: () => Promise<Uint8Array>) => ({ path: name, file: { name, label, compress, produce } });
@@ -134,7 +154,7 @@ export function planPack(input: PackInput): Pack {
     path: `${root}/${path}`,
     compress: file.compress,
     bytes: async () => {
-      const bytes = await file.produce();
+      const bytes = await (input.made?.(`${root}/${path}`) ?? file.produce());
       recorded.set(path, { path, bytes: bytes.length, sha256: await input.sha256(bytes) });
       input.onProgress?.(recorded.size, total, file.label, panel);
       return bytes;
@@ -175,5 +195,5 @@ export function planPack(input: PackInput): Pack {
       return bytes;
     },
   });
-  return { root, files, errors: tally('error') };
+  return { root, files, errors: tally('error'), panels: packPanels };
 }
