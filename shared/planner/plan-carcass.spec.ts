@@ -67,8 +67,10 @@ describe('planCarcass: the worked example', () => {
   });
 
   it('offers the nearest balanced heights when the asked one is not', () => {
-    const { balance } = planned({ fronts: doors, height: 730 }).box;
-    expect(balance).toMatchObject({ balanced: false, below: 723, above: 755 });
+    const plan = planned({ fronts: doors, height: 730 });
+    expect(plan.box.balance).toMatchObject({ balanced: false, below: 723, above: 755 });
+    // Said once: the note is the balance's own words, not a heading repeating them.
+    expect(plan.notes[0]).toMatch(/^The sides are not balanced \(a side is balanced when .*; the nearest balanced heights are 723 mm and 755 mm\.$/);
   });
 
   it('gives a document every check passes, for every construction and front', () => {

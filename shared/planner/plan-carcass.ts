@@ -98,7 +98,7 @@ export function planCarcass(data: unknown, catalog: Catalog, options: PlanOption
   if (mounting.type === 'kickboard') panels.push(carcassPanel(ctx, 'kickboard', 'kickboard', 'kickboard', { width: input.width, height: mounting.height }));
   panels.push(...shelved.panels, ...fronts.panels);
   const notes = [...fronts.notes, ...shelved.plans.filter((s) => !s.ok).map((s) => `Shelf ${s.panel} sags more than the limit; keep its span under ${words.length(Math.floor(s.maxSpan.value))} or stiffen it.`)];
-  if (!box.balance.balanced) notes.unshift(`The sides are not balanced: ${box.balance.why}.`);
+  if (!box.balance.balanced) notes.unshift(`The sides are ${box.balance.why}.`);
   return {
     ok: true,
     plan: {
