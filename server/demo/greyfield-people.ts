@@ -6,8 +6,14 @@ export const DEMO_PASSWORD = 'greyfield-demo';
 /** The demo shop's name. */
 export const DEMO_SHOP_NAME = 'Greyfield Joinery';
 
+export interface DemoPerson {
+  email: string;
+  name: string;
+  role: Role;
+}
+
 /** Greyfield Joinery, an invented four-person shop (design.md §7): one person per role. */
-export const DEMO_PEOPLE: readonly { email: string; name: string; role: Role }[] = [
+export const DEMO_PEOPLE: readonly DemoPerson[] = [
   { email: 'owner@greyfield.example', name: 'Ruth Greyfield', role: 'admin' },
   { email: 'designer@greyfield.example', name: 'Tomas Ward', role: 'designer' },
   { email: 'bench@greyfield.example', name: 'Ada Keel', role: 'bench' },

@@ -8,7 +8,7 @@ import { importJob } from '../jobs/jobs.service';
 import { clinicStorageWall } from './clinic-storage-wall';
 import { inShop } from '../db/shop-scope';
 import { countShops, insertShop } from '../shops/shops.repository';
-import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SHOP_NAME } from './greyfield-people';
+import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_SHOP_NAME, type DemoPerson } from './greyfield-people';
 import { larchLaneKitchen } from './larch-lane-kitchen';
 import { loftStudyBookcase } from './loft-study-bookcase';
 
@@ -21,16 +21,25 @@ export const DEMO_JOBS: readonly JobDocumentInput[] = [larchLaneKitchen, loftStu
  */
 export async function seedDemoShop(db: Database): Promise<boolean> {
   if ((await countShops(db)) > 0 || (await countUsers(db)) > 0 || (await countJobs(db)) > 0) return false;
-  const shopId = await insertShop(db, DEMO_SHOP_NAME);
-  await inShop(shopId, () => seedPeopleAndJobs(db));
+  // One hash for all four: the password is published in the README, so a shared salt gives nothing away.
+  await addDemoShop(db, DEMO_SHOP_NAME, DEMO_PEOPLE, await hashPassword(DEMO_PASSWORD));
   return true;
 }
 
-async function seedPeopleAndJobs(db: Database): Promise<void> {
-  // One hash for all four: the password is published in the README, so a shared salt gives nothing away.
-  const hash = await hashPassword(DEMO_PASSWORD);
-  const people = await insertUsers(db, DEMO_PEOPLE.map((p) => ({ ...p, passwordHash: hash, demo: true })));
-  const owner = people.find((p) => p.role === 'admin') ?? people[0];
+/**
+ * Adds a shop of the demo's size beside any others: the demo's people under the addresses given (an
+ * address is unique across shops), each signing in with `passwordHash`, and its three jobs imported by
+ * its admin. The many-shops bench (tests/bench/api-postgres.bench.ts) seeds its shops with it.
+ */
+export async function addDemoShop(db: Database, name: string, people: readonly DemoPerson[], passwordHash: string): Promise<number> {
+  const shopId = await insertShop(db, name);
+  await inShop(shopId, () => seedPeopleAndJobs(db, people, passwordHash));
+  return shopId;
+}
+
+async function seedPeopleAndJobs(db: Database, people: readonly DemoPerson[], passwordHash: string): Promise<void> {
+  const members = await insertUsers(db, people.map((p) => ({ ...p, passwordHash, demo: true })));
+  const owner = members.find((p) => p.role === 'admin') ?? members[0];
   for (const input of DEMO_JOBS) {
     const parsed = parseJobDocument(input);
     if (!parsed.ok) throw new Error(`demo job "${input.name}" is not a valid document:\n${parsed.errors.join('\n')}`);

@@ -47,7 +47,9 @@ export class HttpMember {
 
   static async signIn(base: string, email: string): Promise<HttpMember> {
     const member = new HttpMember(base);
-    await member.fetch('/api/auth/me');
+    // Read to its end: express-session stores the new session (and its XSRF token) before the answer's
+    // last byte, so a sign-in sent on the headers alone can arrive before it and be refused.
+    await (await member.fetch('/api/auth/me')).arrayBuffer();
     await member.json('/api/auth/sign-in', { method: 'POST', body: { email, password: DEMO_PASSWORD } });
     return member;
   }
@@ -66,6 +68,8 @@ export class HttpMember {
 /** The events of one open stream, as they arrive; `next` waits for the first that matches. */
 export class LiveReader {
   readonly events: LiveEvent[] = [];
+  /** When each event arrived (performance.now()), for the bench's delay from a save to its event. */
+  readonly arrivals = new Map<LiveEvent, number>();
   readonly comments: string[] = [];
   private waiters: (() => void)[] = [];
   private closed = false;
@@ -103,7 +107,11 @@ export class LiveReader {
       const at = line.indexOf(':');
       if (at > 0) fields[line.slice(0, at)] = line.slice(at + 1).trimStart();
     }
-    if (fields.event && fields.data) this.events.push({ id: Number(fields.id), kind: fields.event, data: JSON.parse(fields.data) } as LiveEvent);
+    if (fields.event && fields.data) {
+      const event = { id: Number(fields.id), kind: fields.event, data: JSON.parse(fields.data) } as LiveEvent;
+      this.events.push(event);
+      this.arrivals.set(event, performance.now());
+    }
     this.wake();
   }
 

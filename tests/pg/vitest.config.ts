@@ -1,6 +1,6 @@
 import { defineConfig } from 'vitest/config';
 
-// Only `npm run test:pg` (tests/pg/run.sh) runs this, with PG_TEST_URL pointing at its throwaway cluster.
+// Only `npm run test:pg` (tests/pg/run.ts) runs this, with PG_TEST_URL pointing at its throwaway cluster.
 export default defineConfig({
   test: {
     include: ['tests/pg/**/*.spec.ts'],
