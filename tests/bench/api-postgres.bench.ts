@@ -129,7 +129,10 @@ function readsLine(run: Reads, health: Reads): string {
 }
 
 function delaysLine(label: string, d: Delays, at: string): string {
-  return `  ${label.padEnd(44)} event p50 ${ms(percentile(d.event, 0.5))}  p95 ${ms(percentile(d.event, 0.95))}   save answered p50 ${ms(percentile(d.answer, 0.5))}  p95 ${ms(percentile(d.answer, 0.95))}   (${d.event.length} saves; ${at})`;
+  // What the other server adds to the save itself (negative when the event came before the answer).
+  const after = d.event.map((e, i) => e - d.answer[i]);
+  const pair = (v: number[]) => `p50 ${ms(percentile(v, 0.5))}  p95 ${ms(percentile(v, 0.95))}`;
+  return `  ${label.padEnd(30)} event ${pair(d.event)}   the save's answer ${pair(d.answer)}   event after the answer ${pair(after)}   (${d.event.length} saves; ${at})`;
 }
 
 async function main(): Promise<void> {
@@ -226,7 +229,7 @@ async function main(): Promise<void> {
     console.log(readsLine(readsWhileSaving, healthRun));
     console.log(`Live update, saved on server 1, heard on server 2 by another member of the shop (${SAVING_SHOPS} shops taking turns):`);
     console.log(delaysLine('while the job reads run', loaded, loadedAt));
-    console.log(delaysLine('nothing else running', quiet, quietAt));
+    console.log(delaysLine('without the read load', quiet, quietAt));
   } finally {
     readers.forEach((r) => r.close());
     await stopAll();
