@@ -29,15 +29,16 @@ async function waitForHealth(url: string, server: ChildProcess, seconds: number)
 
 /**
  * Starts the server as a user would (same entry point, the demo shop seeded into a fresh data folder) and
- * waits until it answers. `nodeArgs` go to Node before the entry point (e.g. `--cpu-prof`).
+ * waits until it answers. `nodeArgs` go to Node before the entry point (e.g. `--cpu-prof`); `env` adds to
+ * (or overrides) its environment, e.g. SIGNUP or SMTP_URL.
  */
-export async function startThrowawayServer(options: { nodeArgs?: string[]; logLevel?: string; seconds?: number } = {}): Promise<ThrowawayServer> {
+export async function startThrowawayServer(options: { nodeArgs?: string[]; logLevel?: string; seconds?: number; env?: Record<string, string> } = {}): Promise<ThrowawayServer> {
   const dataDir = mkdtempSync(join(tmpdir(), 'borewright-server-'));
   const port = await freePort();
   // Node itself with tsx as a loader, not through npx, so that SIGTERM reaches the server and not a wrapper.
   const server = spawn(process.execPath, [...(options.nodeArgs ?? []), '--import', 'tsx', 'server/main.ts'], {
     cwd: process.cwd(),
-    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, NODE_ENV: 'test', LOG_LEVEL: options.logLevel ?? 'warn' },
+    env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', DATA_DIR: dataDir, NODE_ENV: 'test', LOG_LEVEL: options.logLevel ?? 'warn', ...options.env },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const baseUrl = `http://127.0.0.1:${port}`;

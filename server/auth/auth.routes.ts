@@ -33,7 +33,7 @@ export function authRoutes(router: Router, context: RouteContext): void {
   // error, so the sign-in page loads without a 401 in the browser's console.
   router.get('/auth/session', (req, res) => {
     issueCsrfToken(req, res, cookie);
-    res.json({ user: req.user ?? null });
+    res.json({ user: req.user ?? null, signUpOpen: config.signUpOpen });
   });
 
   // Every role chooses for themself how lengths read; nobody changes another's.

@@ -21,11 +21,6 @@ export function signUpRoutes(router: Router, context: RouteContext): void {
     what: 'requests to create a shop',
   });
 
-  // The sign-in screen asks, to offer "Create a shop" only where it works.
-  router.get('/sign-up', (_req, res) => {
-    res.json({ open: true });
-  });
-
   // The same 202 for every well-formed request, before anything is looked up (sign-up.service.ts).
   router.post('/sign-up', jsonBody, limits, (req, res) => {
     const body = signUpBody.parse(req.body);

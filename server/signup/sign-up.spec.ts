@@ -42,7 +42,7 @@ describe('creating a shop (SIGNUP=open)', () => {
 
   it('mails a new address a link that makes the shop and its admin once, signed in; a second use is refused', async () => {
     const browser = await visitor(t);
-    await browser.get('/api/sign-up').expect(200, { open: true });
+    expect((await browser.get('/api/auth/session').expect(200)).body).toEqual({ user: null, signUpOpen: true });
     const asked = await browser
       .post('/api/sign-up')
       .send({ shopName: 'Alder Street Cabinets', name: 'Rosa Quint', email: ' Rosa@Alder.example ', password: PASSWORD })
@@ -166,7 +166,7 @@ describe('with SIGNUP closed (the default)', () => {
   it('answers 404 on every sign-up route', async () => {
     const t = await createTestApp();
     const browser = await visitor(t);
-    await browser.get('/api/sign-up').expect(404);
+    expect((await browser.get('/api/auth/session').expect(200)).body).toEqual({ user: null, signUpOpen: false });
     await browser.post('/api/sign-up').send({ shopName: 'Closed', name: 'C', email: 'c@closed.example', password: PASSWORD }).expect(404);
     await browser.get(`/api/sign-up/${'x'.repeat(43)}`).expect(404);
     await browser.post(`/api/sign-up/${'x'.repeat(43)}`).expect(404);

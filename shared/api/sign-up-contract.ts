@@ -15,9 +15,6 @@ export type SignUpBody = z.input<typeof signUpBody>;
 /** The answer to every well-formed sign-up request, whether the address is new or already has an account. */
 export const signUpRequested = z.object({ message: z.string() });
 
-/** Whether this installation takes sign-ups: GET /api/sign-up answers this when it does, 404 when not. */
-export const signUpOpenAnswer = z.object({ open: z.literal(true) });
-
 /** What a confirmation link will make, shown before it is followed. */
 export const signUpLinkAnswer = z.object({ email: z.string(), shopName: z.string(), name: z.string(), expiresAt: z.string() });
 export type SignUpLinkAnswer = z.output<typeof signUpLinkAnswer>;
