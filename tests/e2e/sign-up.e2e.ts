@@ -82,7 +82,7 @@ describe('creating a shop in the browser (SIGNUP=open)', () => {
       await page.waitForURL('**/jobs');
       await page.getByText('Mara Voss').first().waitFor();
       // An empty shop: none of the demo shop's jobs.
-      await page.waitForLoadState('networkidle');
+      await page.getByText('No jobs yet.').waitFor();
       const jobs = await page.evaluate(async () => (await (await fetch('/api/jobs')).json()) as { jobs: { name: string }[] });
       expect(jobs.jobs).toEqual([]);
       await expect.poll(() => page.getByText('Larch Lane').count()).toBe(0);

@@ -36,8 +36,8 @@ export class CreateShop {
   });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
-  /** The server's answer once asked: the same words whether or not the address has an account. */
-  protected readonly asked = signal<{ email: string; message: string } | null>(null);
+  /** The server's answer once asked (naming the address typed): the same words whether or not it has an account. */
+  protected readonly asked = signal<string | null>(null);
 
   protected shopNameMessage(): string {
     const control = this.form.controls.shopName;
@@ -58,8 +58,7 @@ export class CreateShop {
     this.failure.set(null);
     const { shopName, name, email, passwords } = this.form.getRawValue();
     try {
-      const message = await this.api.requestSignUp({ shopName: shopName.trim(), name: name.trim(), email: email.trim(), password: passwords.password });
-      this.asked.set({ email: email.trim(), message });
+      this.asked.set(await this.api.requestSignUp({ shopName: shopName.trim(), name: name.trim(), email: email.trim(), password: passwords.password }));
     } catch (error) {
       if (error instanceof ApiProblem && error.status === 429) this.failure.set('Too many requests to create a shop from here. Wait an hour, then try again.');
       // The server names `shopName`, `name`, `email` and `password`; the password's control sits in the pair typed twice.
