@@ -13,7 +13,10 @@ describe('ConfirmShop', () => {
   let http: HttpTestingController;
   let page: HTMLElement;
 
-  beforeEach(async () => {
+  afterEach(() => http.verify());
+
+  /** Opens the page with the link's token; the server answers what the link will make. */
+  async function answer(status: number, body: object): Promise<void> {
     TestBed.configureTestingModule({
       providers: [provideRouter([]), provideHttpClient(withInterceptors([errorInterceptor])), provideHttpClientTesting()],
     });
@@ -21,12 +24,7 @@ describe('ConfirmShop', () => {
     fixture = TestBed.createComponent(ConfirmShop);
     fixture.componentRef.setInput('token', TOKEN);
     page = fixture.nativeElement;
-    await fixture.whenStable();
-  });
-
-  afterEach(() => http.verify());
-
-  async function answer(status: number, body: unknown): Promise<void> {
+    TestBed.tick();
     http.expectOne(`/api/sign-up/${TOKEN}`).flush(body, { status, statusText: String(status) });
     await settle();
     await fixture.whenStable();
@@ -38,6 +36,7 @@ describe('ConfirmShop', () => {
     http.expectNone({ method: 'POST' });
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigateByUrl').mockResolvedValue(true);
     page.querySelector<HTMLButtonElement>('button')!.click();
+    await settle();
     http.expectOne({ method: 'POST', url: `/api/sign-up/${TOKEN}` }).flush({ user: { id: 9, email: 'mara@example.com', name: 'Mara Voss', role: 'admin', units: 'mm' } }, { status: 201, statusText: 'Created' });
     await settle();
     expect(navigate).toHaveBeenCalledWith('/jobs');
