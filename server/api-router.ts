@@ -23,6 +23,7 @@ import { packsRoutes } from './packs/packs.routes';
 import { panelsRoutes } from './panels/panels.routes';
 import { plannerRoutes } from './planner/planner.routes';
 import { settingsRoutes } from './settings/settings.routes';
+import { signUpRoutes } from './signup/sign-up.routes';
 import { swapRoutes } from './swap/swap.routes';
 import { teamRoutes } from './team/team.routes';
 import type { AppDeps } from './app';
@@ -60,7 +61,7 @@ export function createApiRouter(deps: AppDeps): Router {
     // From here on every query runs as the signed-in member's shop (server/db/shop-scope.ts).
     requestShopScope,
   );
-  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes, liveRoutes]) routes(router, context);
+  for (const routes of [healthRoutes, authRoutes, jobsRoutes, panelsRoutes, activityRoutes, packsRoutes, mailRoutes, plannerRoutes, teamRoutes, catalogRoutes, cutListRoutes, attachmentsRoutes, swapRoutes, labelsRoutes, settingsRoutes, liveRoutes, signUpRoutes]) routes(router, context);
   router.use((req, _res, next) => next(new AppError(404, 'not-found', `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.`)));
   return router;
 }

@@ -39,6 +39,10 @@ const environment = z
     INVITATION_DAYS: whole(1, 90).default(7),
     /** How long a password reset link works: short, as whoever reads the mail can take the account. */
     PASSWORD_RESET_MINUTES: whole(5, 24 * 60).default(60),
+    /** "open": visitors may create a shop of their own (server/signup/); "closed": one installation, one shop. */
+    SIGNUP: z.enum(['open', 'closed'], 'must be "open" or "closed"').default('closed'),
+    /** How long the link confirming a new shop's address works. */
+    SIGNUP_LINK_HOURS: whole(1, 7 * 24).default(24),
   })
   .superRefine((env, ctx) => {
     if (env.NODE_ENV === 'production' && !env.SESSION_SECRET) {
@@ -62,6 +66,8 @@ export type Config = {
   packAttachLimitBytes: number;
   /** The largest photo or PDF a job attachment may be. */
   attachmentLimitBytes: number;
+  /** Whether visitors may create shops (SIGNUP=open); closed, the sign-up routes answer 404. */
+  signUpOpen: boolean;
   /** Demo accounts are created and may sign in: always outside production, in production only when allowed. */
   demoAccounts: boolean;
   /** Cookies only over HTTPS: in production (behind TLS, with TRUST_PROXY set when a proxy ends it). */
@@ -80,10 +86,21 @@ export type Config = {
     usualAddressDays: number;
   };
   /** How long the single-use links sent by mail work (server/team/mail-tokens.ts). */
-  mailLinks: { invitationMs: number; passwordResetMs: number };
+  mailLinks: { invitationMs: number; passwordResetMs: number; signUpMs: number };
   /** Reset mails asked for, per address asked about and per client address: no one fills a mailbox with them. */
-  passwordResetLimits: { windowMs: number; perAccount: number; perAddress: number };
+  passwordResetLimits: MailRequestLimits;
+  /** Sign-up mails asked for, counted the same way. */
+  signUpLimits: MailRequestLimits;
 };
+
+/** Requests that send mail to an address typed by whoever asks, counted in the database (auth/mail-request-limits.ts). */
+export interface MailRequestLimits {
+  windowMs: number;
+  /** Per address asked about. */
+  perAccount: number;
+  /** Per client address. */
+  perAddress: number;
+}
 
 /** The environment is not valid; the message names every bad variable. */
 export class ConfigError extends Error {}
@@ -109,6 +126,7 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
     publicUrl: env.PUBLIC_URL?.replace(/\/+$/, ''),
     packAttachLimitBytes: 10 * 1024 * 1024,
     attachmentLimitBytes: 10 * 1024 * 1024,
+    signUpOpen: env.SIGNUP === 'open',
     demoAccounts: env.NODE_ENV !== 'production' || env.ALLOW_DEMO_IN_PRODUCTION,
     secureCookies: env.NODE_ENV === 'production',
     trustProxy: env.TRUST_PROXY,
@@ -122,7 +140,8 @@ export function loadConfig(source: Record<string, string | undefined>): Config {
       maxDelayMs: 30_000,
       usualAddressDays: 90,
     },
-    mailLinks: { invitationMs: env.INVITATION_DAYS * 86_400_000, passwordResetMs: env.PASSWORD_RESET_MINUTES * 60_000 },
+    mailLinks: { invitationMs: env.INVITATION_DAYS * 86_400_000, passwordResetMs: env.PASSWORD_RESET_MINUTES * 60_000, signUpMs: env.SIGNUP_LINK_HOURS * 3_600_000 },
     passwordResetLimits: { windowMs: 60 * 60_000, perAccount: 3, perAddress: 20 },
+    signUpLimits: { windowMs: 60 * 60_000, perAccount: 3, perAddress: 10 },
   };
 }

@@ -76,6 +76,7 @@ async function main(): Promise<void> {
     `Borewright is running at http://${config.host.includes(':') ? `[${config.host}]` : config.host}:${config.port}/`,
     `  data: ${where}${seeded ? ', demo shop created' : ''}`,
     `  mail: ${mail.describe}`,
+    ...(config.signUpOpen ? ['  sign-up: open (SIGNUP=open): visitors may create shops from the sign-in page'] : []),
     `  ready in ${Math.round(performance.now() - started)} ms`,
   ];
   if (!existsSync(path.join(DEFAULT_CLIENT_DIR, 'index.html'))) {

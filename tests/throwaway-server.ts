@@ -30,8 +30,8 @@ async function waitForHealth(url: string, server: ChildProcess, seconds: number)
 /**
  * Starts the server as a user would (same entry point, the demo shop seeded into a fresh data folder) and
  * waits until it answers. `nodeArgs` go to Node before the entry point (e.g. `--cpu-prof`); `env` adds to
- * the server's environment (e.g. DATABASE_URL and SESSION_SECRET for one of several servers on one
- * PostgreSQL, which then seeds nothing the database already holds).
+ * the server's environment (e.g. SIGNUP or SMTP_URL; DATABASE_URL and SESSION_SECRET for one of several
+ * servers on one PostgreSQL, which then seeds nothing the database already holds).
  */
 export async function startThrowawayServer(
   options: { nodeArgs?: string[]; logLevel?: string; seconds?: number; env?: Record<string, string> } = {},

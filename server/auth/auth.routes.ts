@@ -9,7 +9,7 @@ import { issueCsrfToken } from './csrf';
 import { changePreferences } from './auth.service';
 import { authenticateLocal } from './passport';
 import { passwordResetFor, requestPasswordResetLater, resetPassword } from './password-reset.service';
-import { passwordResetLimits } from './password-reset-limits';
+import { mailRequestLimits } from './mail-request-limits';
 import { throttledSignIn } from './sign-in-throttle';
 import { csrfCookie, startSession } from './start-session';
 
@@ -17,6 +17,11 @@ import { csrfCookie, startSession } from './start-session';
 export function authRoutes(router: Router, context: RouteContext): void {
   const { config, authenticator } = context;
   const cookie = csrfCookie(config);
+  const resetLimits = mailRequestLimits(context.db, context.clock, config.passwordResetLimits, {
+    name: 'reset',
+    address: (body) => passwordResetRequestBody.safeParse(body).data?.email,
+    what: 'password reset requests',
+  });
 
   router.get('/auth/me', (req, res) => {
     issueCsrfToken(req, res, cookie);
@@ -28,7 +33,7 @@ export function authRoutes(router: Router, context: RouteContext): void {
   // error, so the sign-in page loads without a 401 in the browser's console.
   router.get('/auth/session', (req, res) => {
     issueCsrfToken(req, res, cookie);
-    res.json({ user: req.user ?? null });
+    res.json({ user: req.user ?? null, signUpOpen: config.signUpOpen });
   });
 
   // Every role chooses for themself how lengths read; nobody changes another's.
@@ -56,7 +61,7 @@ export function authRoutes(router: Router, context: RouteContext): void {
 
   // The same 202 for every well-formed address, before anything is looked up: the answer says nothing
   // about who has an account, and the mail (if any) is sent after it has gone.
-  router.post('/auth/password-reset', jsonBody, passwordResetLimits(config.passwordResetLimits), (req, res) => {
+  router.post('/auth/password-reset', jsonBody, resetLimits, (req, res) => {
     const { email } = passwordResetRequestBody.parse(req.body);
     res.status(202).json({ message: 'If this address belongs to a member of the shop, a link to choose a new password is on its way to it.' });
     requestPasswordResetLater(context, email, linkOrigin(config), req.log);

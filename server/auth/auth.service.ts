@@ -1,22 +1,24 @@
 import type { preferencesBody, User } from '../../shared/api/contract';
 import type * as z from 'zod';
 import type { Database } from '../db/client';
+import type { ShopStatus } from '../db/schema/shops';
 import { acrossShops } from '../db/shop-scope';
 import { AppError } from '../http/app-error';
 import { spendComparisonTime, verifyPassword } from './passwords';
 import { findAccount, findAccountByEmail, updateUnits } from './users.repository';
 
-type Account = User & { demo: boolean; active: boolean; shopId: number };
+type Account = User & { demo: boolean; active: boolean; shopId: number; shopStatus: ShopStatus | null };
 
-const toUser = ({ id, email, name, role, units }: Account): User => ({ id, email, name, role, units });
+const toUser = ({ id, email, name, role, units }: User): User => ({ id, email, name, role, units });
 
 /** Why a sign-in was refused; the route turns it into the answer. */
-export type SignInRefusal = 'bad-credentials' | 'demo-accounts-off' | 'account-deactivated';
+export type SignInRefusal = 'bad-credentials' | 'demo-accounts-off' | 'account-deactivated' | 'shop-suspended';
 
 /**
  * Checks an address and password. Unknown address and wrong password look alike to the caller,
  * in answer and in time. Demo accounts sign in only where the configuration allows them; a
- * deactivated member never does. Both are said only to whoever knows the password.
+ * deactivated member, or a member of a suspended shop, never does. Each is said only to whoever knows the
+ * password, so none of them tells a stranger that the address has an account.
  */
 export async function checkCredentials(
   db: Database,
@@ -32,6 +34,7 @@ export async function checkCredentials(
   }
   if (!(await verifyPassword(password, account.passwordHash))) return { refused: 'bad-credentials' };
   if (!account.active) return { refused: 'account-deactivated' };
+  if (account.shopStatus !== 'active') return { refused: 'shop-suspended' };
   if (account.demo && !demoAccounts) return { refused: 'demo-accounts-off' };
   return { user: toUser(account) };
 }
@@ -56,14 +59,18 @@ export interface SessionUser {
   shopId: number;
 }
 
-/** The user of an account just read, with its shop, or undefined when there is none or it is no longer allowed. */
+/**
+ * The user of an account just read, with its shop, or undefined when there is none or it is no longer
+ * allowed: deactivated, a demo account where those are off, or its shop suspended by the operator.
+ */
 export function usableUser(account: Account | undefined, demoAccounts: boolean): SessionUser | undefined {
-  return account && mayUse(account, demoAccounts) ? { user: toUser(account), shopId: account.shopId } : undefined;
+  return account && mayUse(account, demoAccounts) && account.shopStatus === 'active' ? { user: toUser(account), shopId: account.shopId } : undefined;
 }
 
 /** The error a refused sign-in answers with. */
 export function refusal(reason: SignInRefusal): AppError {
   if (reason === 'demo-accounts-off') return new AppError(403, 'demo-accounts-off', 'Demo accounts are switched off on this server (NODE_ENV=production).');
+  if (reason === 'shop-suspended') return new AppError(403, 'shop-suspended', "This shop's account is suspended. Contact the Borewright operator.");
   if (reason === 'account-deactivated') return new AppError(403, 'account-deactivated', 'This account has been deactivated. Ask an admin of your shop if you need it again.');
   return new AppError(401, 'bad-credentials', 'That e-mail address and password do not match an account.');
 }

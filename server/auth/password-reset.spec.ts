@@ -2,10 +2,12 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { ActivityEntry } from '../../shared/api/contract';
 import { passwordResetAnswer, passwordResetRequested } from '../../shared/api/team-contract';
+import { createApp } from '../app';
 import { mailTokens } from '../db/schema';
+import { createLogger } from '../logger';
 import { ApiClient, signedIn } from '../testing/api-client';
 import { mailsTo, waitForMail } from '../testing/caught-mail';
-import { createTestApp, type TestApp } from '../testing/test-app';
+import { createTestApp, TEST_SESSION_SECRET, testConfig, type TestApp } from '../testing/test-app';
 
 const NEW_PASSWORD = 'a brand new bench password';
 
@@ -19,7 +21,7 @@ async function stranger(t: TestApp): Promise<ApiClient> {
 describe('password reset by mail', () => {
   let t: TestApp;
   beforeAll(async () => {
-    t = await createTestApp({ config: { mailLinks: { invitationMs: 86_400_000, passwordResetMs: 60 * 60_000 } } });
+    t = await createTestApp({ config: { mailLinks: { invitationMs: 86_400_000, passwordResetMs: 60 * 60_000, signUpMs: 86_400_000 } } });
   });
   afterAll(() => t.close());
 
@@ -103,7 +105,7 @@ describe('password reset by mail', () => {
 
 describe('password reset limits and lifetimes', () => {
   it('expires a link by the app\'s clock', async () => {
-    const t = await createTestApp({ config: { mailLinks: { invitationMs: 86_400_000, passwordResetMs: 5 * 60_000 } } });
+    const t = await createTestApp({ config: { mailLinks: { invitationMs: 86_400_000, passwordResetMs: 5 * 60_000, signUpMs: 86_400_000 } } });
     const browser = await stranger(t);
     await browser.post('/api/auth/password-reset').send({ email: 'viewer@greyfield.example' }).expect(202);
     const mail = await waitForMail(t.database.db, 'viewer@greyfield.example');
@@ -145,6 +147,29 @@ describe('password reset limits and lifetimes', () => {
     await waitForMail(t.database.db, 'designer@greyfield.example');
     // Two for the viewer: the third request was refused before anything was looked up.
     await expect.poll(async () => (await mailsTo(t.database.db, 'viewer@greyfield.example')).length).toBe(2);
+    await t.close();
+  });
+
+  it('counts on the database: two servers on one database share the counts', async () => {
+    const limits = { windowMs: 60_000, perAccount: 3, perAddress: 100 };
+    const t = await createTestApp({ config: { passwordResetLimits: limits } });
+    const start = Date.now();
+    let offset = 0;
+    // A second server on the same database, with a clock of its own the test moves alike.
+    const second = createApp({ db: t.database.db, config: testConfig({ passwordResetLimits: limits }), sessionSecret: TEST_SESSION_SECRET, logger: createLogger('silent'), mailer: t.mailer, jobEvents: t.database.jobEvents, clock: () => new Date(start + offset) });
+    const one = await stranger(t);
+    const other = new ApiClient(second);
+    await other.me();
+    const email = 'viewer@greyfield.example';
+    await one.post('/api/auth/password-reset').send({ email }).expect(202);
+    await other.post('/api/auth/password-reset').send({ email }).expect(202);
+    await one.post('/api/auth/password-reset').send({ email }).expect(202);
+    // The fourth request, on either server, is over the three the address may ask for.
+    expect((await other.post('/api/auth/password-reset').send({ email }).expect(429)).body.error.code).toBe('too-many-attempts');
+    await one.post('/api/auth/password-reset').send({ email }).expect(429);
+    // Once the window has gone by on the app's clock, the address may ask again.
+    offset += 60_001;
+    await other.post('/api/auth/password-reset').send({ email }).expect(202);
     await t.close();
   });
 

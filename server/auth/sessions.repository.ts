@@ -1,15 +1,17 @@
 import { and, eq, gt, ne, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { preparedPerDatabase } from '../db/prepared';
-import { sessions, users } from '../db/schema';
+import { sessions, shops, users } from '../db/schema';
 import { accountColumns } from './users.repository';
 
 /** The query of every signed-in request. */
 const sessionRead = preparedPerDatabase((db) =>
   db
-    .select({ sess: sessions.sess, account: accountColumns })
+    .select({ sess: sessions.sess, account: accountColumns, shopStatus: shops.status })
     .from(sessions)
     .leftJoin(users, eq(users.id, sql`(${sessions.sess} #>> '{passport,user}')::integer`))
+    // A suspended shop's sessions stop working at their next request (auth.service.ts usableUser).
+    .leftJoin(shops, eq(shops.id, users.shopId))
     .where(and(eq(sessions.sid, sql.placeholder('sid')), gt(sessions.expire, sql.placeholder('now'))))
     .prepare('session_read'),
 );
@@ -21,7 +23,7 @@ const sessionRead = preparedPerDatabase((db) =>
  */
 export async function findSession(db: Database, sid: string, now: Date) {
   const [row] = await sessionRead(db).execute({ sid, now: now.toISOString() });
-  return row;
+  return row && { sess: row.sess, account: row.account && { ...row.account, shopStatus: row.shopStatus } };
 }
 
 /**

@@ -1,23 +1,27 @@
 import { count, eq, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
-import { users } from '../db/schema';
+import { shops, users } from '../db/schema';
 import type { LengthUnit } from '../../shared/units/length-unit';
 
 /** An account as the server uses it: everything but the password hash. */
 export const accountColumns = { id: users.id, email: users.email, name: users.name, role: users.role, units: users.units, demo: users.demo, active: users.active, shopId: users.shopId };
 
-/** The account with this address (any case), with its password hash. */
+/** An account with whether its shop is active or suspended (joined to `shops`), for deciding who may sign in. */
+export const accountWithShopColumns = { ...accountColumns, shopStatus: shops.status };
+
+/** The account with this address (any case), with its password hash and its shop's status. */
 export async function findAccountByEmail(db: Database, email: string) {
   const [row] = await db
-    .select({ ...accountColumns, passwordHash: users.passwordHash })
+    .select({ ...accountWithShopColumns, passwordHash: users.passwordHash })
     .from(users)
+    .innerJoin(shops, eq(shops.id, users.shopId))
     .where(eq(sql`lower(${users.email})`, email.toLowerCase()));
   return row;
 }
 
-/** The account with this id and its shop, without its password hash. */
+/** The account with this id and its shop's id and status, without its password hash. */
 export async function findAccount(db: Database, id: number) {
-  const [row] = await db.select(accountColumns).from(users).where(eq(users.id, id));
+  const [row] = await db.select(accountWithShopColumns).from(users).innerJoin(shops, eq(shops.id, users.shopId)).where(eq(users.id, id));
   return row;
 }
 

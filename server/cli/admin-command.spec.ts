@@ -31,7 +31,7 @@ describe('borewright admin add', () => {
 
     const again = captured();
     expect(await adminCommand(args, again, env, { fromEnvironment: 'another long password' })).toBe(2);
-    expect(again.lines.err.join('\n')).toContain('owner@shop.example is already a member of the shop; nothing was added.');
+    expect(again.lines.err.join('\n')).toContain('owner@shop.example is already a member of a shop; nothing was added.');
 
     const database = await openDatabase(databaseTarget({ dataDir }));
     const account = await findAccountByEmail(database.db, 'owner@shop.example');

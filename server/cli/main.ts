@@ -12,6 +12,7 @@ Commands:
   catalog            list the fittings of the built-in catalog (--json for programs)
   schema             print the JSON Schema of the job document
   admin add          add a member to the shop's database, such as the first admin of a production install
+  shop               the operator's shops: list, add (with its first admin), suspend, resume
 
 Lengths print in mm; check, plan and pack take --units in|in-32|in-64 for inches.
 Run borewright <command> --help for its options.
@@ -25,6 +26,7 @@ type Command = (args: string[], io: CliIo) => number | Promise<number>;
  */
 const COMMANDS: Record<string, () => Promise<Command>> = {
   admin: async () => (await import('./admin-command')).adminCommand,
+  shop: async () => (await import('./shop-command')).shopCommand,
   check: async () => (await import('./check-command')).checkCommand,
   pack: async () => (await import('./pack-command')).packCommand,
   plan: async () => (await import('./plan-command')).planCommand,

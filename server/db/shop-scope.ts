@@ -74,5 +74,14 @@ export function scopeStatements(lasting: 'transaction' | 'session'): string | un
   return shopId === null ? role : `${role}; select set_config('borewright.shop_id', '${shopId}', ${local})`;
 }
 
+/**
+ * The statements that take a transaction opened across shops into one shop's scope for the rest of it:
+ * for the one piece of work that makes a shop and then its first rows (server/shops/shops.service.ts).
+ */
+export function enterShopStatements(shopId: number): string[] {
+  if (!Number.isSafeInteger(shopId)) throw new Error(`not a shop id: ${shopId}`);
+  return [`set local role ${APP_ROLE}`, `select set_config('borewright.shop_id', '${shopId}', true)`];
+}
+
 /** Puts a pooled connection back as the connecting role with no shop. */
 export const SCOPE_RESET = 'reset role; reset borewright.shop_id';

@@ -7,7 +7,8 @@ import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, pane
  * Every table a backup holds, parents before children (the order a restore inserts them): the shops, their
  * data and settings, its invitation and reset links (an open invitation still works after a restore) and the
  * outbox. Left out are the transient tables: sessions (everyone signs in again) and the sign-in
- * throttle's counters and usual addresses, and what the live streams keep (job_events, job_presence,
+ * throttle's counters and usual addresses, the mail requests' counters and the sign-ups waiting for
+ * their link (request_counters, sign_ups), and what the live streams keep (job_events, job_presence,
  * pack_progress).
  */
 const TABLES = [shops, users, shopFittings, shopSettings, jobs, carcasses, panels, placements, bores, activity, attachments, mailTokens, outbox];

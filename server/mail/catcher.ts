@@ -42,7 +42,12 @@ export function startCatcher(db: Database, logger: Logger): Promise<Catcher> {
           if (stream.sizeExceeded) throw Object.assign(new Error('The message is too large.'), { responseCode: 552 });
           const mail = await parseMail(raw);
           const shop = Number(mail.headers.get(SHOP_HEADER.toLowerCase()) ?? '');
-          if (!Number.isSafeInteger(shop) || shop <= 0) throw Object.assign(new Error('The message names no shop.'), { responseCode: 554 });
+          if (!Number.isSafeInteger(shop) || shop <= 0) {
+            // Mail sent before its shop exists (a sign-up's confirmation link) has no outbox to go to: on a
+            // developer's machine, the server's log is where it can be read.
+            logger.warn({ to: session.envelope.rcptTo.map((r) => r.address), subject: mail.subject, text: mail.text }, 'the local mail catcher kept no copy of a message sent before its shop exists; its text is here');
+            return;
+          }
           await inShop(shop, () => insertOutboxMessage(db, {
             sender: mail.from?.text ?? (session.envelope.mailFrom ? session.envelope.mailFrom.address : ''),
             recipients: session.envelope.rcptTo.map((r) => r.address),

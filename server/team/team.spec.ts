@@ -29,7 +29,7 @@ describe('invitations', () => {
   }
 
   beforeAll(async () => {
-    t = await createTestApp({ config: { mailLinks: { invitationMs: 7 * 86_400_000, passwordResetMs: 3_600_000 } } });
+    t = await createTestApp({ config: { mailLinks: { invitationMs: 7 * 86_400_000, passwordResetMs: 3_600_000, signUpMs: 86_400_000 } } });
     owner = await signedIn(t.app, 'owner@greyfield.example');
   });
   afterAll(() => t.close());
@@ -165,7 +165,7 @@ describe('invitations', () => {
 
 describe('an invitation that expires', () => {
   it('says so by the app\'s clock, and the team page marks it expired', async () => {
-    const t = await createTestApp({ config: { mailLinks: { invitationMs: 60_000, passwordResetMs: 60_000 } } });
+    const t = await createTestApp({ config: { mailLinks: { invitationMs: 60_000, passwordResetMs: 60_000, signUpMs: 60_000 } } });
     const owner = await signedIn(t.app, 'owner@greyfield.example');
     await owner.post('/api/team/invitations').send({ email: 'late@example.com', role: 'viewer' }).expect(201);
     const [mail] = await mailsTo(t.database.db, 'late@example.com');

@@ -15,7 +15,7 @@ export const TEST_SESSION_SECRET = 'a test secret that is long enough to sign co
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   database: DatabaseHandle;
-  /** Sends to a catcher of the test's own, which keeps messages in the test database's outbox. */
+  /** Sends to a catcher of the test's own, which keeps messages in the test database's outbox (or the one given). */
   mailer: Mailer;
   /** Moves the app's clock forward, for session timeouts. */
   advance(ms: number): void;
@@ -29,7 +29,7 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
 
 /** createApp on an in-memory database from a template, with a clock only the test moves. */
 export async function createTestApp(
-  options: { template?: 'empty' | 'demo'; config?: Partial<Config>; clientDir?: string; logger?: Logger } = {},
+  options: { template?: 'empty' | 'demo'; config?: Partial<Config>; clientDir?: string; logger?: Logger; mailer?: Mailer } = {},
 ): Promise<TestApp> {
   const database = await openTestDatabase(options.template ?? 'demo');
   const config = testConfig(options.config);
@@ -44,7 +44,7 @@ export async function createTestApp(
     config,
     sessionSecret: TEST_SESSION_SECRET,
     logger,
-    mailer: mail.mailer,
+    mailer: options.mailer ?? mail.mailer,
     packPool,
     jobEvents: database.jobEvents,
     clock: () => new Date(start + offset),
@@ -53,7 +53,7 @@ export async function createTestApp(
   return {
     app,
     database,
-    mailer: mail.mailer,
+    mailer: options.mailer ?? mail.mailer,
     advance: (ms) => {
       offset += ms;
     },

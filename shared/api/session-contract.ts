@@ -27,8 +27,8 @@ export const user = z.object({
 export type User = z.output<typeof user>;
 
 export const userAnswer = z.object({ user });
-/** GET /api/auth/session: who is signed in, or null. */
-export const sessionAnswer = z.object({ user: z.nullable(user) });
+/** GET /api/auth/session: who is signed in, or null; and whether visitors may create a shop here (SIGNUP=open). */
+export const sessionAnswer = z.object({ user: z.nullable(user), signUpOpen: z.optional(z.boolean()) });
 
 /** Every error answer of the API has this shape. */
 export const apiError = z.object({

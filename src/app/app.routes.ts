@@ -15,6 +15,16 @@ export const routes: Routes = [
     title: 'Forgot password · Borewright',
   },
   {
+    path: 'create-shop',
+    loadComponent: () => import('./auth/create-shop').then((m) => m.CreateShop),
+    title: 'Create a shop · Borewright',
+  },
+  {
+    path: 'create-shop/confirm',
+    loadComponent: () => import('./auth/confirm-shop').then((m) => m.ConfirmShop),
+    title: 'Confirm your shop · Borewright',
+  },
+  {
     path: 'reset-password',
     loadComponent: () => import('./auth/reset-password').then((m) => m.ResetPassword),
     title: 'New password · Borewright',

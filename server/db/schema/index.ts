@@ -15,3 +15,5 @@ export { attachments } from './attachments';
 export { signInAttempts, signInAddresses } from './sign-in-attempts';
 export { shopSettings } from './shop-settings';
 export { jobEvents, jobPresence, packProgress } from './live';
+export { requestCounters } from './request-counters';
+export { signUps } from './sign-ups';

@@ -22,6 +22,8 @@ export class AuthStore {
   readonly user = computed(() => this.current() ?? null);
   readonly role = computed(() => this.current()?.role);
   readonly signedIn = computed(() => this.user() !== null);
+  /** Whether this installation lets visitors create a shop (the server's SIGNUP), as the session answer says. */
+  readonly signUpOpen = signal(false);
   /** How the signed-in user reads lengths; millimetres when nobody is signed in. */
   readonly units = computed<LengthUnit>(() => this.current()?.units ?? 'mm');
 
@@ -35,7 +37,11 @@ export class AuthStore {
    */
   restoreSession(): Promise<User | null> {
     this.restoring ??= Promise.all([firstValueFrom(this.http.get('/api/auth/session')), answers()])
-      .then(([raw, { sessionAnswer }]) => sessionAnswer.parse(raw).user)
+      .then(([raw, { sessionAnswer }]) => {
+        const answer = sessionAnswer.parse(raw);
+        this.signUpOpen.set(answer.signUpOpen ?? false);
+        return answer.user;
+      })
       .then(
         (who) => this.remember(who),
         () => this.remember(null),

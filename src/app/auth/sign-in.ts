@@ -42,6 +42,8 @@ export class SignIn {
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
   protected readonly passwordShown = signal(false);
+  /** Offered only where the server takes sign-ups (SIGNUP=open), as the session answer says. */
+  protected readonly signUpOpen = this.auth.signUpOpen;
 
   protected togglePasswordShown(): void {
     this.passwordShown.update((shown) => !shown);
