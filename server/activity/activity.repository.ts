@@ -1,5 +1,6 @@
 import { desc, eq } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { activity, users } from '../db/schema';
 
 export type ActivityDraft = Omit<typeof activity.$inferInsert, 'id' | 'at'>;
@@ -24,7 +25,7 @@ export function listActivity(db: Database, filter: { jobId?: number; limit: numb
     })
     .from(activity)
     .leftJoin(users, eq(users.id, activity.userId))
-    .where(filter.jobId === undefined ? undefined : eq(activity.jobId, filter.jobId))
+    .where(inOwnShop(activity, filter.jobId === undefined ? undefined : eq(activity.jobId, filter.jobId)))
     .orderBy(desc(activity.at), desc(activity.id))
     .limit(filter.limit);
 }

@@ -1,5 +1,6 @@
 import { asc, eq } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { attachments, users } from '../db/schema';
 
 export type AttachmentDraft = Omit<typeof attachments.$inferInsert, 'id' | 'uploadedAt'>;
@@ -16,17 +17,17 @@ const summaryColumns = {
 };
 
 export function listAttachments(db: Database, jobId: number) {
-  return db.select(summaryColumns).from(attachments).leftJoin(users, eq(users.id, attachments.uploadedBy)).where(eq(attachments.jobId, jobId)).orderBy(asc(attachments.id));
+  return db.select(summaryColumns).from(attachments).leftJoin(users, eq(users.id, attachments.uploadedBy)).where(inOwnShop(attachments, eq(attachments.jobId, jobId))).orderBy(asc(attachments.id));
 }
 
 export async function findAttachmentSummary(db: Database, id: number) {
-  const [row] = await db.select(summaryColumns).from(attachments).leftJoin(users, eq(users.id, attachments.uploadedBy)).where(eq(attachments.id, id));
+  const [row] = await db.select(summaryColumns).from(attachments).leftJoin(users, eq(users.id, attachments.uploadedBy)).where(inOwnShop(attachments, eq(attachments.id, id)));
   return row;
 }
 
 /** One attachment with its bytes, for a download. */
 export async function findAttachment(db: Database, id: number) {
-  const [row] = await db.select().from(attachments).where(eq(attachments.id, id));
+  const [row] = await db.select().from(attachments).where(inOwnShop(attachments, eq(attachments.id, id)));
   return row;
 }
 
@@ -37,6 +38,6 @@ export async function insertAttachment(db: Database, draft: AttachmentDraft): Pr
 
 /** Deletes one attachment; answers what it deleted, or undefined when there was none. */
 export async function deleteAttachment(db: Database, id: number) {
-  const [row] = await db.delete(attachments).where(eq(attachments.id, id)).returning({ jobId: attachments.jobId, filename: attachments.filename });
+  const [row] = await db.delete(attachments).where(inOwnShop(attachments, eq(attachments.id, id))).returning({ jobId: attachments.jobId, filename: attachments.filename });
   return row;
 }

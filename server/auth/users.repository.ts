@@ -1,5 +1,6 @@
 import { count, eq, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { shops, users } from '../db/schema';
 import type { LengthUnit } from '../../shared/units/length-unit';
 
@@ -25,7 +26,7 @@ export async function findAccount(db: Database, id: number) {
   return row;
 }
 
-/** How many accounts exist; the demo seed runs only when none do. */
+/** How many accounts exist in the whole installation; the demo seed runs only when none do (outside any shop). */
 export async function countUsers(db: Database): Promise<number> {
   const [row] = await db.select({ n: count() }).from(users);
   return row.n;
@@ -38,11 +39,11 @@ export async function insertUsers(db: Database, rows: (typeof users.$inferInsert
 
 /** The active members' names and addresses, by name: the people mail can be sent to without typing an address (a deactivated member is no longer one of them). */
 export function listPeople(db: Database) {
-  return db.select({ name: users.name, email: users.email }).from(users).where(eq(users.active, true)).orderBy(users.name);
+  return db.select({ name: users.name, email: users.email }).from(users).where(inOwnShop(users, eq(users.active, true))).orderBy(users.name);
 }
 
 /** Sets how an account reads lengths; the account with its new choice, or undefined when it is gone. */
 export async function updateUnits(db: Database, id: number, units: LengthUnit) {
-  const [row] = await db.update(users).set({ units }).where(eq(users.id, id)).returning(accountColumns);
+  const [row] = await db.update(users).set({ units }).where(inOwnShop(users, eq(users.id, id))).returning(accountColumns);
   return row;
 }

@@ -1,6 +1,7 @@
 import { asc, countDistinct, eq, inArray } from 'drizzle-orm';
 import type { Fitting } from '../../shared/catalog/fitting';
 import type { Database } from '../db/client';
+import { inOwnShop, ownShop } from '../db/own-shop';
 import { jobs, panels, placements, shopFittings, users } from '../db/schema';
 
 /** The shop's fittings as stored, in the order they were imported, with the name of who imported each. */
@@ -9,6 +10,7 @@ export function listShopFittings(db: Database) {
     .select({ fittingId: shopFittings.fittingId, fitting: shopFittings.fitting, createdAt: shopFittings.createdAt, createdBy: users.name })
     .from(shopFittings)
     .leftJoin(users, eq(users.id, shopFittings.createdBy))
+    .where(ownShop(shopFittings))
     .orderBy(asc(shopFittings.id));
 }
 
@@ -18,7 +20,7 @@ export function findShopFittings(db: Database, fittingIds: readonly string[]) {
   return db
     .select({ fittingId: shopFittings.fittingId, fitting: shopFittings.fitting, createdAt: shopFittings.createdAt })
     .from(shopFittings)
-    .where(inArray(shopFittings.fittingId, [...fittingIds]));
+    .where(inOwnShop(shopFittings, inArray(shopFittings.fittingId, [...fittingIds])));
 }
 
 /** Stores fittings already validated; call inside the import's transaction. */
@@ -31,7 +33,7 @@ export async function insertShopFittings(tx: Database, fittings: readonly Fittin
 
 /** Removes one shop fitting; false when there was none by that id. */
 export async function deleteShopFitting(tx: Database, fittingId: string): Promise<boolean> {
-  const gone = await tx.delete(shopFittings).where(eq(shopFittings.fittingId, fittingId)).returning({ id: shopFittings.id });
+  const gone = await tx.delete(shopFittings).where(inOwnShop(shopFittings, eq(shopFittings.fittingId, fittingId))).returning({ id: shopFittings.id });
   return gone.length > 0;
 }
 
@@ -48,7 +50,7 @@ export function jobsUsingFitting(db: Database, fittingId: string) {
     .from(placements)
     .innerJoin(panels, eq(panels.id, placements.panelId))
     .innerJoin(jobs, eq(jobs.id, panels.jobId))
-    .where(eq(placements.fitting, fittingId))
+    .where(inOwnShop(placements, eq(placements.fitting, fittingId)))
     .groupBy(jobs.id, jobs.name, jobs.archived)
     .orderBy(asc(jobs.name), asc(jobs.id));
 }

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { builtinCatalog } from '../../shared/catalog/builtin-catalog';
 import { shopFittings } from '../db/schema';
+import { inShop } from '../db/shop-scope';
 import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
 import { shopCatalog } from './shop-catalog';
 
@@ -19,7 +20,7 @@ describe('shopCatalog', () => {
       { shopId: DEMO_SHOP_ID, fittingId: 'shelf-pin-5', fitting: { ...pin, name: 'Clashing pin' } },
       { shopId: DEMO_SHOP_ID, fittingId: 'broken', fitting: { id: 'broken' } as never },
     ]);
-    const catalog = await shopCatalog(t.database.db);
+    const catalog = await inShop(DEMO_SHOP_ID, () => shopCatalog(t.database.db));
     expect(catalog.get('shop-pin')?.name).toBe('Shop pin');
     expect(catalog.get('shelf-pin-5')?.name).toBe(pin.name);
     expect(catalog.has('broken')).toBe(false);
@@ -31,7 +32,7 @@ describe('shopCatalog', () => {
     if (light?.purpose !== 'lift-mechanism') throw new Error('the built-in catalog has no light mechanism');
     const { rangeFor: _, ...lift } = light.lift;
     await t.database.db.insert(shopFittings).values([{ shopId: DEMO_SHOP_ID, fittingId: 'old-lift', fitting: { ...light, id: 'old-lift', lift } as never }]);
-    const stored = (await shopCatalog(t.database.db)).get('old-lift');
+    const stored = (await inShop(DEMO_SHOP_ID, () => shopCatalog(t.database.db))).get('old-lift');
     expect(stored?.purpose === 'lift-mechanism' && stored.lift.rangeFor).toBe('mechanism');
   });
 });

@@ -52,14 +52,14 @@ describe('job mapping', () => {
 
   it('gives back the same document after a trip through the tables', async () => {
     const jobId = await inShop(shopId, () => database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything))));
-    const rows = await loadJobRows(database.db, jobId);
+    const rows = await inShop(shopId, () => loadJobRows(database.db, jobId));
     expect(rows).toBeDefined();
     expect(toJobDocument(rows!)).toEqual(everything);
   });
 
   it('keeps the document order whatever order the rows come in', async () => {
     const jobId = await inShop(shopId, () => database.db.transaction((tx) => insertJobDraft(tx, fromJobDocument(everything))));
-    const rows = (await loadJobRows(database.db, jobId))!;
+    const rows = (await inShop(shopId, () => loadJobRows(database.db, jobId)))!;
     const shuffled = { ...rows, panels: [...rows.panels].reverse(), bores: [...rows.bores].reverse(), carcasses: [...rows.carcasses].reverse() };
     expect(toJobDocument(shuffled)).toEqual(everything);
   });

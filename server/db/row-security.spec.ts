@@ -1,11 +1,14 @@
 import { eq, getTableName, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { joinPresence } from '../live/job-events.repository';
+import { PackProgressBoard } from '../packs/pack-progress';
 import { addSecondShop, type SecondShop } from '../testing/second-shop';
 import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
-import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, shopSettings, users } from './schema';
+import { activity, attachments, bores, carcasses, jobEvents, jobPresence, jobs, mailTokens, outbox, packProgress, panels, placements, shopFittings, shopSettings, users } from './schema';
 import { inShop } from './shop-scope';
 
-const SHOP_OWNED = [users, jobs, carcasses, panels, placements, bores, activity, attachments, shopFittings, shopSettings, mailTokens, outbox];
+const SHOP_OWNED = [users, jobs, carcasses, panels, placements, bores, activity, attachments, shopFittings, shopSettings, mailTokens, outbox, jobEvents, jobPresence, packProgress];
+
 
 /**
  * The second wall: queries that name no shop at all (as a repository that forgot its filter would)
@@ -18,6 +21,9 @@ describe('row-level security on PGlite', () => {
   beforeAll(async () => {
     t = await createTestApp();
     second = await addSecondShop(t);
+    // Someone has the second shop's job open (a presence row and its event), and a pack of it is being made.
+    await inShop(second.shopId, () => joinPresence(t.database.db, 'second-shop-stream', second.jobId, { id: second.adminId, name: 'Second Admin', panelId: null }));
+    await inShop(second.shopId, () => new PackProgressBoard(t.database.db, (err) => { throw err; }).start('second-shop-ticket', 3));
   }, 120_000);
   afterAll(() => t.close());
 

@@ -24,9 +24,9 @@ describe('backup and restore', () => {
   it('restores into a fresh database the same rows, jobs and documents', async () => {
     await restoreTables(target.db, backup);
     expect(await dumpTables(target.db, new Date('2030-01-02T03:04:05Z'))).toEqual(backup);
-    const jobList = await listJobs(source.db, false);
-    expect(await listJobs(target.db, false)).toEqual(jobList);
-    for (const { id } of jobList) expect(await jobAsDocument(target.db, id)).toEqual(await jobAsDocument(source.db, id));
+    const jobList = await inShop(DEMO_SHOP_ID, () => listJobs(source.db, false));
+    expect(await inShop(DEMO_SHOP_ID, () => listJobs(target.db, false))).toEqual(jobList);
+    for (const { id } of jobList) expect(await inShop(DEMO_SHOP_ID, () => jobAsDocument(target.db, id))).toEqual(await inShop(DEMO_SHOP_ID, () => jobAsDocument(source.db, id)));
     // The demo shop is planned: its holes are placements of catalog fittings (shelf pins, plates, hinges, connectors).
     expect(backup.tables.placements.length).toBeGreaterThan(500);
   });

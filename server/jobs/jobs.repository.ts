@@ -1,5 +1,6 @@
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop, ownShopParams, ownShopPlaceholder } from '../db/own-shop';
 import { preparedPerDatabase } from '../db/prepared';
 import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
 import { bores, carcasses, jobs, panels, placements, users } from '../db/schema';
@@ -12,23 +13,23 @@ const summaryColumns = (db: Database) => ({
   notes: jobs.notes,
   archived: jobs.archived,
   version: jobs.version,
-  carcassCount: db.$count(carcasses, eq(carcasses.jobId, jobs.id)),
-  panelCount: db.$count(panels, eq(panels.jobId, jobs.id)),
+  carcassCount: db.$count(carcasses, inOwnShop(carcasses, eq(carcasses.jobId, jobs.id))),
+  panelCount: db.$count(panels, inOwnShop(panels, eq(panels.jobId, jobs.id))),
   updatedAt: jobs.updatedAt,
 });
 
 /** Jobs, the most recently changed first. */
 export function listJobSummaries(db: Database, archived: boolean) {
-  return db.select(summaryColumns(db)).from(jobs).where(eq(jobs.archived, archived)).orderBy(desc(jobs.updatedAt), desc(jobs.id));
+  return db.select(summaryColumns(db)).from(jobs).where(inOwnShop(jobs, eq(jobs.archived, archived))).orderBy(desc(jobs.updatedAt), desc(jobs.id));
 }
 
 /** One job with its counts, as listed. */
 export async function findJobSummary(db: Database, id: number) {
-  const [row] = await db.select(summaryColumns(db)).from(jobs).where(eq(jobs.id, id));
+  const [row] = await db.select(summaryColumns(db)).from(jobs).where(inOwnShop(jobs, eq(jobs.id, id)));
   return row;
 }
 
-/** How many jobs exist, archived ones included. */
+/** How many jobs exist in the whole installation, archived ones included: the demo seed's check, outside any shop. */
 export async function countJobs(db: Database): Promise<number> {
   const [row] = await db.select({ n: count() }).from(jobs);
   return row.n;
@@ -36,13 +37,13 @@ export async function countJobs(db: Database): Promise<number> {
 
 /** The job's own row: settings, limits and materials included. */
 export async function findJob(db: Database, id: number) {
-  const [row] = await db.select().from(jobs).where(eq(jobs.id, id));
+  const [row] = await db.select().from(jobs).where(inOwnShop(jobs, eq(jobs.id, id)));
   return row;
 }
 
 /** The job's own row, locked until the transaction ends, so that archiving it waits for a write under way. */
 export async function lockJob(tx: Database, id: number) {
-  const [row] = await tx.select().from(jobs).where(eq(jobs.id, id)).for('update');
+  const [row] = await tx.select().from(jobs).where(inOwnShop(jobs, eq(jobs.id, id))).for('update');
   return row;
 }
 
@@ -51,7 +52,7 @@ const jobStampRead = preparedPerDatabase((db) =>
   db
     .select({ version: jobs.version, writtenBy: sql<string>`${jobs}.xmin::text`, updatedAt: sql<string>`(extract(epoch from ${jobs.updatedAt}) * 1000000)::bigint::text` })
     .from(jobs)
-    .where(eq(jobs.id, sql.placeholder('id')))
+    .where(and(eq(jobs.id, sql.placeholder('id')), ownShopPlaceholder(jobs)))
     .prepare('job_stamp'),
 );
 
@@ -61,7 +62,7 @@ const jobStampRead = preparedPerDatabase((db) =>
  * gives a new stamp, and a database restored or rebuilt gives a new `updatedAt` too.
  */
 export async function findJobStamp(db: Database, id: number): Promise<{ version: number; writtenBy: string; updatedAt: string } | undefined> {
-  const [row] = await jobStampRead(db).execute({ id });
+  const [row] = await jobStampRead(db).execute(ownShopParams({ id }));
   return row;
 }
 
@@ -72,12 +73,12 @@ export async function findJobStamp(db: Database, id: number): Promise<{ version:
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
   const job = await findJob(db, id);
   if (!job) return undefined;
-  const panelIds = db.select({ id: panels.id }).from(panels).where(eq(panels.jobId, id));
+  const panelIds = db.select({ id: panels.id }).from(panels).where(inOwnShop(panels, eq(panels.jobId, id)));
   const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
-    db.select().from(carcasses).where(eq(carcasses.jobId, id)).orderBy(asc(carcasses.id)),
-    db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(eq(panels.jobId, id)).orderBy(asc(panels.id)),
-    db.select().from(placements).where(inArray(placements.panelId, panelIds)).orderBy(asc(placements.id)),
-    db.select().from(bores).where(inArray(bores.panelId, panelIds)).orderBy(asc(bores.id)),
+    db.select().from(carcasses).where(inOwnShop(carcasses, eq(carcasses.jobId, id))).orderBy(asc(carcasses.id)),
+    db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(inOwnShop(panels, eq(panels.jobId, id))).orderBy(asc(panels.id)),
+    db.select().from(placements).where(inOwnShop(placements, inArray(placements.panelId, panelIds))).orderBy(asc(placements.id)),
+    db.select().from(bores).where(inOwnShop(bores, inArray(bores.panelId, panelIds))).orderBy(asc(bores.id)),
   ]);
   const people = new Map<number, string>();
   for (const { panel, statusByName } of panelRows) if (panel.statusBy !== null && statusByName !== null) people.set(panel.statusBy, statusByName);
@@ -123,25 +124,25 @@ export async function updateJobAtVersion(
   const [row] = await db
     .update(jobs)
     .set({ ...changes, version: sql`${jobs.version} + 1`, updatedAt: sql`now()` })
-    .where(and(eq(jobs.id, id), eq(jobs.version, version)))
+    .where(inOwnShop(jobs, eq(jobs.id, id), eq(jobs.version, version)))
     .returning({ id: jobs.id });
   return row;
 }
 
 /** Marks the job changed, for the jobs list's order. */
 export async function touchJob(db: Database, id: number): Promise<void> {
-  await db.update(jobs).set({ updatedAt: sql`now()` }).where(eq(jobs.id, id));
+  await db.update(jobs).set({ updatedAt: sql`now()` }).where(inOwnShop(jobs, eq(jobs.id, id)));
 }
 
 /** The job's carcasses: document id to database id. */
 export async function carcassKeys(db: Database, jobId: number): Promise<Map<string, number>> {
-  const rows = await db.select({ id: carcasses.id, key: carcasses.key }).from(carcasses).where(eq(carcasses.jobId, jobId));
+  const rows = await db.select({ id: carcasses.id, key: carcasses.key }).from(carcasses).where(inOwnShop(carcasses, eq(carcasses.jobId, jobId)));
   return new Map(rows.map((r) => [r.key, r.id]));
 }
 
 /** Changes a carcass's fields and returns its row. */
 export async function updateCarcass(db: Database, id: number, changes: Omit<CarcassDraft, 'key'>) {
-  const [row] = await db.update(carcasses).set(changes).where(eq(carcasses.id, id)).returning();
+  const [row] = await db.update(carcasses).set(changes).where(inOwnShop(carcasses, eq(carcasses.id, id))).returning();
   return row;
 }
 

@@ -1,7 +1,8 @@
-import { and, asc, desc, eq, gt, lt, sql } from 'drizzle-orm';
+import { asc, desc, eq, gt, lt, sql } from 'drizzle-orm';
 import type { LiveEvent, LiveEventData, LiveEventKind, LiveMember, PresentMember } from '../../shared/api/live-contract';
 import type { Database } from '../db/client';
-import { jobEvents, jobPresence, users } from '../db/schema';
+import { inOwnShop } from '../db/own-shop';
+import { jobEvents, jobPresence, jobs, users } from '../db/schema';
 
 /** The channel every server LISTENs on; a notification's payload is `jobId:eventId`, never the event itself. */
 export const JOB_EVENTS_CHANNEL = 'borewright_job_events';
@@ -24,10 +25,10 @@ export function liveMember(user: { id: number; name: string }): LiveMember {
  * and a stream reading "after the last id it sent" never skips one.
  */
 export async function recordJobEvent<K extends LiveEventKind>(tx: Database, jobId: number, kind: K, data: LiveEventData[K]): Promise<number> {
-  await tx.execute(sql`select 1 from jobs where id = ${jobId} for no key update`);
+  await tx.select({ id: jobs.id }).from(jobs).where(inOwnShop(jobs, eq(jobs.id, jobId))).for('no key update');
   const [{ id }] = await tx.insert(jobEvents).values({ jobId, kind, data: data as Record<string, unknown> }).returning({ id: jobEvents.id });
   await tx.execute(sql`select pg_notify(${JOB_EVENTS_CHANNEL}, ${`${jobId}:${id}`})`);
-  if (id % PRUNE_EVERY === 0) await tx.delete(jobEvents).where(lt(jobEvents.at, sql`now() - ${KEEP_EVENTS}::interval`));
+  if (id % PRUNE_EVERY === 0) await tx.delete(jobEvents).where(inOwnShop(jobEvents, lt(jobEvents.at, sql`now() - ${KEEP_EVENTS}::interval`)));
   return id;
 }
 
@@ -36,7 +37,7 @@ export async function eventsAfter(db: Database, jobId: number, afterId: number):
   const rows = await db
     .select({ id: jobEvents.id, kind: jobEvents.kind, data: jobEvents.data })
     .from(jobEvents)
-    .where(and(eq(jobEvents.jobId, jobId), gt(jobEvents.id, afterId)))
+    .where(inOwnShop(jobEvents, eq(jobEvents.jobId, jobId), gt(jobEvents.id, afterId)))
     .orderBy(asc(jobEvents.id))
     .limit(500);
   return rows as LiveEvent[];
@@ -44,7 +45,7 @@ export async function eventsAfter(db: Database, jobId: number, afterId: number):
 
 /** The job's newest event id, 0 when it has none: where a stream without Last-Event-ID starts. */
 export async function lastEventId(db: Database, jobId: number): Promise<number> {
-  const [row] = await db.select({ id: jobEvents.id }).from(jobEvents).where(eq(jobEvents.jobId, jobId)).orderBy(desc(jobEvents.id)).limit(1);
+  const [row] = await db.select({ id: jobEvents.id }).from(jobEvents).where(inOwnShop(jobEvents, eq(jobEvents.jobId, jobId))).orderBy(desc(jobEvents.id)).limit(1);
   return row?.id ?? 0;
 }
 
@@ -54,7 +55,7 @@ async function presentMembers(tx: Database, jobId: number): Promise<PresentMembe
     .selectDistinct({ id: users.id, name: users.name, panelId: jobPresence.panelId })
     .from(jobPresence)
     .innerJoin(users, eq(users.id, jobPresence.userId))
-    .where(and(eq(jobPresence.jobId, jobId), gt(jobPresence.seenAt, sql`now() - ${`${PRESENCE_TIMEOUT_S} seconds`}::interval`)))
+    .where(inOwnShop(jobPresence, eq(jobPresence.jobId, jobId), gt(jobPresence.seenAt, sql`now() - ${`${PRESENCE_TIMEOUT_S} seconds`}::interval`)))
     .orderBy(asc(users.name), asc(jobPresence.panelId));
   return rows;
 }
@@ -62,7 +63,7 @@ async function presentMembers(tx: Database, jobId: number): Promise<PresentMembe
 /** A stream opens: its presence row and a `presence` event naming everyone there now. */
 export async function joinPresence(db: Database, stream: string, jobId: number, member: PresentMember): Promise<void> {
   await db.transaction(async (tx) => {
-    await tx.delete(jobPresence).where(lt(jobPresence.seenAt, sql`now() - interval '1 hour'`));
+    await tx.delete(jobPresence).where(inOwnShop(jobPresence, lt(jobPresence.seenAt, sql`now() - interval '1 hour'`)));
     await tx.insert(jobPresence).values({ stream, jobId, userId: member.id, panelId: member.panelId });
     await recordJobEvent(tx, jobId, 'presence', { change: 'joined', member, members: await presentMembers(tx, jobId) });
   });
@@ -71,7 +72,7 @@ export async function joinPresence(db: Database, stream: string, jobId: number, 
 /** A stream closes: its row goes, and a `presence` event names who is left. */
 export async function leavePresence(db: Database, stream: string, jobId: number, member: PresentMember): Promise<void> {
   await db.transaction(async (tx) => {
-    const gone = await tx.delete(jobPresence).where(eq(jobPresence.stream, stream)).returning({ stream: jobPresence.stream });
+    const gone = await tx.delete(jobPresence).where(inOwnShop(jobPresence, eq(jobPresence.stream, stream))).returning({ stream: jobPresence.stream });
     // A job deleted meanwhile took the row with it, and has no log to write to.
     if (gone.length > 0) await recordJobEvent(tx, jobId, 'presence', { change: 'left', member, members: await presentMembers(tx, jobId) });
   });
@@ -79,5 +80,5 @@ export async function leavePresence(db: Database, stream: string, jobId: number,
 
 /** The stream's heartbeat: it is still there. */
 export async function touchPresence(db: Database, stream: string): Promise<void> {
-  await db.update(jobPresence).set({ seenAt: sql`now()` }).where(eq(jobPresence.stream, stream));
+  await db.update(jobPresence).set({ seenAt: sql`now()` }).where(inOwnShop(jobPresence, eq(jobPresence.stream, stream)));
 }

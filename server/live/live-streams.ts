@@ -3,6 +3,7 @@ import type { Request, Response } from 'express';
 import type { LiveEvent, PresentMember } from '../../shared/api/live-contract';
 import { sessionSignedInAs } from '../auth/sessions.repository';
 import type { Database } from '../db/client';
+import { inShop, requireShop } from '../db/shop-scope';
 import type { JobEvents } from './job-events';
 import { eventsAfter, joinPresence, lastEventId, leavePresence, touchPresence } from './job-events.repository';
 
@@ -36,6 +37,9 @@ export class LiveStreams {
     const user = req.user!;
     const member: PresentMember = { id: user.id, name: user.name, panelId };
     const stream = randomUUID();
+    // A notification (from the listening connection), the browser going and shutdown all call back outside
+    // this request: what they read and write is this shop's, so they run in its scope, never across shops.
+    const shopId = requireShop();
     let sent = resumeFrom ?? (await lastEventId(this.db, jobId));
     let pumping = Promise.resolve();
     let ended = false;
@@ -44,7 +48,7 @@ export class LiveStreams {
     const pump = () => {
       pumping = pumping.then(async () => {
         if (ended) return;
-        for (const event of await eventsAfter(this.db, jobId, sent)) {
+        for (const event of await inShop(shopId, () => eventsAfter(this.db, jobId, sent))) {
           write(event);
           sent = event.id;
         }
@@ -76,7 +80,7 @@ export class LiveStreams {
           this.open.delete(open);
           res.end();
           await pumping;
-          await leavePresence(this.db, stream, jobId, member).catch((err: unknown) => req.log.warn({ err }, 'leaving presence failed'));
+          await inShop(shopId, () => leavePresence(this.db, stream, jobId, member)).catch((err: unknown) => req.log.warn({ err }, 'leaving presence failed'));
         })()),
     };
     this.open.add(open);

@@ -1,5 +1,7 @@
 import { eq, lt, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
+import { inShop, requireShop } from '../db/shop-scope';
 import { packProgress } from '../db/schema';
 import type { PackProgress } from './pack-order';
 
@@ -17,10 +19,14 @@ export class PackProgressBoard {
     private readonly onError: (err: unknown) => void,
   ) {}
 
-  /** Follows a pack from its start, with no panel reached yet, until `finish`. */
+  /**
+   * Follows a pack from its start, with no panel reached yet, until `finish`. The reports come from the
+   * pack worker's messages, outside the request's scope, so they are written in the shop that started it.
+   */
   async start(ticket: string, panels: number): Promise<(progress: PackProgress) => void> {
+    const shopId = requireShop();
     // A server that stopped while making a pack left its row behind.
-    await this.db.delete(packProgress).where(lt(packProgress.updatedAt, sql`now() - interval '1 hour'`));
+    await this.db.delete(packProgress).where(inOwnShop(packProgress, lt(packProgress.updatedAt, sql`now() - interval '1 hour'`)));
     await this.db
       .insert(packProgress)
       .values({ ticket, panel: 0, panels })
@@ -31,14 +37,14 @@ export class PackProgressBoard {
       while (latest) {
         const next = latest;
         latest = undefined;
-        await this.db.update(packProgress).set({ panel: next.panel, panels: next.panels, updatedAt: sql`now()` }).where(eq(packProgress.ticket, ticket));
+        await this.db.update(packProgress).set({ panel: next.panel, panels: next.panels, updatedAt: sql`now()` }).where(inOwnShop(packProgress, eq(packProgress.ticket, ticket)));
       }
     };
     return (progress) => {
       latest = progress;
       if (busy) return;
       busy = true;
-      const done = write()
+      const done = inShop(shopId, write)
         .catch(this.onError)
         .finally(() => (busy = false));
       this.writing.set(ticket, done);
@@ -49,12 +55,12 @@ export class PackProgressBoard {
   async finish(ticket: string): Promise<void> {
     await this.writing.get(ticket);
     this.writing.delete(ticket);
-    await this.db.delete(packProgress).where(eq(packProgress.ticket, ticket));
+    await this.db.delete(packProgress).where(inOwnShop(packProgress, eq(packProgress.ticket, ticket)));
   }
 
   /** How far the pack of `ticket` has got; undefined when no such pack is being made. */
   async get(ticket: string): Promise<PackProgress | undefined> {
-    const [row] = await this.db.select({ panel: packProgress.panel, panels: packProgress.panels }).from(packProgress).where(eq(packProgress.ticket, ticket));
+    const [row] = await this.db.select({ panel: packProgress.panel, panels: packProgress.panels }).from(packProgress).where(inOwnShop(packProgress, eq(packProgress.ticket, ticket)));
     return row;
   }
 }

@@ -1,18 +1,19 @@
-import { and, asc, eq, sql, type SQL } from 'drizzle-orm';
+import { asc, eq, sql, type SQL } from 'drizzle-orm';
 import type { PanelRecord } from '../../shared/api/contract';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { toPanelRecord, type BoreDraft, type PanelDraft, type PanelRow, type PlacementDraft } from '../db/job-mapping';
 import { bores, carcasses, panels, placements, users } from '../db/schema';
 
 /** The panel's row, without its drilling. */
 export async function findPanel(db: Database, id: number): Promise<PanelRow | undefined> {
-  const [row] = await db.select().from(panels).where(eq(panels.id, id));
+  const [row] = await db.select().from(panels).where(inOwnShop(panels, eq(panels.id, id)));
   return row;
 }
 
 /** The panels of a job: their document ids and hang relations, for id choice and reference checks. */
 export function jobPanelRefs(db: Database, jobId: number) {
-  return db.select({ key: panels.key, name: panels.name, hang: panels.hang }).from(panels).where(eq(panels.jobId, jobId));
+  return db.select({ key: panels.key, name: panels.name, hang: panels.hang }).from(panels).where(inOwnShop(panels, eq(panels.jobId, jobId)));
 }
 
 /** The panel as the API returns it; undefined when there is no such panel. */
@@ -22,11 +23,11 @@ export async function loadPanelRecord(db: Database, id: number): Promise<PanelRe
     .from(panels)
     .leftJoin(carcasses, eq(carcasses.id, panels.carcassId))
     .leftJoin(users, eq(users.id, panels.statusBy))
-    .where(eq(panels.id, id));
+    .where(inOwnShop(panels, eq(panels.id, id)));
   if (!found) return undefined;
   const [placementRows, boreRows] = await Promise.all([
-    db.select().from(placements).where(eq(placements.panelId, id)).orderBy(asc(placements.id)),
-    db.select().from(bores).where(eq(bores.panelId, id)).orderBy(asc(bores.id)),
+    db.select().from(placements).where(inOwnShop(placements, eq(placements.panelId, id))).orderBy(asc(placements.id)),
+    db.select().from(bores).where(inOwnShop(bores, eq(bores.panelId, id))).orderBy(asc(bores.id)),
   ]);
   return toPanelRecord(found.panel, found.carcassKey ?? undefined, placementRows, boreRows, found.statusBy);
 }
@@ -48,7 +49,7 @@ export async function updatePanelAtVersion(db: Database, id: number, version: nu
   const [row] = await db
     .update(panels)
     .set({ ...changes, version: sql`${panels.version} + 1`, updatedAt: sql`now()` })
-    .where(and(eq(panels.id, id), eq(panels.version, version)))
+    .where(inOwnShop(panels, eq(panels.id, id), eq(panels.version, version)))
     .returning();
   return row;
 }
@@ -57,7 +58,7 @@ export async function updatePanelAtVersion(db: Database, id: number, version: nu
 export async function deletePanelAtVersion(db: Database, id: number, version: number): Promise<boolean> {
   const rows = await db
     .delete(panels)
-    .where(and(eq(panels.id, id), eq(panels.version, version)))
+    .where(inOwnShop(panels, eq(panels.id, id), eq(panels.version, version)))
     .returning({ id: panels.id });
   return rows.length > 0;
 }
@@ -77,7 +78,7 @@ export async function insertDrilling(db: Database, panelId: number, placementRow
 
 /** Replaces the panel's placements and bores by these lists. */
 export async function replaceDrilling(db: Database, panelId: number, placementRows: PlacementDraft[], boreRows: BoreDraft[]): Promise<void> {
-  await db.delete(placements).where(eq(placements.panelId, panelId));
-  await db.delete(bores).where(eq(bores.panelId, panelId));
+  await db.delete(placements).where(inOwnShop(placements, eq(placements.panelId, panelId)));
+  await db.delete(bores).where(inOwnShop(bores, eq(bores.panelId, panelId)));
   await insertDrilling(db, panelId, placementRows, boreRows);
 }

@@ -7,6 +7,7 @@ import { changedSincePlanned, replacement, type ChangedPanelChoice, type StoredP
 import { recordActivity } from '../activity/activity.repository';
 import { shopCatalog } from '../catalog/shop-catalog';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { boreDraft, carcassDraft, panelDraft, placementDraft, toCarcass, type CarcassRow } from '../db/job-mapping';
 import { panels as panelTable } from '../db/schema';
 import { AppError } from '../http/app-error';
@@ -104,7 +105,7 @@ async function insertPlannedPanel(tx: Database, jobId: number, carcassId: number
 }
 
 async function carcassPanelRecords(tx: Database, carcassId: number) {
-  const rows = await tx.select({ id: panelTable.id }).from(panelTable).where(eq(panelTable.carcassId, carcassId)).orderBy(panelTable.id);
+  const rows = await tx.select({ id: panelTable.id }).from(panelTable).where(inOwnShop(panelTable, eq(panelTable.carcassId, carcassId))).orderBy(panelTable.id);
   const records = [];
   for (const { id } of rows) {
     const record = await panels.loadPanelRecord(tx, id);

@@ -1,5 +1,6 @@
-import { and, eq } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Database } from '../db/client';
+import { inOwnShop } from '../db/own-shop';
 import { placements } from '../db/schema';
 
 /** Gives every placement of fitting `from` on a panel fitting `to`; returns how many it changed. */
@@ -7,7 +8,7 @@ export async function swapPanelPlacements(db: Database, panelId: number, from: s
   const rows = await db
     .update(placements)
     .set({ fitting: to })
-    .where(and(eq(placements.panelId, panelId), eq(placements.fitting, from)))
+    .where(inOwnShop(placements, eq(placements.panelId, panelId), eq(placements.fitting, from)))
     .returning({ id: placements.id });
   return rows.length;
 }

@@ -2,6 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import { and, eq, gt, isNull } from 'drizzle-orm';
 import { LINK_ERRORS, mailTokenShape } from '../../shared/api/team-contract';
 import type { Database } from '../db/client';
+import { inOwnShop, ownShop } from '../db/own-shop';
 import { acrossShops, inShop } from '../db/shop-scope';
 import { mailTokens } from '../db/schema';
 import type { MailTokenPurpose } from '../db/schema/mail-tokens';
@@ -50,13 +51,14 @@ function problem(purpose: MailTokenPurpose, row: MailTokenRow | undefined): AppE
   return new AppError(410, LINK_ERRORS.expired, words.expired(row.expiresAt));
 }
 
-async function findByToken(db: Database, purpose: MailTokenPurpose, token: string): Promise<MailTokenRow | undefined> {
+/** The link's row by its token: in the scope's shop, or (only to find which shop a link is of) across shops. */
+async function findByToken(db: Database, purpose: MailTokenPurpose, token: string, where: 'own shop' | 'across shops'): Promise<MailTokenRow | undefined> {
   // Anything not shaped like our tokens cannot match one: unknown, without asking the database.
   if (!mailTokenShape.test(token)) return undefined;
   const [row] = await db
     .select()
     .from(mailTokens)
-    .where(and(eq(mailTokens.tokenHash, hashMailToken(token)), eq(mailTokens.purpose, purpose)));
+    .where(and(eq(mailTokens.tokenHash, hashMailToken(token)), eq(mailTokens.purpose, purpose), where === 'own shop' ? ownShop(mailTokens) : undefined));
   return row;
 }
 
@@ -66,13 +68,13 @@ async function findByToken(db: Database, purpose: MailTokenPurpose, token: strin
  * `work` runs as no shop and finds nothing, answering as for any unknown link.
  */
 export async function inShopOfLink<T>(db: Database, purpose: MailTokenPurpose, token: string, work: () => Promise<T>): Promise<T> {
-  const row = await acrossShops(() => findByToken(db, purpose, token));
+  const row = await acrossShops(() => findByToken(db, purpose, token, 'across shops'));
   return inShop(row?.shopId ?? null, work);
 }
 
 /** The link's row while it still works; otherwise 404 (unknown or withdrawn) or 410 (used, expired), saying which. */
 export async function liveMailToken(db: Database, purpose: MailTokenPurpose, token: string, now: Date): Promise<MailTokenRow> {
-  const row = await findByToken(db, purpose, token);
+  const row = await findByToken(db, purpose, token, 'own shop');
   if (!row || row.usedAt || row.expiresAt.getTime() <= now.getTime()) throw problem(purpose, row);
   return row;
 }
@@ -87,7 +89,8 @@ export async function useMailToken(tx: Database, purpose: MailTokenPurpose, toke
         .update(mailTokens)
         .set({ usedAt: now })
         .where(
-          and(
+          inOwnShop(
+            mailTokens,
             eq(mailTokens.tokenHash, hashMailToken(token)),
             eq(mailTokens.purpose, purpose),
             isNull(mailTokens.usedAt),
@@ -97,5 +100,5 @@ export async function useMailToken(tx: Database, purpose: MailTokenPurpose, toke
         .returning()
     : [];
   if (used) return used;
-  throw problem(purpose, await findByToken(tx, purpose, token));
+  throw problem(purpose, await findByToken(tx, purpose, token, 'own shop'));
 }

@@ -1,6 +1,7 @@
-import { and, asc, desc, eq, isNull, sql } from 'drizzle-orm';
+import { asc, desc, eq, isNull, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import type { Database } from '../db/client';
+import { inOwnShop, ownShop } from '../db/own-shop';
 import { mailTokens, users } from '../db/schema';
 import type { MailTokenPurpose } from '../db/schema/mail-tokens';
 
@@ -11,12 +12,12 @@ const sameAddress = (column: typeof users.email | typeof mailTokens.email, email
 
 /** Everyone who has an account, active or not, by name. */
 export function listMembers(db: Database): Promise<MemberRow[]> {
-  return db.select(memberColumns).from(users).orderBy(asc(users.name), asc(users.id));
+  return db.select(memberColumns).from(users).where(ownShop(users)).orderBy(asc(users.name), asc(users.id));
 }
 
 /** One member; with `lock`, the row is held until the transaction ends (role and active changes). */
 export async function findMember(db: Database, id: number, lock = false): Promise<MemberRow | undefined> {
-  const query = db.select(memberColumns).from(users).where(eq(users.id, id));
+  const query = db.select(memberColumns).from(users).where(inOwnShop(users, eq(users.id, id)));
   const [row] = await (lock ? query.for('update') : query);
   return row;
 }
@@ -39,14 +40,14 @@ export async function lockActiveAdmins(db: Database): Promise<number[]> {
   const rows = await db
     .select({ id: users.id })
     .from(users)
-    .where(and(eq(users.role, 'admin'), eq(users.active, true)))
+    .where(inOwnShop(users, eq(users.role, 'admin'), eq(users.active, true)))
     .orderBy(asc(users.id))
     .for('update');
   return rows.map((r) => r.id);
 }
 
 export async function updateMember(db: Database, id: number, changes: Partial<Pick<typeof users.$inferInsert, 'role' | 'active' | 'passwordHash'>>): Promise<void> {
-  await db.update(users).set(changes).where(eq(users.id, id));
+  await db.update(users).set(changes).where(inOwnShop(users, eq(users.id, id)));
 }
 
 export async function insertMember(db: Database, row: Pick<typeof users.$inferInsert, 'email' | 'name' | 'role' | 'passwordHash'>): Promise<MemberRow> {
@@ -69,7 +70,7 @@ export function listOpenInvitations(db: Database) {
     })
     .from(mailTokens)
     .leftJoin(inviter, eq(inviter.id, mailTokens.createdBy))
-    .where(and(eq(mailTokens.purpose, 'invite'), isNull(mailTokens.usedAt)))
+    .where(inOwnShop(mailTokens, eq(mailTokens.purpose, 'invite'), isNull(mailTokens.usedAt)))
     .orderBy(desc(mailTokens.createdAt), desc(mailTokens.id));
 }
 
@@ -83,25 +84,25 @@ export async function findOpenInvitation(db: Database, id: number) {
   const [row] = await db
     .select()
     .from(mailTokens)
-    .where(and(eq(mailTokens.id, id), eq(mailTokens.purpose, 'invite'), isNull(mailTokens.usedAt)));
+    .where(inOwnShop(mailTokens, eq(mailTokens.id, id), eq(mailTokens.purpose, 'invite'), isNull(mailTokens.usedAt)));
   return row;
 }
 
 export async function deleteMailToken(db: Database, id: number): Promise<void> {
-  await db.delete(mailTokens).where(eq(mailTokens.id, id));
+  await db.delete(mailTokens).where(inOwnShop(mailTokens, eq(mailTokens.id, id)));
 }
 
 /** Withdraws the unused links of one purpose sent to an address: a new one replaces them. */
 export async function deleteOpenTokensFor(db: Database, purpose: MailTokenPurpose, email: string): Promise<void> {
-  await db.delete(mailTokens).where(and(eq(mailTokens.purpose, purpose), isNull(mailTokens.usedAt), sameAddress(mailTokens.email, email)));
+  await db.delete(mailTokens).where(inOwnShop(mailTokens, eq(mailTokens.purpose, purpose), isNull(mailTokens.usedAt), sameAddress(mailTokens.email, email)));
 }
 
 /** Withdraws a member's unused reset links (deactivated, or a reset just done). */
 export async function deleteOpenResetsOf(db: Database, userId: number): Promise<void> {
-  await db.delete(mailTokens).where(and(eq(mailTokens.purpose, 'password-reset'), isNull(mailTokens.usedAt), eq(mailTokens.userId, userId)));
+  await db.delete(mailTokens).where(inOwnShop(mailTokens, eq(mailTokens.purpose, 'password-reset'), isNull(mailTokens.usedAt), eq(mailTokens.userId, userId)));
 }
 
 /** Ties an accepted invitation to the member it made. */
 export async function linkInvitation(db: Database, tokenId: number, userId: number): Promise<void> {
-  await db.update(mailTokens).set({ userId }).where(eq(mailTokens.id, tokenId));
+  await db.update(mailTokens).set({ userId }).where(inOwnShop(mailTokens, eq(mailTokens.id, tokenId)));
 }

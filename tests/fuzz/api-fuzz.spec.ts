@@ -11,12 +11,13 @@ import { fitting } from '../../shared/catalog/fitting';
 import { jobDocument } from '../../shared/model/job-document';
 import { carcassPlanInput } from '../../shared/planner/carcass-plan-input';
 import { createApiRouter } from '../../server/api-router';
+import { inShop } from '../../server/db/shop-scope';
 import { jobAsDocument, listJobs } from '../../server/jobs/jobs.service';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
 import { firstBytes } from '../../server/testing/live-stream-reader';
 import { minimalPng } from '../../server/testing/sample-files';
-import { createTestApp, testConfig, type TestApp } from '../../server/testing/test-app';
+import { createTestApp, DEMO_SHOP_ID, testConfig, type TestApp } from '../../server/testing/test-app';
 import { arbitraryFor, hostile, pathParameter } from './schema-arbitrary';
 
 /**
@@ -90,11 +91,13 @@ describe('API fuzz', () => {
   const existing: Record<string, string[]> = {};
   let routes: { method: string; path: string }[] = [];
 
-  /** The fuzzed job's export and the list of jobs, read by the services themselves: what a refused write must leave as it was. */
-  async function snapshot(): Promise<string> {
+  /** The fuzzed job's export and the list of jobs, read by the services themselves as the demo shop: what a refused write must leave as it was. */
+  function snapshot(): Promise<string> {
     const db = t.database.db;
-    const doc = await jobAsDocument(db, jobId).catch((err: Error) => err.message);
-    return JSON.stringify([doc, await listJobs(db, false), await listJobs(db, true)]);
+    return inShop(DEMO_SHOP_ID, async () => {
+      const doc = await jobAsDocument(db, jobId).catch((err: Error) => err.message);
+      return JSON.stringify([doc, await listJobs(db, false), await listJobs(db, true)]);
+    });
   }
 
   beforeAll(async () => {

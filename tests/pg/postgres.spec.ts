@@ -1,13 +1,16 @@
 import { eq, sql } from 'drizzle-orm';
+import { drizzle } from 'drizzle-orm/node-postgres';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { PanelRecord } from '../../shared/api/contract';
 import { createApp } from '../../server/app';
-import { openDatabase, type DatabaseHandle } from '../../server/db/client';
+import { openDatabase, type Database, type DatabaseHandle } from '../../server/db/client';
+import * as schema from '../../server/db/schema';
 import { jobs, sessions, shops } from '../../server/db/schema';
 import { inShop } from '../../server/db/shop-scope';
 import { insertShop } from '../../server/shops/shops.repository';
 import { dumpTables, restoreTables } from '../../server/db/table-dump';
 import { seedDemoShop } from '../../server/demo/seed-demo';
+import { findJobStamp, listJobSummaries } from '../../server/jobs/jobs.repository';
 import { jobAsDocument, listJobs } from '../../server/jobs/jobs.service';
 import { createLogger } from '../../server/logger';
 import { ApiClient, signedIn } from '../../server/testing/api-client';
@@ -91,9 +94,12 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     await target.migrate();
     const backup = JSON.parse(JSON.stringify(await dumpTables(database.db, new Date())));
     await restoreTables(target.db, backup);
-    const jobs = await listJobs(database.db, false);
-    expect(await listJobs(target.db, false)).toEqual(jobs);
-    for (const { id } of jobs) expect(await jobAsDocument(target.db, id)).toEqual(await jobAsDocument(database.db, id));
+    // Read as each shop, as the app reads them.
+    for (const { id: shopId } of backup.tables.shops as { id: number }[]) {
+      const jobs = await inShop(shopId, () => listJobs(database.db, false));
+      expect(await inShop(shopId, () => listJobs(target.db, false))).toEqual(jobs);
+      for (const { id } of jobs) expect(await inShop(shopId, () => jobAsDocument(target.db, id))).toEqual(await inShop(shopId, () => jobAsDocument(database.db, id)));
+    }
     await target.close();
   });
 
@@ -143,6 +149,27 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     expect(await db.$count(jobs)).toBe(seen.length + 1);
   });
 
+  it("keeps each shop's rows to itself with the repositories' shop filter alone, on a connection the policies do not hold", async () => {
+    const { default: pg } = await import('pg');
+    const pool = new pg.Pool({ connectionString: url, max: 2 });
+    try {
+      // The connecting role with no role switch: the tables' owner, which row-level security does not hold.
+      const owner = drizzle({ client: pool, schema }) as unknown as Database;
+      const [{ id: demoShop }] = await owner.select({ id: shops.id }).from(shops).orderBy(shops.id).limit(1);
+      const otherShop = await insertShop(owner, 'Filtered Shop');
+      const [{ id: otherJob }] = await owner.insert(jobs).values({ shopId: otherShop, name: 'Filtered job', system: {} as never, limits: {} as never, materials: [] }).returning({ id: jobs.id });
+      expect(await owner.$count(jobs, eq(jobs.id, otherJob))).toBe(1);
+      const listed = await inShop(demoShop, () => listJobSummaries(owner, false));
+      expect(listed.length).toBeGreaterThan(0);
+      expect(listed.map((j) => j.id)).not.toContain(otherJob);
+      // The prepared stamp read, too, fills in the scope's shop.
+      expect(await inShop(demoShop, () => findJobStamp(owner, otherJob))).toBeUndefined();
+      expect(await inShop(otherShop, () => findJobStamp(owner, otherJob))).toMatchObject({ version: 1 });
+    } finally {
+      await pool.end();
+    }
+  });
+
   it('restores a backup made with PGlite, so a shop can move to a PostgreSQL server', async () => {
     const local = await openDatabase({ engine: 'pglite' });
     await local.migrate();
@@ -150,7 +177,10 @@ describe.skipIf(!url)('on PostgreSQL (DATABASE_URL)', () => {
     const backup = JSON.parse(JSON.stringify(await dumpTables(local.db, new Date())));
     await database.db.execute(sql`truncate shops, users, sessions, jobs, carcasses, panels, placements, bores, activity restart identity cascade`);
     await restoreTables(database.db, backup);
-    for (const { id } of await listJobs(local.db, false)) expect(await jobAsDocument(database.db, id)).toEqual(await jobAsDocument(local.db, id));
+    const [{ id: shopId }] = backup.tables.shops as { id: number }[];
+    for (const { id } of await inShop(shopId, () => listJobs(local.db, false))) {
+      expect(await inShop(shopId, () => jobAsDocument(database.db, id))).toEqual(await inShop(shopId, () => jobAsDocument(local.db, id)));
+    }
     await local.close();
-  });
+  }, 120_000);
 });

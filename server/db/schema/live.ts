@@ -1,5 +1,6 @@
 import { bigint, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
 import { jobs } from './jobs';
+import { shopIdColumn } from './shops';
 import { users } from './users';
 
 /**
@@ -11,6 +12,7 @@ export const jobEvents = pgTable(
   'job_events',
   {
     id: bigint('id', { mode: 'number' }).primaryKey().generatedByDefaultAsIdentity(),
+    shopId: shopIdColumn(),
     jobId: integer('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -18,7 +20,7 @@ export const jobEvents = pgTable(
     data: jsonb('data').$type<Record<string, unknown>>().notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('job_events_job_idx').on(t.jobId, t.id), index('job_events_at_idx').on(t.at)],
+  (t) => [index('job_events_job_idx').on(t.jobId, t.id), index('job_events_at_idx').on(t.at), index('job_events_shop_idx').on(t.shopId)],
 );
 
 /**
@@ -30,6 +32,7 @@ export const jobPresence = pgTable(
   'job_presence',
   {
     stream: text('stream').primaryKey(),
+    shopId: shopIdColumn(),
     jobId: integer('job_id')
       .notNull()
       .references(() => jobs.id, { onDelete: 'cascade' }),
@@ -40,13 +43,21 @@ export const jobPresence = pgTable(
     panelId: integer('panel_id'),
     seenAt: timestamp('seen_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('job_presence_job_idx').on(t.jobId)],
+  (t) => [index('job_presence_job_idx').on(t.jobId), index('job_presence_shop_idx').on(t.shopId)],
 );
 
-/** How far each pack being made has got, by its download's ticket, so any server can answer a poll. */
-export const packProgress = pgTable('pack_progress', {
-  ticket: text('ticket').primaryKey(),
-  panel: integer('panel').notNull(),
-  panels: integer('panels').notNull(),
-  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
-});
+/**
+ * How far each pack being made has got, by its download's ticket, so any server can answer a poll. The
+ * ticket names no job, so a row's shop is the shop that started the pack (the scope's, by default).
+ */
+export const packProgress = pgTable(
+  'pack_progress',
+  {
+    ticket: text('ticket').primaryKey(),
+    shopId: shopIdColumn(),
+    panel: integer('panel').notNull(),
+    panels: integer('panels').notNull(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('pack_progress_shop_idx').on(t.shopId)],
+);
