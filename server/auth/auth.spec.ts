@@ -3,6 +3,7 @@ import { sessions } from '../db/schema';
 import { ApiClient, signedIn } from '../testing/api-client';
 import { createTestApp, type TestApp } from '../testing/test-app';
 import { SESSION_COOKIE } from './sessions';
+import { SEEN_STEP_MS } from './session-timeouts';
 
 describe('sign-in and sessions', () => {
   let t: TestApp;
@@ -121,6 +122,19 @@ describe('session timeouts', () => {
     expect((await client.get('/api/jobs')).status).toBe(200);
     t.advance(idleMs + 1000);
     expect((await client.get('/api/jobs')).status).toBe(401);
+  });
+
+  it('sends the session cookie again when a minute of use has changed the session, and not with every answer', async () => {
+    const client = await signedIn(t.app, 'viewer@greyfield.example');
+    const sessionCookie = (res: { headers: Record<string, unknown> }) =>
+      ([] as string[]).concat((res.headers['set-cookie'] as string[] | undefined) ?? []).find((c) => c.startsWith(`${SESSION_COOKIE}=`));
+    const soon = await client.get('/api/jobs').expect(200);
+    expect(sessionCookie(soon)).toBeUndefined();
+    t.advance(SEEN_STEP_MS);
+    const later = await client.get('/api/jobs').expect(200);
+    // It lapses one idle timeout after this answer (Expires is to the second).
+    const expires = Date.parse(/Expires=([^;]+)/.exec(sessionCookie(later) ?? '')?.[1] ?? '');
+    expect(Math.abs(expires - (Date.now() + idleMs))).toBeLessThan(5_000);
   });
 
   it('ends a busy session once the absolute timeout has passed since sign-in', async () => {

@@ -13,8 +13,10 @@ export function sessionMiddleware(db: Database, options: { secret: string; secur
     store: new DrizzleSessionStore(db),
     resave: false,
     saveUninitialized: false,
-    // Every answer renews the cookie: it lapses after idleMs without requests.
-    rolling: true,
+    // The cookie is sent again whenever the session changes, which a signed-in one does at least once a
+    // minute of use (its last request, session-timeouts.ts): so it lapses after idleMs without requests, as
+    // the session does, and an answer in between carries no cookie to sign.
+    rolling: false,
     cookie: { httpOnly: true, sameSite: 'lax', secure: options.secure, maxAge: options.idleMs, path: '/' },
   });
 }

@@ -1,7 +1,7 @@
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { PGlite, types } from '@electric-sql/pglite';
+import { PGlite, types, type Transaction } from '@electric-sql/pglite';
 import { drizzle as drizzlePglite } from 'drizzle-orm/pglite';
 import { migrate as migratePglite } from 'drizzle-orm/pglite/migrator';
 import type { PgDatabase, PgQueryResultHKT } from 'drizzle-orm/pg-core';
@@ -9,7 +9,7 @@ import { jobEventsOver, type JobEvents } from '../live/job-events';
 import { JOB_EVENTS_CHANNEL } from '../live/job-events.repository';
 import { postgresListen } from '../live/postgres-listen';
 import { migrationsApplied, readJournal } from './migrations-applied';
-import { SCOPE_RESET, scopeStatements } from './shop-scope';
+import { SCOPE_RESET, scopeStatements, scopeSwitch } from './shop-scope';
 import * as schema from './schema';
 
 /**
@@ -82,32 +82,38 @@ export function databaseTarget(config: { databaseUrl?: string; dataDir: string }
 }
 
 /**
- * PGlite is one connection: a query in a shop's scope (shop-scope.ts) runs in a transaction of its own
- * that first takes the app's role and the shop's setting, and a transaction takes them as it opens.
- * PGlite holds other queries back while a transaction runs, so no other scope's query slips in.
+ * PGlite is one connection, so its role and shop setting are the connection's own (set for the session,
+ * not per transaction) and are changed only when a query or transaction of another scope (shop-scope.ts)
+ * comes: a request's queries then cost no transaction and no setting statements of their own, which had
+ * tripled the cost of a small query. Queries and transactions go one at a time through `queue`, so that
+ * nothing of another scope runs between a change of scope and the work it was made for; PGlite itself runs
+ * them one at a time anyway. A transaction's work runs with the scope it was opened in.
  */
 function shopScopedPglite(client: PGlite): PGlite {
+  /** The statements that put the connection in the scope it is in; undefined when not known (at first, or after a failed change). */
+  let connectionScope: string | undefined;
+  let queue: Promise<unknown> = Promise.resolve();
+  const inScope = <T>(work: () => Promise<T>): Promise<T> => {
+    // Read now, in the caller's scope: the queue runs the work later, from another's.
+    const wanted = scopeSwitch();
+    const run = queue.then(async () => {
+      if (connectionScope !== wanted) {
+        connectionScope = undefined;
+        await client.exec(wanted);
+        connectionScope = wanted;
+      }
+      return work();
+    });
+    queue = run.catch(() => undefined);
+    return run;
+  };
   return new Proxy(client, {
     get(target, property) {
       if (property === 'query') {
-        return (...args: Parameters<PGlite['query']>) => {
-          const scope = scopeStatements('transaction');
-          if (!scope) return target.query(...args);
-          const [text, params, options] = args;
-          return target.transaction(async (tx) => {
-            await tx.exec(scope);
-            return tx.query(text, params, parsersDropped(options));
-          });
-        };
+        return (...[text, params, options]: Parameters<PGlite['query']>) => inScope(() => target.query(text, params, parsersDropped(options)));
       }
       if (property === 'transaction') {
-        return <T>(work: Parameters<PGlite['transaction']>[0]) => {
-          const scope = scopeStatements('transaction');
-          return target.transaction(async (tx) => {
-            if (scope) await tx.exec(scope);
-            return work(tx) as T;
-          });
-        };
+        return <T>(work: (tx: Transaction) => Promise<T>) => inScope(() => target.transaction(work));
       }
       const value: unknown = Reflect.get(target, property, target);
       return typeof value === 'function' ? value.bind(target) : value;
@@ -130,7 +136,7 @@ function shopScopedPool(pg: typeof import('pg').default, config: import('pg').Po
 
     private async scopedConnect(): Promise<import('pg').PoolClient> {
       const connection = await super.connect();
-      const scope = scopeStatements('session');
+      const scope = scopeStatements();
       if (!scope) return connection;
       try {
         await connection.query(scope);
@@ -149,7 +155,7 @@ function shopScopedPool(pg: typeof import('pg').default, config: import('pg').Po
 
     // @ts-expect-error pg's overloads: drizzle calls query(config, values) and awaits it.
     override query(...args: Parameters<import('pg').Pool['query']>) {
-      if (!scopeStatements('session') || typeof args[args.length - 1] === 'function') return (super.query as (...a: unknown[]) => unknown)(...args);
+      if (!scopeStatements() || typeof args[args.length - 1] === 'function') return (super.query as (...a: unknown[]) => unknown)(...args);
       return (async () => {
         const connection = await this.scopedConnect();
         try {

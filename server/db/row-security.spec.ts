@@ -71,4 +71,28 @@ describe('row-level security on PGlite', () => {
     expect(seen).toEqual([{ id: second.shopId }]);
     await expect(inShop(second.shopId, () => rows(sql`update shops set status = 'active'`))).rejects.toMatchObject({ cause: { message: expect.stringMatching(/permission denied/) } });
   });
+
+  it('runs each of many queries and transactions started at once, in different scopes, in its own scope', async () => {
+    const db = t.database.db;
+    const who = sql`select current_user as role, nullif(current_setting('borewright.shop_id', true), '') as shop, (select count(*)::int from jobs) as jobs`;
+    const [{ n: demoJobs }] = await rows(sql`select count(*)::int as n from jobs where shop_id = ${DEMO_SHOP_ID}`);
+    const [{ n: secondJobs }] = await rows(sql`select count(*)::int as n from jobs where shop_id = ${second.shopId}`);
+    const [{ n: allJobs }] = await rows(sql`select count(*)::int as n from jobs`);
+    const expected = {
+      demo: { role: 'borewright_app', shop: String(DEMO_SHOP_ID), jobs: demoJobs },
+      second: { role: 'borewright_app', shop: String(second.shopId), jobs: secondJobs },
+      none: { role: 'borewright_app', shop: null, jobs: 0 },
+      owner: { role: 'postgres', shop: null, jobs: allJobs },
+    };
+    const asked = Array.from({ length: 24 }, (_, i) => {
+      const scope = (['demo', 'second', 'none', 'owner'] as const)[i % 4];
+      const inTransaction = i % 3 === 0;
+      const first = (result: unknown) => (result as { rows: Record<string, unknown>[] }).rows[0];
+      const read = () => (inTransaction ? db.transaction(async (tx) => first(await tx.execute(who))) : db.execute(who).then(first));
+      const answer =
+        scope === 'owner' ? read() : inShop(scope === 'demo' ? DEMO_SHOP_ID : scope === 'second' ? second.shopId : null, read);
+      return answer.then((row) => ({ i, row, want: expected[scope] }));
+    });
+    for (const { i, row, want } of await Promise.all(asked)) expect({ i, ...row }).toEqual({ i, ...want });
+  });
 });

@@ -3,9 +3,9 @@ import { AsyncLocalStorage } from 'node:async_hooks';
 /**
  * Whose rows a piece of work may see. Every query the app makes runs in one of these, carried by
  * AsyncLocalStorage from where the work started (the request, once its session is read) down to the
- * driver (client.ts), which opens each query's transaction with the scope's statements:
+ * driver (client.ts), which puts the connection a query or transaction runs on in the scope first:
  *
- * - a shop: the app's role `borewright_app` (row-level security applies to it) and the transaction's
+ * - a shop: the app's role `borewright_app` (row-level security applies to it) and the connection's
  *   `borewright.shop_id`; every policy compares `shop_id` with that setting, and every shop-owned
  *   column defaults to it, so no repository names the shop and none can be handed one from a request;
  * - `null`, a request nobody is signed in to: the app's role without a shop, which sees no shop's rows;
@@ -62,16 +62,15 @@ export function requireShop(): number {
 }
 
 /**
- * The statements that put a connection in the current scope, or undefined when it runs as the
- * connecting role. For a `transaction` they end with it; for a `session` (a pooled PostgreSQL
- * connection checked out for one piece of work) `SCOPE_RESET` ends them before it goes back.
+ * The statements that put a connection in the current scope for the rest of its session, or undefined
+ * when it runs as the connecting role. A pooled PostgreSQL connection checked out for one piece of work
+ * is given them, and `SCOPE_RESET` ends them before it goes back.
  */
-export function scopeStatements(lasting: 'transaction' | 'session'): string | undefined {
+export function scopeStatements(): string | undefined {
   const shopId = currentShop();
   if (shopId === undefined) return undefined;
-  const local = lasting === 'transaction';
-  const role = `set ${local ? 'local ' : ''}role ${APP_ROLE}`;
-  return shopId === null ? role : `${role}; select set_config('borewright.shop_id', '${shopId}', ${local})`;
+  const role = `set role ${APP_ROLE}`;
+  return shopId === null ? role : `${role}; select set_config('borewright.shop_id', '${shopId}', false)`;
 }
 
 /**
@@ -85,3 +84,12 @@ export function enterShopStatements(shopId: number): string[] {
 
 /** Puts a pooled connection back as the connecting role with no shop. */
 export const SCOPE_RESET = 'reset role; reset borewright.shop_id';
+
+/**
+ * The statements that move a connection kept from one piece of work to the next (PGlite's one connection)
+ * from whatever scope it is in to the current one, for the rest of its session.
+ */
+export function scopeSwitch(): string {
+  const statements = scopeStatements();
+  return statements ? `${SCOPE_RESET}; ${statements}` : SCOPE_RESET;
+}

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import express, { Router } from 'express';
-import { CSP_NONCE_PLACEHOLDER } from './security-headers';
+import { CSP_NONCE_PLACEHOLDER, pageStyleNonce } from './security-headers';
 
 /**
  * Serves the built Angular app: its files as they are, and index.html for every other GET so the
@@ -23,7 +23,7 @@ export function clientApp(dir: string): Router {
         .send(`The web app is not built (no ${index}). Run "npm run build", or "npm start", which builds first.`);
       return;
     }
-    res.set('Cache-Control', 'no-cache').type('html').send(html.replaceAll(CSP_NONCE_PLACEHOLDER, res.locals.cspNonce as string));
+    res.set('Cache-Control', 'no-cache').type('html').send(html.replaceAll(CSP_NONCE_PLACEHOLDER, pageStyleNonce(res)));
   };
   // index.html asked for by name gets its nonce too.
   router.get('/index.html', page);

@@ -2,9 +2,13 @@ import express from 'express';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { testConfig } from '../testing/test-app';
-import { securityHeaders } from './security-headers';
+import { pageStyleNonce, securityHeaders } from './security-headers';
 
-const appFor = (env: 'development' | 'production' | 'test') => express().use(securityHeaders(testConfig({ env }))).get('/', (_req, res) => res.send('ok'));
+const appFor = (env: 'development' | 'production' | 'test') =>
+  express()
+    .use(securityHeaders(testConfig({ env })))
+    .get('/', (_req, res) => res.send('ok'))
+    .get('/page', (_req, res) => res.type('html').send(`<p nonce="${pageStyleNonce(res)}">`));
 
 /** The policy as a map of directive to its sources. */
 function directives(header: string): Map<string, string[]> {
@@ -21,8 +25,18 @@ describe('security headers', () => {
     expect(policy.get('default-src')).toEqual(["'self'"]);
     expect(policy.get('object-src')).toEqual(["'none'"]);
     expect(policy.get('frame-ancestors')).toEqual(["'none'"]);
-    expect(policy.get('style-src')).toEqual(["'self'", expect.stringMatching(/^'nonce-[A-Za-z0-9+/]{22}==?'$/)]);
+    expect(policy.get('style-src')).toEqual(["'self'"]);
     expect(res.headers['content-security-policy']).not.toMatch(/unsafe-inline|unsafe-eval/);
+  });
+
+  it("allow a page's inline styles by the page's own nonce only, with the rest of the policy unchanged", async () => {
+    const plain = directives((await request(appFor('development')).get('/').expect(200)).headers['content-security-policy']);
+    const res = await request(appFor('development')).get('/page').expect(200);
+    const policy = directives(res.headers['content-security-policy']);
+    const nonce = /nonce="([^"]+)"/.exec(res.text)![1];
+    expect(policy.get('style-src')).toEqual(["'self'", `'nonce-${nonce}'`]);
+    expect(nonce).toMatch(/^[A-Za-z0-9+/]{22}==?$/);
+    expect(new Map([...policy].filter(([name]) => name !== 'style-src'))).toEqual(new Map([...plain].filter(([name]) => name !== 'style-src')));
   });
 
   // CSP Level 3: worker-src governs service worker scripts, manifest-src the web app manifest (published).
