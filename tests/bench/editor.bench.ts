@@ -10,10 +10,12 @@
  */
 import type { CDPSession, Page } from 'playwright-core';
 import type { TestProject } from 'vitest/node';
+import { writeFileSync } from 'node:fs';
 import { makeJob, makePanel } from '../../shared/testing/make-job';
 import { fitView, toScreen } from '../../src/app/editor/stage/view';
 import { openBrowser, screenshot, signIn } from '../e2e/browser';
 import startServer from '../e2e/global-setup';
+import { profileSummary, traceSummary, type CpuProfile, type TraceEvent } from './cpu-profile';
 
 const PLATE = { x: 837, y: 521 };
 /** Three and a quarter strokes of the triangle wave below, so that the drag ends away from where it began. */
@@ -78,27 +80,20 @@ async function threadSeconds(cdp: CDPSession): Promise<{ task: number; cpu: numb
   return { task: metric('TaskDuration'), cpu: metric('ThreadTime'), script: metric('ScriptDuration'), style: metric('RecalcStyleDuration') + metric('LayoutDuration') };
 }
 
-interface ProfileNode {
-  id: number;
-  callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
-}
-
-/** The functions a CPU profile spent most of its samples in (self time), with their share. */
-function topFunctions(profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] }, count: number): string[] {
-  const byNode = new Map(profile.nodes.map((n) => [n.id, n.callFrame]));
-  const self = new Map<string, number>();
-  profile.samples.forEach((id, i) => {
-    const frame = byNode.get(id)!;
-    const file = frame.url.split('/').pop() ?? '';
-    const key = `${frame.functionName || '(anonymous)'} ${file}${file ? `:${frame.lineNumber + 1}:${frame.columnNumber + 1}` : ''}`;
-    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0));
-  });
-  const busy = [...self].filter(([key]) => !key.startsWith('(idle)') && !key.startsWith('(program)'));
-  const total = busy.reduce((sum, [, t]) => sum + t, 0);
-  return busy
-    .sort((a, b) => b[1] - a[1])
-    .slice(0, count)
-    .map(([key, t]) => `${((100 * t) / total).toFixed(1).padStart(5)} %  ${(t / 1000).toFixed(0).padStart(5)} ms  ${key}`);
+/** Chromium's trace of the main thread from now until `stop`. */
+function startTrace(cdp: CDPSession): { stop(): Promise<TraceEvent[]> } {
+  const events: TraceEvent[] = [];
+  cdp.on('Tracing.dataCollected', ({ value }) => events.push(...(value as TraceEvent[])));
+  const started = cdp.send('Tracing.start', { categories: 'devtools.timeline,disabled-by-default-devtools.timeline,v8.execute,blink,cc', transferMode: 'ReportEvents' });
+  return {
+    stop: async () => {
+      await started;
+      const done = new Promise((resolve) => cdp.once('Tracing.tracingComplete', resolve));
+      await cdp.send('Tracing.end');
+      await done;
+      return events;
+    },
+  };
 }
 
 /**
@@ -147,6 +142,7 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
     await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
     await cdp.send('Profiler.start');
   }
+  const trace = profile && process.env['BENCH_TRACE'] ? startTrace(cdp) : undefined;
   const before = await threadSeconds(cdp);
   await page.mouse.move(start.x, start.y);
   await page.mouse.down();
@@ -160,10 +156,12 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
   const frames = (await page.evaluate('(window.benchRun = false, window.benchFrames.slice(2))')) as number[];
   const after = await threadSeconds(cdp);
   const perMove = (key: keyof typeof after) => ((after[key] - before[key]) * 1000) / MOVES;
+  if (trace) for (const line of traceSummary(await trace.stop(), MOVES)) console.log(`    ${line}`);
   if (profile) {
-    const { profile: cpu } = (await cdp.send('Profiler.stop')) as { profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] } };
+    const { profile: cpu } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+    if (process.env['BENCH_PROFILE_OUT']) writeFileSync(`${process.env['BENCH_PROFILE_OUT']}-${bench.columns * bench.rows}.cpuprofile`, JSON.stringify(cpu));
     console.log(`  where a drag's main-thread time went (self time, ${bench.label}, checks on):`);
-    for (const line of topFunctions(cpu, 15)) console.log(`    ${line}`);
+    for (const line of profileSummary(cpu, MOVES)) console.log(`    ${line}`);
   }
   await cdp.detach();
   // The list shows the drop once the page has caught up with the moves (later on a busy machine than the release).
@@ -199,11 +197,13 @@ async function benchPanel(page: Page, baseUrl: string, bench: BenchPanel): Promi
   // Taken in turns, so that a busy moment of the machine falls on both.
   const withChecks: DragRun[] = [];
   const baseline: DragRun[] = [];
-  for (let round = 0; round < 2; round++) {
+  const rounds = Number(process.env['BENCH_ROUNDS'] ?? 2);
+  if (rounds === 0) return;
+  for (let round = 0; round < rounds; round++) {
     withChecks.push(await dragFrames(page, url, bench));
     baseline.push(await dragFrames(page, `${url}?checks=off`, bench));
   }
-  console.log(`Panel editor, ${bench.label}, 2 × ${MOVES} pointer moves while dragging a mounting plate (headless Chromium)`);
+  console.log(`Panel editor, ${bench.label}, ${rounds} × ${MOVES} pointer moves while dragging a mounting plate (headless Chromium)`);
   console.log(summary('live checks on', withChecks));
   console.log(summary('baseline: checks off', baseline));
   const p95 = percentile(withChecks.flatMap((r) => r.frames).sort((a, b) => a - b), 95);
@@ -217,7 +217,8 @@ async function main(): Promise<void> {
   try {
     const { page } = browser;
     await signIn(page, baseUrl, 'designer@greyfield.example');
-    for (const bench of PANELS) await benchPanel(page, baseUrl, bench);
+    const only = process.env['BENCH_ONLY'];
+    for (const bench of PANELS.filter((p) => !only || String(p.columns * p.rows) === only)) await benchPanel(page, baseUrl, bench);
   } finally {
     await browser.close();
     stop?.();
