@@ -31,7 +31,7 @@ function placeOf(frame: CpuProfile['nodes'][number]['callFrame']): { file: strin
   const entry = sourceMapOf(frame.url)?.findEntry(frame.lineNumber, frame.columnNumber);
   if (!entry || !('originalSource' in entry)) return { file: bundle, fn: `${fn} ${bundle}:${frame.lineNumber + 1}:${frame.columnNumber + 1}` };
   const file = entry.originalSource.replace(/^.*node_modules\//, '').replace(/^.*?\/(src|shared)\//, '$1/');
-  return { file, fn: `${entry.name ?? fn} ${file}:${entry.originalLine + 1}` };
+  return { file, fn: `${(entry as { name?: string }).name ?? fn} ${file}:${entry.originalLine + 1}` };
 }
 
 /** What a sample's self time is put down to: the library or the app's folder it ran in. */
