@@ -10,14 +10,22 @@
  */
 import type { CDPSession, Page } from 'playwright-core';
 import type { TestProject } from 'vitest/node';
+import { writeFileSync } from 'node:fs';
+import { availableParallelism, loadavg } from 'node:os';
 import { makeJob, makePanel } from '../../shared/testing/make-job';
 import { fitView, toScreen } from '../../src/app/editor/stage/view';
 import { openBrowser, screenshot, signIn } from '../e2e/browser';
 import startServer from '../e2e/global-setup';
+import { profileSummary, traceSummary, type CpuProfile, type TraceEvent } from './cpu-profile';
 
 const PLATE = { x: 837, y: 521 };
 /** Three and a quarter strokes of the triangle wave below, so that the drag ends away from where it began. */
 const MOVES = 260;
+/** The goals: main-thread work a pointer move on the 500-bore panel, and the p95 frame while dragging (one 60 Hz refresh). */
+const WORK_GOAL_MS = 4;
+const FRAME_GOAL_MS = 16.7;
+/** How finely the page's clock reads: a page that is not cross-origin isolated gets performance.now in steps of 0.1 ms. */
+const CLOCK_TICK_MS = 0.1;
 
 /** A panel to drag on: its size and its holes in columns and rows, all clear of the mounting plate. */
 interface BenchPanel {
@@ -78,27 +86,20 @@ async function threadSeconds(cdp: CDPSession): Promise<{ task: number; cpu: numb
   return { task: metric('TaskDuration'), cpu: metric('ThreadTime'), script: metric('ScriptDuration'), style: metric('RecalcStyleDuration') + metric('LayoutDuration') };
 }
 
-interface ProfileNode {
-  id: number;
-  callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
-}
-
-/** The functions a CPU profile spent most of its samples in (self time), with their share. */
-function topFunctions(profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] }, count: number): string[] {
-  const byNode = new Map(profile.nodes.map((n) => [n.id, n.callFrame]));
-  const self = new Map<string, number>();
-  profile.samples.forEach((id, i) => {
-    const frame = byNode.get(id)!;
-    const file = frame.url.split('/').pop() ?? '';
-    const key = `${frame.functionName || '(anonymous)'} ${file}${file ? `:${frame.lineNumber + 1}:${frame.columnNumber + 1}` : ''}`;
-    self.set(key, (self.get(key) ?? 0) + (profile.timeDeltas[i] ?? 0));
-  });
-  const busy = [...self].filter(([key]) => !key.startsWith('(idle)') && !key.startsWith('(program)'));
-  const total = busy.reduce((sum, [, t]) => sum + t, 0);
-  return busy
-    .sort((a, b) => b[1] - a[1])
-    .slice(0, count)
-    .map(([key, t]) => `${((100 * t) / total).toFixed(1).padStart(5)} %  ${(t / 1000).toFixed(0).padStart(5)} ms  ${key}`);
+/** Chromium's trace of the main thread from now until `stop`. */
+function startTrace(cdp: CDPSession): { stop(): Promise<TraceEvent[]> } {
+  const events: TraceEvent[] = [];
+  cdp.on('Tracing.dataCollected', ({ value }) => events.push(...(value as unknown as TraceEvent[])));
+  const started = cdp.send('Tracing.start', { categories: 'devtools.timeline,disabled-by-default-devtools.timeline,v8.execute,blink,cc', transferMode: 'ReportEvents' });
+  return {
+    stop: async () => {
+      await started;
+      const done = new Promise((resolve) => cdp.once('Tracing.tracingComplete', resolve));
+      await cdp.send('Tracing.end');
+      await done;
+      return events;
+    },
+  };
 }
 
 /**
@@ -121,7 +122,7 @@ async function pickPlate(page: Page, bench: BenchPanel): Promise<{ start: { x: n
 }
 
 /** Drags the plate up and down the row, MOVES pointer moves, and returns the frame intervals seen meanwhile. */
-async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = false): Promise<DragRun> {
+async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = false, press = true): Promise<DragRun> {
   await page.goto(url);
   await page.locator('bw-panel-stage canvas').first().waitFor();
   await page.locator('bw-placement-list').waitFor({ state: 'attached' });
@@ -147,25 +148,30 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
     await cdp.send('Profiler.setSamplingInterval', { interval: 200 });
     await cdp.send('Profiler.start');
   }
+  const trace = profile && process.env['BENCH_TRACE'] ? startTrace(cdp) : undefined;
   const before = await threadSeconds(cdp);
   await page.mouse.move(start.x, start.y);
-  await page.mouse.down();
+  if (press) await page.mouse.down();
   for (let i = 1; i <= MOVES; i++) {
     // A triangle wave over about 300 mm, so the plate keeps snapping from hole to hole.
     const phase = (i % 80) / 40;
     const dy = (phase <= 1 ? phase : 2 - phase) * 300 * view.scale;
     await page.mouse.move(start.x, start.y - dy);
   }
-  await page.mouse.up();
+  if (press) await page.mouse.up();
   const frames = (await page.evaluate('(window.benchRun = false, window.benchFrames.slice(2))')) as number[];
   const after = await threadSeconds(cdp);
   const perMove = (key: keyof typeof after) => ((after[key] - before[key]) * 1000) / MOVES;
+  if (trace) for (const line of traceSummary(await trace.stop(), MOVES)) console.log(`    ${line}`);
   if (profile) {
-    const { profile: cpu } = (await cdp.send('Profiler.stop')) as { profile: { nodes: ProfileNode[]; samples: number[]; timeDeltas: number[] } };
+    const { profile: cpu } = (await cdp.send('Profiler.stop')) as { profile: CpuProfile };
+    if (process.env['BENCH_PROFILE_OUT']) writeFileSync(`${process.env['BENCH_PROFILE_OUT']}-${bench.columns * bench.rows}.cpuprofile`, JSON.stringify(cpu));
     console.log(`  where a drag's main-thread time went (self time, ${bench.label}, checks on):`);
-    for (const line of topFunctions(cpu, 15)) console.log(`    ${line}`);
+    for (const line of profileSummary(cpu, MOVES)) console.log(`    ${line}`);
   }
   await cdp.detach();
+  const run = { frames, taskPerMove: perMove('task'), cpuPerMove: perMove('cpu'), scriptPerMove: perMove('script'), stylePerMove: perMove('style') };
+  if (!press) return run;
   // The list shows the drop once the page has caught up with the moves (later on a busy machine than the release).
   const plate = page.locator('bw-placement-list .placement').first();
   await plate.filter({ hasNotText: `y ${PLATE.y},` }).waitFor({ state: 'attached', timeout: 60_000 }).catch(async () => {
@@ -177,7 +183,7 @@ async function dragFrames(page: Page, url: string, bench: BenchPanel, profile = 
   // On a busy machine autosave may have stored the moved plate before the undo: wait until the undo is
   // stored too, so that the next run finds the plate where it began.
   await page.getByText('All changes saved').waitFor({ timeout: 60_000 });
-  return { frames, taskPerMove: perMove('task'), cpuPerMove: perMove('cpu'), scriptPerMove: perMove('script'), stylePerMove: perMove('style') };
+  return run;
 }
 
 function summary(label: string, runs: DragRun[]): string {
@@ -196,18 +202,39 @@ async function benchPanel(page: Page, baseUrl: string, bench: BenchPanel): Promi
   // A warm-up run first, so that neither measured run pays for loading and compiling.
   await dragFrames(page, `${url}?checks=off`, bench);
   if (process.env['BENCH_PROFILE']) await dragFrames(page, url, bench, true);
-  // Taken in turns, so that a busy moment of the machine falls on both.
+  const rounds = Number(process.env['BENCH_ROUNDS'] ?? 2);
+  if (rounds === 0) return;
+  // Taken in turns, so that a busy moment of the machine falls on each.
   const withChecks: DragRun[] = [];
   const baseline: DragRun[] = [];
-  for (let round = 0; round < 2; round++) {
+  const hover: DragRun[] = [];
+  for (let round = 0; round < rounds; round++) {
     withChecks.push(await dragFrames(page, url, bench));
     baseline.push(await dragFrames(page, `${url}?checks=off`, bench));
+    hover.push(await dragFrames(page, url, bench, false, false));
   }
-  console.log(`Panel editor, ${bench.label}, 2 × ${MOVES} pointer moves while dragging a mounting plate (headless Chromium)`);
+  const [load] = loadavg();
+  console.log(`Panel editor, ${bench.label}, ${rounds} × ${MOVES} pointer moves while dragging a mounting plate (headless Chromium; load average ${load.toFixed(2)} on ${availableParallelism()} cores)`);
   console.log(summary('live checks on', withChecks));
   console.log(summary('baseline: checks off', baseline));
-  const p95 = percentile(withChecks.flatMap((r) => r.frames).sort((a, b) => a - b), 95);
-  console.log(`p95 with checks ${p95 <= 16.7 ? 'meets' : 'misses'} the 16.7 ms aim.`);
+  // What a pointer move costs the page without a drag (the cursor readout only): the browser's own share of a move.
+  console.log(summary('floor: moves, no press', hover));
+  const work = (runs: DragRun[]) => runs.reduce((sum, r) => sum + r.taskPerMove, 0) / runs.length;
+  const [on, off, floor] = [work(withChecks), work(baseline), work(hover)];
+  console.log(
+    `main-thread work a move: ${on.toFixed(1)} ms with checks, ${off.toFixed(1)} ms without (${(on / off).toFixed(2)}×), ${floor.toFixed(1)} ms for a move with no drag; ` +
+      `${on <= WORK_GOAL_MS ? 'at' : 'over'} the ${WORK_GOAL_MS} ms goal; the drag itself ${(on - floor).toFixed(1)} ms above the floor.`,
+  );
+  // The page's clock ticks in 0.1 ms (performance.now in a page that is not cross-origin isolated), so a
+  // frame of one 60 Hz refresh (16.67 ms) reads 16.6 to 16.8 ms: the goal is met within that tick.
+  const frames = withChecks.flatMap((r) => r.frames).sort((a, b) => a - b);
+  const p95 = percentile(frames, 95);
+  // (and a thousandth for the difference of two clock readings in floating point, 16.8000000001)
+  const limit = FRAME_GOAL_MS + CLOCK_TICK_MS + 0.001;
+  const late = frames.filter((f) => f > limit).length;
+  console.log(
+    `p95 frame with checks ${p95.toFixed(1)} ms: ${p95 <= limit ? 'at' : 'over'} the ${FRAME_GOAL_MS} ms goal (to the clock's ${CLOCK_TICK_MS} ms); ${late} of ${frames.length} frames longer than a refresh.`,
+  );
 }
 
 async function main(): Promise<void> {
@@ -217,7 +244,8 @@ async function main(): Promise<void> {
   try {
     const { page } = browser;
     await signIn(page, baseUrl, 'designer@greyfield.example');
-    for (const bench of PANELS) await benchPanel(page, baseUrl, bench);
+    const only = process.env['BENCH_ONLY'];
+    for (const bench of PANELS.filter((p) => !only || String(p.columns * p.rows) === only)) await benchPanel(page, baseUrl, bench);
   } finally {
     await browser.close();
     stop?.();

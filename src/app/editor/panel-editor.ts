@@ -37,6 +37,7 @@ import { PlacementList } from './side/placement-list';
 import { PropertiesForm } from './side/properties-form';
 import { ShortcutList } from './side/shortcut-list';
 import { PanelStage } from './stage/panel-stage';
+import { PointerReadout } from './stage/pointer-readout';
 import type { LeavesSafely } from './unsaved-changes-guard';
 
 const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', saving: 'Saving…', stale: 'Changed elsewhere', failed: 'Not saved' } as const;
@@ -59,6 +60,7 @@ const SAVE_WORDS = { saved: 'All changes saved', unsaved: 'Unsaved changes', sav
     PanelDownloads,
     PanelStage,
     PlacementList,
+    PointerReadout,
     PresentMembers,
     PropertiesForm,
     RouterLink,
@@ -83,16 +85,25 @@ export class PanelEditor implements LeavesSafely {
   protected readonly saveWords = SAVE_WORDS;
   /** The Step menu in the member's units: round mm, or the marks of an inch rule (the system rows stay metric). */
   protected readonly steps = computed(() => stepChoices(this.lengths.unit()).map((mm) => ({ mm, label: this.lengths.text(mm) })));
-  protected readonly readout = computed(() => {
-    const at = this.stage()?.cursor();
-    return at ? `x ${this.lengths.text(at.x)}  y ${this.lengths.text(at.y)}` : '';
-  });
   /** The job's pitch, the system's own figure: `, 32 mm (1 17/64")` for an inch user. */
   protected readonly pitchText = computed(() => {
     const pitch = this.store.job()?.system?.pitch;
     return pitch === undefined ? '' : `, ${this.lengths.system(pitch)}`;
   });
-  protected readonly frame = computed(() => panelFrame(this.store.panel()?.role ?? 'loose'));
+  /**
+   * What the page around the stage shows of the panel. A drag changes the panel on every snap but none of
+   * this, so the page's own template is not checked again for it (only the stage, the properties and the
+   * placements are).
+   */
+  protected readonly shown = computed(
+    () => {
+      const panel = this.store.panel();
+      return panel && { name: panel.name, width: panel.width, height: panel.height, thickness: panel.thickness, placements: panel.placements.length };
+    },
+    { equal: (a, b) => a === b || (!!a && !!b && a.name === b.name && a.width === b.width && a.height === b.height && a.thickness === b.thickness && a.placements === b.placements) },
+  );
+  protected readonly frame = computed(() => panelFrame(this.store.panel()?.role ?? 'loose'), { equal: (a, b) => a.words === b.words });
+  protected readonly canRepeat = computed(() => this.store.selectedPlacements().length > 0);
   /** The cautions of this panel's unit (a flap's, its sides'), for every role. */
   protected readonly cautions = computed(
     () => {
@@ -136,11 +147,13 @@ export class PanelEditor implements LeavesSafely {
   private showFocusOnOpen(): void {
     let shown = false;
     effect(() => {
+      // Once shown, this reads no signal and so never runs again (not on every move of a drag).
+      if (shown) return;
       const { bores, placements } = this.source.focus();
       const panel = this.store.panel();
       const layout = this.store.layout();
       const stage = this.stage();
-      if (shown || !panel || !layout || !stage || bores.length + placements.length === 0) return;
+      if (!panel || !layout || !stage || bores.length + placements.length === 0) return;
       shown = true;
       const loose = new Set(panel.bores.map((b) => b.id));
       this.store.select(selectionOf(placements.filter((id) => panel.placements.some((p) => p.id === id)), bores.filter((id) => loose.has(id))));

@@ -24,8 +24,10 @@ function union(boxes: Box[]): Box {
  */
 export function hitItems(panel: Panel, layout: PanelLayout, only?: { placements: ReadonlySet<string>; bores: ReadonlySet<string> }): Hit[] {
   const items: Hit[] = [];
-  for (const bore of layout.bores)
-    if (!bore.placement && (!only || only.bores.has(bore.id))) items.push({ kind: 'bore', id: bore.id, face: bore.kind === 'face' ? bore.face : 'edge', box: planBox(bore, panel) });
+  // With only placements selected (a drag of fittings), the panel's loose bores, thousands on a perforated panel, are not walked.
+  if (!only || only.bores.size > 0)
+    for (const bore of layout.bores)
+      if (!bore.placement && (!only || only.bores.has(bore.id))) items.push({ kind: 'bore', id: bore.id, face: bore.kind === 'face' ? bore.face : 'edge', box: planBox(bore, panel) });
   for (const placed of layout.placed) {
     if (only && !only.placements.has(placed.placement.id)) continue;
     const boxes = [...placed.bores.map((b) => planBox(b, panel)), ...placed.keepOuts.map((k) => k.box)];

@@ -41,7 +41,7 @@ function sameFace(drawn: Drawn, b: Extract<PanelBore, { kind: 'face' }>, ghost: 
 /**
  * The bores, keep-outs and placeholders of a panel, in the panel's own frame (mm) inside groups whose
  * transform is the view: panning and zooming touch two nodes. Nodes are kept by id and changed only
- * when their bore changed; what is selected lives on the drag layer, so that a drag redraws the few
+ * when their bore changed; what is selected lives on the live layer (under the overlay), so that a drag redraws the few
  * shapes that move and leaves the panel's hundreds of bores as they were drawn. A paint during a drag
  * walks every bore but builds nothing for those that did not change.
  */

@@ -1,7 +1,7 @@
 import Konva from 'konva';
 import type { Finding } from '../../../../shared/checks';
 import type { PanelLayout } from '../../../../shared/layout/panel-layout';
-import type { Box } from '../../../../shared/layout/bore';
+import type { Box, PanelBore } from '../../../../shared/layout/bore';
 import { formatLength } from '../../../../shared/units/format-length';
 import type { LengthUnit } from '../../../../shared/units/length-unit';
 import type { Hit } from './hit-index';
@@ -57,18 +57,15 @@ function dimensions(layer: Konva.Container, view: View, anchor: Point, unit: Len
   layer.add(label(words.y, p.x + 6, (floor.y + p.y) / 2 - 9, ACCENT, 'dimension-y'));
 }
 
-/** Rings around every bore a finding concerns, and around a missing fitting's placeholder. */
-function findingRings(layer: Konva.Container, scene: OverlayScene): void {
+/** Rings around every bore a finding concerns, and around a missing fitting's placeholder; `boreOf` finds a bore by id. */
+function findingRings(layer: Konva.Container, scene: OverlayScene, boreOf: (id: string) => PanelBore | undefined): void {
   const { view, layout } = scene;
-  // Only the bores the findings name, found in one pass: a map of every bore would cost each move of a drag.
-  const named = new Set(scene.findings.flatMap((f) => f.bores));
-  const bores = new Map(named.size === 0 ? [] : layout.bores.filter((b) => named.has(b.id)).map((b) => [b.id, b]));
   const unknown = new Map(layout.unknown.map((p) => [p.id, p]));
   const placed = new Map(layout.placed.map((p) => [p.placement.id, p]));
   for (const finding of scene.findings) {
     const stroke = RING_COLORS[finding.severity];
     for (const id of finding.bores) {
-      const bore = bores.get(id);
+      const bore = boreOf(id);
       if (bore?.kind !== 'face') continue;
       const c = toScreen(view, bore);
       layer.add(new Konva.Circle({ x: c.x, y: c.y, radius: (bore.diameter / 2) * view.scale + 4, stroke, strokeWidth: 2.5, name: `finding-${finding.code}` }));
@@ -124,9 +121,27 @@ export class OverlayPainter {
   private readonly rings = new Konva.Group();
   private readonly marks = new Konva.Group();
   private ringsFrom: RingsFrom | undefined;
+  /** Where each of the panel's own bores is in the layout's list (they come first), by id; made once for each list of them. */
+  private looseAt: { loose: readonly unknown[]; index: Map<string, number> } | undefined;
 
   constructor(layer: Konva.Layer) {
     layer.add(this.rings, this.marks);
+  }
+
+  /**
+   * A bore of the layout by id, a placement's before a loose one of the same id. The rings are built again
+   * on every snap of a drag that moves a ringed fitting: finding the few named bores must not walk the
+   * thousands of a perforated panel each time.
+   */
+  private boreFinder(scene: OverlayScene): (id: string) => PanelBore | undefined {
+    const { layout, loose } = scene;
+    if (this.looseAt?.loose !== loose) this.looseAt = { loose, index: new Map(layout.bores.slice(0, loose.length).map((b, i) => [b.id, i])) };
+    const index = this.looseAt.index;
+    const fitted = new Map(layout.placed.flatMap((p) => p.bores.map((b) => [b.id, b] as const)));
+    return (id) => {
+      const i = index.get(id);
+      return fitted.get(id) ?? (i === undefined ? undefined : layout.bores[i]);
+    };
   }
 
   paint(scene: OverlayScene): void {
@@ -135,7 +150,7 @@ export class OverlayPainter {
     const places = ringedPlaces(scene);
     if (!kept || from.places !== places) {
       this.rings.destroyChildren();
-      findingRings(this.rings, scene);
+      findingRings(this.rings, scene, this.boreFinder(scene));
       this.ringsFrom = { findings: scene.findings, view: scene.view, loose: scene.loose, places };
     }
     this.marks.destroyChildren();

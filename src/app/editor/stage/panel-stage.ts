@@ -28,7 +28,8 @@ export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
 
 /**
  * The panel at scale on a Konva stage. The document lives in the store; this draws it (grid, bores,
- * drag, overlay: four layers, none listening, as picking goes through a spatial index) and turns pointer
+ * and, on one layer above them, what a drag moves with the overlay: three layers, none listening, as
+ * picking goes through a spatial index) and turns pointer
  * gestures into the store's commands.
  */
 @Component({
@@ -67,7 +68,7 @@ export class PanelStage {
   });
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
-  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; drag: Konva.Layer; overlay: Konva.Layer; painter: BorePainter; overlayPainter: OverlayPainter } | undefined>(undefined);
+  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; live: Konva.Layer; painter: BorePainter; overlayPainter: OverlayPainter } | undefined>(undefined);
   private readonly items = computed(() => {
     const panel = this.store.panel();
     const layout = this.store.layout();
@@ -113,8 +114,10 @@ export class PanelStage {
       const container = this.canvasHost().nativeElement;
       const stage = new Konva.Stage({ container, width: container.clientWidth, height: container.clientHeight });
       const quiet = () => new Konva.Layer({ listening: false });
-      const layers = { grid: quiet(), bores: quiet(), drag: quiet(), overlay: quiet() };
-      stage.add(layers.grid, layers.bores, layers.drag, layers.overlay);
+      // What a drag changes (the lifted selection, the rings, the dimensions) shares one canvas, so that a
+      // move clears, draws and hands the compositor one canvas, not two.
+      const layers = { grid: quiet(), bores: quiet(), live: quiet() };
+      stage.add(layers.grid, layers.bores, layers.live);
       const resize = new ResizeObserver(() => {
         stage.size({ width: container.clientWidth, height: container.clientHeight });
         this.size.set({ width: container.clientWidth, height: container.clientHeight });
@@ -124,7 +127,8 @@ export class PanelStage {
         resize.disconnect();
         stage.destroy();
       });
-      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.drag), overlayPainter: new OverlayPainter(layers.overlay) });
+      // The lifted selection first, so that the overlay's rings and dimensions lie above it.
+      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.live), overlayPainter: new OverlayPainter(layers.live) });
     });
     pointerTool(this.host, {
       store: this.store,
@@ -219,7 +223,7 @@ export class PanelStage {
       const moved = view !== paintedView;
       paintedView = view;
       if (changed.bores || moved) konva.bores.batchDraw();
-      if (changed.drag || moved) konva.drag.batchDraw();
+      if (changed.drag || moved) konva.live.batchDraw();
     });
     effect(() => {
       const konva = this.konva();
@@ -228,7 +232,7 @@ export class PanelStage {
       const view = this.viewState();
       if (!konva || !layout || !loose || !view) return;
       konva.overlayPainter.paint({ view, layout, loose, findings: this.store.findings(), selected: this.selected(), anchor: this.anchor(), band: this.band(), unit: this.unit() });
-      konva.overlay.batchDraw();
+      konva.live.batchDraw();
     });
   }
 }

@@ -136,10 +136,12 @@ export function pointerTool(el: HTMLElement, ctx: ToolContext): Observable<unkno
       if (pinch) current?.cancel?.();
       const gesture = pinch ? pinching(ctx, touches) : begin(ctx, el, down);
       current = gesture;
+      // The stage does not move under a pressed pointer: where it is is read once a gesture, not on every move.
+      const box = el.getBoundingClientRect();
       return moves.pipe(
         takeUntil(ups),
         tap(track),
-        map((e) => ({ e, at: localPoint(el, e) })),
+        map((e) => ({ e, at: { x: e.clientX - box.left, y: e.clientY - box.top } })),
         tap(({ e, at }) => gesture.move(at, e)),
         finalize(() => gesture.end()),
       );
