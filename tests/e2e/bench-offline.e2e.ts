@@ -136,7 +136,7 @@ describe('the bench offline', () => {
       return { job: job.status, session };
     }, id);
     expect(after.job).toBe(504);
-    expect(after.session).toEqual({ user: null });
+    expect(after.session).toEqual({ user: null, signUpOpen: false });
     await context.setOffline(false);
   });
 
