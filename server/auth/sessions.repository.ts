@@ -1,29 +1,38 @@
 import { and, eq, gt, ne, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
-import { preparedPerDatabase } from '../db/prepared';
-import { sessions, shops, users } from '../db/schema';
-import { accountColumns } from './users.repository';
+import { sessions } from '../db/schema';
+import { rowsOf } from '../db/rows-of';
+import { inAnyScope } from '../db/shop-scope';
+import type { ShopStatus } from '../db/schema/shops';
+import type { Role } from '../../shared/api/contract';
+import type { LengthUnit } from '../../shared/units/length-unit';
 
-/** The query of every signed-in request. */
-const sessionRead = preparedPerDatabase((db) =>
-  db
-    .select({ sess: sessions.sess, account: accountColumns, shopStatus: shops.status })
-    .from(sessions)
-    .leftJoin(users, eq(users.id, sql`(${sessions.sess} #>> '{passport,user}')::integer`))
-    // A suspended shop's sessions stop working at their next request (auth.service.ts usableUser).
-    .leftJoin(shops, eq(shops.id, users.shopId))
-    .where(and(eq(sessions.sid, sql.placeholder('sid')), gt(sessions.expire, sql.placeholder('now'))))
-    .prepare('session_read'),
-);
+/** A row of `session_with_account` (migration 0014): the session, and its account's columns, null when there is none. */
+type SessionRow = {
+  sess: Record<string, unknown>;
+  id: number | null;
+  email: string;
+  name: string;
+  role: Role;
+  units: LengthUnit;
+  demo: boolean;
+  active: boolean;
+  shop_id: number;
+  shop_status: ShopStatus;
+};
 
 /**
  * A session that has not expired, with the account it is signed in as (null when it is not signed in, or
- * the account is gone): one round trip for what every signed-in request needs. passport keeps the member's
- * id at sess.passport.user (auth/request-types.ts).
+ * the account is gone) and its shop's status: one round trip for what every signed-in request needs, the
+ * query of every signed-in request. passport keeps the member's id at sess.passport.user
+ * (auth/request-types.ts). The function runs as its owner, across shops, in whatever scope the connection
+ * is in (db/shop-scope.ts `inAnyScope`).
  */
 export async function findSession(db: Database, sid: string, now: Date) {
-  const [row] = await sessionRead(db).execute({ sid, now: now.toISOString() });
-  return row && { sess: row.sess, account: row.account && { ...row.account, shopStatus: row.shopStatus } };
+  const [row] = await inAnyScope(() => rowsOf<SessionRow>(db, sql`select * from session_with_account(${sid}, ${now.toISOString()})`));
+  if (!row) return undefined;
+  const { sess, id, email, name, role, units, demo, active, shop_id: shopId, shop_status: shopStatus } = row;
+  return { sess, account: id === null ? null : { id, email, name, role, units, demo, active, shopId, shopStatus } };
 }
 
 /**

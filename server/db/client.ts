@@ -97,7 +97,7 @@ function shopScopedPglite(client: PGlite): PGlite {
     // Read now, in the caller's scope: the queue runs the work later, from another's.
     const wanted = scopeSwitch();
     const run = queue.then(async () => {
-      if (connectionScope !== wanted) {
+      if (wanted !== undefined && connectionScope !== wanted) {
         connectionScope = undefined;
         await client.exec(wanted);
         connectionScope = wanted;

@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
-import { sql, type SQL } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
 import type { Database } from './client';
+import { rowsOf } from './rows-of';
 
 /** The migrations drizzle-kit committed, each with the time it was generated (drizzle records that time as applied). */
 export interface MigrationJournal {
@@ -9,11 +10,6 @@ export interface MigrationJournal {
 
 export function readJournal(migrationsFolder: string): MigrationJournal {
   return JSON.parse(readFileSync(`${migrationsFolder}/meta/_journal.json`, 'utf8')) as MigrationJournal;
-}
-
-/** Raw rows: execute answers the driver's own result, which holds them as `rows` on PGlite and on pg alike. */
-async function rowsOf<T>(db: Database, query: SQL): Promise<T[]> {
-  return ((await db.execute(query)) as unknown as { rows: T[] }).rows;
 }
 
 /**

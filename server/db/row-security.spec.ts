@@ -1,11 +1,12 @@
 import { eq, getTableName, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { findSession } from '../auth/sessions.repository';
 import { joinPresence } from '../live/job-events.repository';
 import { PackProgressBoard } from '../packs/pack-progress';
 import { addSecondShop, type SecondShop } from '../testing/second-shop';
 import { createTestApp, DEMO_SHOP_ID, type TestApp } from '../testing/test-app';
-import { activity, attachments, bores, carcasses, jobEvents, jobPresence, jobs, mailTokens, outbox, packProgress, panels, placements, shopFittings, shopSettings, users } from './schema';
-import { inShop } from './shop-scope';
+import { activity, attachments, bores, carcasses, jobEvents, jobPresence, jobs, mailTokens, outbox, packProgress, panels, placements, sessions, shopFittings, shopSettings, users } from './schema';
+import { inAnyScope, inShop } from './shop-scope';
 
 const SHOP_OWNED = [users, jobs, carcasses, panels, placements, bores, activity, attachments, shopFittings, shopSettings, mailTokens, outbox, jobEvents, jobPresence, packProgress];
 
@@ -94,5 +95,22 @@ describe('row-level security on PGlite', () => {
       return answer.then((row) => ({ i, row, want: expected[scope] }));
     });
     for (const { i, row, want } of await Promise.all(asked)) expect({ i, ...row }).toEqual({ i, ...want });
+  });
+
+  it("reads any shop's session with its account from any scope, leaves the connection's scope as it was, and lets no other role read it", async () => {
+    const db = t.database.db;
+    await db.insert(sessions).values({ sid: 'second-shop-session', sess: { passport: { user: second.adminId } }, expire: new Date(Date.now() + 60_000) });
+    const found = await inShop(DEMO_SHOP_ID, async () => {
+      await db.$count(jobs);
+      const read = await findSession(db, 'second-shop-session', new Date());
+      // The read changed neither the role nor the shop of PGlite's one connection.
+      const [connection] = await inAnyScope(() => rows(sql`select current_user as role, current_setting('borewright.shop_id', true) as shop`));
+      return { read, connection };
+    });
+    expect(found.connection).toEqual({ role: 'borewright_app', shop: String(DEMO_SHOP_ID) });
+    expect(found.read?.account).toMatchObject({ id: second.adminId, shopId: second.shopId, shopStatus: 'active' });
+    expect(await findSession(db, 'second-shop-session', new Date(Date.now() + 120_000))).toBeUndefined();
+    const [privilege] = await rows(sql`select has_function_privilege('public', 'session_with_account(text, timestamptz)', 'execute') as granted`);
+    expect(privilege).toEqual({ granted: false });
   });
 });

@@ -11,10 +11,12 @@ import { AsyncLocalStorage } from 'node:async_hooks';
  * - `null`, a request nobody is signed in to: the app's role without a shop, which sees no shop's rows;
  * - across shops: the connecting role itself (the tables' owner, which bypasses row-level security),
  *   only for the few look-ups that must find a row before anyone's shop is known (`acrossShops`);
+ * - any scope: whatever the connection is in, for a call of a database function that runs as its owner
+ *   whoever calls it (`inAnyScope`), so that it costs PGlite's one connection no change of scope;
  * - no scope at all (migrations, the demo seed's shop row, the command line, backups, tests that read
  *   the database directly): as across shops.
  */
-type Scope = { shopId: number | null } | { acrossShops: true };
+type Scope = { shopId: number | null } | { acrossShops: true } | { anyScope: true };
 
 const current = new AsyncLocalStorage<Scope>();
 
@@ -48,7 +50,16 @@ export function acrossShops<T>(work: () => T | PromiseLike<T>): Promise<T> {
   return current.run({ acrossShops: true }, async () => await work());
 }
 
-/** The shop the current work runs as: a shop's id, null for no shop, undefined when across shops or unscoped. */
+/**
+ * Runs `work` in whatever scope the connection it gets is in: only for calls of database functions that
+ * run as their owner (SECURITY DEFINER), whose answer so does not depend on the caller's role or shop. On a
+ * PostgreSQL pool it runs as the connecting role, as outside any scope.
+ */
+export function inAnyScope<T>(work: () => T | PromiseLike<T>): Promise<T> {
+  return current.run({ anyScope: true }, async () => await work());
+}
+
+/** The shop the current work runs as: a shop's id, null for no shop, undefined when across shops, in any scope or unscoped. */
 export function currentShop(): number | null | undefined {
   const scope = current.getStore();
   return scope && 'shopId' in scope ? scope.shopId : undefined;
@@ -87,9 +98,12 @@ export const SCOPE_RESET = 'reset role; reset borewright.shop_id';
 
 /**
  * The statements that move a connection kept from one piece of work to the next (PGlite's one connection)
- * from whatever scope it is in to the current one, for the rest of its session.
+ * from whatever scope it is in to the current one, for the rest of its session; undefined when the current
+ * work runs in any scope, which leaves the connection as it is.
  */
-export function scopeSwitch(): string {
+export function scopeSwitch(): string | undefined {
+  const scope = current.getStore();
+  if (scope && 'anyScope' in scope) return undefined;
   const statements = scopeStatements();
   return statements ? `${SCOPE_RESET}; ${statements}` : SCOPE_RESET;
 }

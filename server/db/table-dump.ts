@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { getTableName, sql, type SQL } from 'drizzle-orm';
 import type { Database } from './client';
+import { rowsOf } from './rows-of';
 import { activity, attachments, bores, carcasses, jobs, mailTokens, outbox, panels, placements, shopFittings, shopSettings, shops, users } from './schema';
 
 /**
@@ -33,8 +34,8 @@ export function currentSchema(): string {
 
 /** One row of one column; raw results differ between drivers, but both carry `rows`. */
 async function single<T>(db: Database, query: SQL): Promise<T> {
-  const result = (await db.execute(query)) as unknown as { rows: Record<string, T>[] };
-  return Object.values(result.rows[0])[0];
+  const [row] = await rowsOf<Record<string, T>>(db, query);
+  return Object.values(row)[0];
 }
 
 /**
