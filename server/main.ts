@@ -8,6 +8,7 @@ import { acquireDataLock, DataFolderLockedError } from './db/data-lock';
 import { createLogger } from './logger';
 import { LiveStreams } from './live/live-streams';
 import { PackPool } from './packs/pack-pool';
+import { refreshJobStatistics } from './db/planner-statistics';
 
 /** Requests still running get this long after SIGTERM before their connections are cut. */
 const DRAIN_MS = 10_000;
@@ -69,6 +70,10 @@ async function main(): Promise<void> {
   await listen(server, config.port, config.host).catch((err: NodeJS.ErrnoException) =>
     fail(`Borewright cannot listen on ${config.host}:${config.port}: ${err.code === 'EADDRINUSE' ? 'the port is taken (set PORT)' : err.message}`),
   );
+
+  // Whatever was written since the last start without a bulk load's refresh (planner-statistics.ts); a
+  // failure here costs speed, not service, so it is logged and the server goes on.
+  refreshJobStatistics(database.db).catch((err: unknown) => logger.warn({ err }, 'refreshing the planner statistics failed'));
 
   const where = target.engine === 'pglite' ? `PGlite in ${path.resolve(config.dataDir)}` : 'PostgreSQL (DATABASE_URL)';
   const lines = [

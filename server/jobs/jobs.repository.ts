@@ -2,6 +2,7 @@ import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { inOwnShop, ownShopParams, ownShopPlaceholder } from '../db/own-shop';
 import { preparedPerDatabase } from '../db/prepared';
+import { selectAsJson } from '../db/rows-as-json';
 import type { CarcassDraft, JobDocumentDraft, JobRows } from '../db/job-mapping';
 import { bores, carcasses, jobs, panels, placements, users } from '../db/schema';
 import { insertDrilling, insertPanel } from '../panels/panels.repository';
@@ -68,7 +69,8 @@ export async function findJobStamp(db: Database, id: number): Promise<{ version:
 
 /**
  * Everything stored for one job, children in stored order; undefined when there is no such job. One query
- * per table; a panel's `statusBy` member comes with its row.
+ * per table; a panel's `statusBy` member comes with its row. Placements and bores, thousands of rows in a
+ * large job, come as JSON (rows-as-json.ts).
  */
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
   const job = await findJob(db, id);
@@ -77,8 +79,8 @@ export async function loadJobRows(db: Database, id: number): Promise<JobRows | u
   const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
     db.select().from(carcasses).where(inOwnShop(carcasses, eq(carcasses.jobId, id))).orderBy(asc(carcasses.id)),
     db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(inOwnShop(panels, eq(panels.jobId, id))).orderBy(asc(panels.id)),
-    db.select().from(placements).where(inOwnShop(placements, inArray(placements.panelId, panelIds))).orderBy(asc(placements.id)),
-    db.select().from(bores).where(inOwnShop(bores, inArray(bores.panelId, panelIds))).orderBy(asc(bores.id)),
+    selectAsJson(db, placements, inOwnShop(placements, inArray(placements.panelId, panelIds)), placements.id),
+    selectAsJson(db, bores, inOwnShop(bores, inArray(bores.panelId, panelIds)), bores.id),
   ]);
   const people = new Map<number, string>();
   for (const { panel, statusByName } of panelRows) if (panel.statusBy !== null && statusByName !== null) people.set(panel.statusBy, statusByName);

@@ -13,6 +13,7 @@ import { nextDocumentId } from './document-ids';
 import * as repo from './jobs.repository';
 import { writableJob } from './writable-job';
 import { liveMember, recordJobEvent } from '../live/job-events.repository';
+import { refreshJobStatistics } from '../db/planner-statistics';
 
 type Summary = NonNullable<Awaited<ReturnType<typeof repo.findJobSummary>>>;
 
@@ -65,6 +66,8 @@ async function storeJob(db: Database, actor: User, doc: JobDocument, action: str
     await recordActivity(tx, { userId: actor.id, jobId: id, action, details: { name: doc.name, ...details } });
     return id;
   });
+  // A job of panels is a bulk load: the planner is told of it before the job is read (planner-statistics.ts).
+  if (doc.panels.length > 0) await refreshJobStatistics(db);
   return jobSummary(db, jobId);
 }
 
