@@ -7,7 +7,7 @@ import type { PackMessage, PackOrder } from './pack-order';
 
 // On Linux each thread has its own niceness, and 0 names the calling thread: a pack gives way to the
 // thread that answers requests when the cores are busy. Elsewhere 0 names the whole process, so not there.
-if (process.platform === 'linux') setPriority(0, constants.priority.PRIORITY_BELOW_NORMAL);
+if (process.platform === 'linux') setPriority(0, constants.priority.PRIORITY_LOW);
 
 /**
  * Threads that make one pack's files: this one alone. The pool already gives packs all cores but the one
