@@ -9,8 +9,12 @@ export interface BoxIndex {
   search(minX: number, minY: number, maxX: number, maxY: number, visit: (i: number) => void): void;
 }
 
-/** Below this many boxes, looking at each is cheaper than building an index (measured on the bench job). */
-const INDEX_FROM = 32;
+/**
+ * Below this many boxes, looking at each is cheaper than building an index. Measured on the bench job,
+ * whose sides hold about 80 face bores: as fast as flatbush once warm, and far cheaper in one run of
+ * `borewright check`, where the index's code is still cold for most of the panels it is built for.
+ */
+const INDEX_FROM = 128;
 /**
  * Flatbush's node size. The checks search once per bore, so queries matter more than building: small
  * nodes measured about a third faster than the default 16.

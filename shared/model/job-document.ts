@@ -123,7 +123,11 @@ export const edgeBore = z.object({
   depth: length(MAX_PANEL_LENGTH),
 });
 
-export const bore = z.union([edgeBore, faceBore]);
+/**
+ * Face bores first: a union tries its branches in order and stops at the first that matches, and most
+ * bores of a job are face bores (line boring, fittings), so most are validated once, not twice.
+ */
+export const bore = z.union([faceBore, edgeBore]);
 
 export const hang = z.object({
   /** The panels (usually sides) the door or flap hangs on. */

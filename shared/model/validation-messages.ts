@@ -14,12 +14,14 @@ export function formatPath(path: readonly PropertyKey[]): string {
 /**
  * A union of objects (a face bore or an edge bore) that matches no branch reports "Invalid input"
  * with the problems of every branch. The branch with the fewest problems is the one the author
- * meant, so its problems are the ones worth showing, each at its full path.
+ * meant, so its problems are the ones worth showing, each at its full path. On a tie, the last
+ * branch's: a bore that fits neither kind better is read as an edge bore, the bore union listing
+ * face bores first only for speed.
  */
 function flatten(issue: Issue, prefix: readonly PropertyKey[]): { path: PropertyKey[]; message: string }[] {
   const path = [...prefix, ...issue.path];
   if (issue.code === 'invalid_union' && issue.errors.length > 0) {
-    const closest = issue.errors.reduce((best, branch) => (branch.length < best.length ? branch : best));
+    const closest = issue.errors.reduce((best, branch) => (branch.length <= best.length ? branch : best));
     // Only a union of objects has a branch to point into; a union of values (a number or a keyword) keeps its own message.
     if (closest.length > 0 && closest.every((inner) => inner.path.length > 0)) return closest.flatMap((inner) => flatten(inner, path));
   }
