@@ -55,7 +55,7 @@ export class BorePainter {
   private looseFrom: { bores: Panel['bores']; size: string; face: Face; selected: ReadonlySet<string> } | undefined;
   private changed: PaintedLayers = { bores: false, drag: false };
 
-  constructor(bores: Konva.Layer, drag: Konva.Layer) {
+  constructor(bores: Konva.Container, drag: Konva.Container) {
     bores.add(this.world);
     drag.add(this.lifted);
   }

@@ -1,7 +1,7 @@
 import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, effect, ElementRef, inject, linkedSignal, signal, untracked, viewChild } from '@angular/core';
-import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import Konva from 'konva';
-import { fromEvent, map } from 'rxjs';
+import { fromEvent, map, type Observable } from 'rxjs';
 import type { Box } from '../../../../shared/layout/bore';
 import { Lengths } from '../../ui/lengths';
 import { EditorStore } from '../editor-store';
@@ -27,10 +27,9 @@ interface Board {
 export const FITTING_DRAG_TYPE = 'application/x-borewright-fitting';
 
 /**
- * The panel at scale on a Konva stage. The document lives in the store; this draws it (grid, bores,
- * and, on one layer above them, what a drag moves with the overlay: three layers, none listening, as
- * picking goes through a spatial index) and turns pointer
- * gestures into the store's commands.
+ * The panel at scale on a Konva stage. The document lives in the store; this draws it (the grid and the
+ * bores on one layer, and on one above them what a drag moves with the overlay: two canvases, none
+ * listening, as picking goes through a spatial index) and turns pointer gestures into the store's commands.
  */
 @Component({
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -68,7 +67,7 @@ export class PanelStage {
   });
   private readonly band = signal<{ a: Point; b: Point } | undefined>(undefined);
   protected readonly spaceHeld = signal(false);
-  private readonly konva = signal<{ grid: Konva.Layer; bores: Konva.Layer; live: Konva.Layer; painter: BorePainter; overlayPainter: OverlayPainter } | undefined>(undefined);
+  private readonly konva = signal<{ board: Konva.Layer; grid: Konva.Group; live: Konva.Layer; painter: BorePainter; overlayPainter: OverlayPainter } | undefined>(undefined);
   private readonly items = computed(() => {
     const panel = this.store.panel();
     const layout = this.store.layout();
@@ -97,14 +96,12 @@ export class PanelStage {
     { equal: (a, b) => a?.id === b?.id && a?.width === b?.width && a?.height === b?.height && a?.thickness === b?.thickness && a?.reference === b?.reference },
   );
 
-  /** The pointer's position on the panel in mm, for the readout. */
-  readonly cursor = toSignal(
-    fromEvent<PointerEvent>(this.host, 'pointermove').pipe(
-      map((e) => {
-        const view = this.viewState();
-        return view && toPanel(view, localPoint(this.host, e));
-      }),
-    ),
+  /** The pointer's position on the panel in mm, for the readout: a stream, not a signal, so that a move schedules no change detection. */
+  readonly pointerAt: Observable<Point | undefined> = fromEvent<PointerEvent>(this.host, 'pointermove').pipe(
+    map((e) => {
+      const view = this.viewState();
+      return view && toPanel(view, localPoint(this.host, e));
+    }),
   );
   readonly view = this.viewState.asReadonly();
 
@@ -114,10 +111,14 @@ export class PanelStage {
       const container = this.canvasHost().nativeElement;
       const stage = new Konva.Stage({ container, width: container.clientWidth, height: container.clientHeight });
       const quiet = () => new Konva.Layer({ listening: false });
-      // What a drag changes (the lifted selection, the rings, the dimensions) shares one canvas, so that a
-      // move clears, draws and hands the compositor one canvas, not two.
-      const layers = { grid: quiet(), bores: quiet(), live: quiet() };
-      stage.add(layers.grid, layers.bores, layers.live);
+      // Every canvas costs the browser each frame, drawn or not: what rarely changes (the grid, the bores
+      // at rest) shares one, and what a drag changes (the lifted selection, the rings, the dimensions)
+      // the other, so that a move clears and draws one canvas.
+      const board = quiet();
+      const live = quiet();
+      const grid = new Konva.Group();
+      board.add(grid);
+      stage.add(board, live);
       const resize = new ResizeObserver(() => {
         stage.size({ width: container.clientWidth, height: container.clientHeight });
         this.size.set({ width: container.clientWidth, height: container.clientHeight });
@@ -128,7 +129,7 @@ export class PanelStage {
         stage.destroy();
       });
       // The lifted selection first, so that the overlay's rings and dimensions lie above it.
-      this.konva.set({ ...layers, painter: new BorePainter(layers.bores, layers.live), overlayPainter: new OverlayPainter(layers.live) });
+      this.konva.set({ board, grid, live, painter: new BorePainter(board, live), overlayPainter: new OverlayPainter(live) });
     });
     pointerTool(this.host, {
       store: this.store,
@@ -201,7 +202,7 @@ export class PanelStage {
     return this.index().inside(Math.min(p.x, q.x), Math.min(p.y, q.y), Math.max(p.x, q.x), Math.max(p.y, q.y));
   }
 
-  /** One effect per layer, so that a pan redraws no bore and a drag no grid. */
+  /** One effect per painter, so that a drag redraws neither grid nor resting bores. */
   private paintLayers(): void {
     effect(() => {
       const konva = this.konva();
@@ -209,7 +210,7 @@ export class PanelStage {
       const view = this.viewState();
       if (!konva || !board || !view) return;
       paintGrid(konva.grid, board, this.store.grid(), view);
-      konva.grid.batchDraw();
+      konva.board.batchDraw();
     });
     let paintedView: View | undefined;
     effect(() => {
@@ -222,7 +223,7 @@ export class PanelStage {
       const changed = konva.painter.paint(panel, layout, this.store.face(), this.store.selection());
       const moved = view !== paintedView;
       paintedView = view;
-      if (changed.bores || moved) konva.bores.batchDraw();
+      if (changed.bores || moved) konva.board.batchDraw();
       if (changed.drag || moved) konva.live.batchDraw();
     });
     effect(() => {
