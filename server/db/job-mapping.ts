@@ -67,9 +67,10 @@ function inSchemaOrder<T extends object>(schema: { shape: Record<string, unknown
 
 const byId = <T extends { id: number }>(rows: readonly T[]) => [...rows].sort((a, b) => a.id - b.id);
 
-function groupByPanel<T extends { id: number; panelId: number }>(rows: readonly T[]): Map<number, T[]> {
+/** Rows by their panel, in the order given (each panel's rows are put in order by `toPanel`, a few at a time). */
+function groupByPanel<T extends { panelId: number }>(rows: readonly T[]): Map<number, T[]> {
   const groups = new Map<number, T[]>();
-  for (const row of byId(rows)) {
+  for (const row of rows) {
     const group = groups.get(row.panelId);
     if (group) group.push(row);
     else groups.set(row.panelId, [row]);
@@ -104,10 +105,10 @@ export function toPlacement(row: PlacementRow): Placement {
 
 /** A bore row as the document's face or edge bore. */
 export function toBore(row: BoreRow): Bore {
-  const common = { id: row.key, diameter: row.diameter, depth: row.depth };
+  // Each kind as one literal, not spread from a common part: a large job maps tens of thousands.
   return row.edge !== null
-    ? { ...common, edge: row.edge, at: present(row.at, 'at'), z: present(row.z, 'z') }
-    : { ...common, x: present(row.x, 'x'), y: present(row.y, 'y'), face: present(row.face, 'face') };
+    ? { id: row.key, diameter: row.diameter, depth: row.depth, edge: row.edge, at: present(row.at, 'at'), z: present(row.z, 'z') }
+    : { id: row.key, diameter: row.diameter, depth: row.depth, x: present(row.x, 'x'), y: present(row.y, 'y'), face: present(row.face, 'face') };
 }
 
 /** One panel of the document from its row and its children's rows (in stored order). */

@@ -1,3 +1,4 @@
+import { setImmediate } from 'node:timers/promises';
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { Database } from '../db/client';
 import { inOwnShop, ownShopParams, ownShopPlaceholder } from '../db/own-shop';
@@ -68,30 +69,59 @@ export async function findJobStamp(db: Database, id: number): Promise<{ version:
 }
 
 /**
- * Everything stored for one job, children in stored order; undefined when there is no such job. One query
- * per table; a panel's `statusBy` member comes with its row. Placements and bores, thousands of rows in a
- * large job, come as JSON (rows-as-json.ts).
+ * Panels whose placements and bores one query reads. PGlite runs a query on the server's own thread and
+ * answers without giving the event loop a turn, so a 300-panel job read in one query held every other
+ * request for hundreds of ms; read in slices, with the event loop let go between them, no request waits
+ * for more than one slice.
+ */
+export const PANELS_A_SLICE = 16;
+/** A job of up to this many panels (a kitchen, a wall unit) is read in one piece, as before: two queries, no second look at its stamp. */
+const PANELS_IN_ONE_PIECE = 48;
+/** Sliced reads of a job that a change overtook, before it is read in one piece. */
+const SLICED_TRIES = 3;
+
+type Stamp = Awaited<ReturnType<typeof findJobStamp>>;
+const sameStamp = (a: Stamp, b: Stamp) => a?.version === b?.version && a?.writtenBy === b?.writtenBy && a?.updatedAt === b?.updatedAt;
+
+/**
+ * Everything stored for one job, children in stored order; undefined when there is no such job. A
+ * panel's `statusBy` member comes with its row. Placements and bores, thousands of rows in a large job,
+ * come as JSON (rows-as-json.ts), a slice of panels at a time; as other requests may write between the
+ * slices, the job's stamp is read before and after, and a read that a change overtook is read again, so
+ * that what is returned is the job as it stood at one moment.
  */
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
-  const job = await findJob(db, id);
+  for (let attempt = 1; ; attempt++) {
+    const read = await readJobRows(db, id, attempt <= SLICED_TRIES);
+    if (!read || read.slices <= 1 || sameStamp(read.stamp, await findJobStamp(db, id))) return read?.rows;
+  }
+}
+
+async function readJobRows(db: Database, id: number, sliced: boolean): Promise<{ rows: JobRows; stamp: Stamp; slices: number } | undefined> {
+  const [stamp, job] = await Promise.all([findJobStamp(db, id), findJob(db, id)]);
   if (!job) return undefined;
-  const panelIds = db.select({ id: panels.id }).from(panels).where(inOwnShop(panels, eq(panels.jobId, id)));
-  const [carcassRows, panelRows, placementRows, boreRows] = await Promise.all([
+  const [carcassRows, panelRows] = await Promise.all([
     db.select().from(carcasses).where(inOwnShop(carcasses, eq(carcasses.jobId, id))).orderBy(asc(carcasses.id)),
     db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(inOwnShop(panels, eq(panels.jobId, id))).orderBy(asc(panels.id)),
-    selectAsJson(db, placements, inOwnShop(placements, inArray(placements.panelId, panelIds)), placements.id),
-    selectAsJson(db, bores, inOwnShop(bores, inArray(bores.panelId, panelIds)), bores.id),
   ]);
+  const panelsASlice = sliced && panelRows.length > PANELS_IN_ONE_PIECE ? PANELS_A_SLICE : panelRows.length;
+  const placementRows: JobRows['placements'] = [];
+  const boreRows: JobRows['bores'] = [];
+  let slices = 0;
+  for (let first = 0; first < panelRows.length; first += panelsASlice) {
+    const ids = panelRows.slice(first, first + panelsASlice).map((r) => r.panel.id);
+    const [placementSlice, boreSlice] = await Promise.all([
+      selectAsJson(db, placements, inOwnShop(placements, inArray(placements.panelId, ids)), placements.id),
+      selectAsJson(db, bores, inOwnShop(bores, inArray(bores.panelId, ids)), bores.id),
+    ]);
+    placementRows.push(...placementSlice);
+    boreRows.push(...boreSlice);
+    slices++;
+    if (panelsASlice < panelRows.length) await setImmediate();
+  }
   const people = new Map<number, string>();
   for (const { panel, statusByName } of panelRows) if (panel.statusBy !== null && statusByName !== null) people.set(panel.statusBy, statusByName);
-  return {
-    job,
-    carcasses: carcassRows,
-    panels: panelRows.map((r) => r.panel),
-    placements: placementRows,
-    bores: boreRows,
-    people,
-  };
+  return { rows: { job, carcasses: carcassRows, panels: panelRows.map((r) => r.panel), placements: placementRows, bores: boreRows, people }, stamp, slices };
 }
 
 /** Stores a whole job; call inside a transaction so a failure leaves nothing behind. Returns the job's id. */
