@@ -8,7 +8,8 @@
  *   npm run bench:api                      BENCH_SECONDS=10 by default, per run
  *   npm run bench:api -- --cpu-prof        the server writes a CPU profile into bench-profiles/ when it stops
  *
- * Each run also gives the server's CPU time per answer (all its threads, the pack's workers included).
+ * Each run also gives the server's CPU time per answer (all its threads, the pack's workers included), and
+ * of it the main thread's, which answers every request.
  */
 import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
@@ -29,18 +30,26 @@ interface Run {
   statuses: string;
   /** The server process's CPU time (all its threads) per answer: on a busy machine it says more than the clock. */
   cpuMs: number;
+  /** Of it, the main thread's, which answers every request. */
+  mainCpuMs: number;
 }
 
-/** CPU time the process has used so far, in ms (Linux: utime + stime of /proc/<pid>/stat, in clock ticks of 10 ms). */
-function cpuOf(pid: number): number {
-  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1].split(' ');
-  return (Number(fields[11]) + Number(fields[12])) * 10;
+/**
+ * CPU time used so far, in ms, by the whole process and by its main thread alone (Linux: utime + stime
+ * of /proc/<pid>/stat and of /proc/<pid>/task/<pid>/stat, in clock ticks of 10 ms).
+ */
+function cpuOf(pid: number): { all: number; main: number } {
+  const ticks = (file: string) => {
+    const fields = readFileSync(file, 'utf8').split(') ')[1].split(' ');
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  };
+  return { all: ticks(`/proc/${pid}/stat`), main: ticks(`/proc/${pid}/task/${pid}/stat`) };
 }
 
 async function load(pid: number, label: string, url: string, headers: Record<string, string>, expect: number, seconds = SECONDS): Promise<Run> {
   const cpuBefore = cpuOf(pid);
   const result = await autocannon({ url, connections: CONNECTIONS, duration: seconds, headers });
-  const cpu = cpuOf(pid) - cpuBefore;
+  const cpuAfter = cpuOf(pid);
   const counts = { '2xx': result['2xx'], '3xx': result['3xx'], '4xx': result['4xx'], '5xx': result['5xx'] };
   const wanted = `${String(expect)[0]}xx` as keyof typeof counts;
   // Timeouts (10 s) are counted and shown, not fatal: on a crowded machine they are the figure.
@@ -53,14 +62,15 @@ async function load(pid: number, label: string, url: string, headers: Record<str
     rps: result.requests.average,
     p50: result.latency.p50,
     p99: result.latency.p99,
-    cpuMs: cpu / Math.max(1, result.requests.total),
+    cpuMs: (cpuAfter.all - cpuBefore.all) / Math.max(1, result.requests.total),
+    mainCpuMs: (cpuAfter.main - cpuBefore.main) / Math.max(1, result.requests.total),
     statuses: [...Object.entries(counts).filter(([, n]) => n > 0).map(([k, n]) => `${k} ${n}`), ...(result.timeouts ? [`timeouts ${result.timeouts}`] : [])].join(', '),
   };
 }
 
 function line(run: Run, health: Run): string {
   const ratio = run === health ? '' : `  ${(run.rps / health.rps).toFixed(2)}× health`;
-  return `  ${run.label.padEnd(46)} ${run.rps.toFixed(0).padStart(6)}/s  p50 ${String(run.p50).padStart(4)} ms  p99 ${String(run.p99).padStart(4)} ms  server CPU ${run.cpuMs.toFixed(2)} ms an answer${ratio}   (${run.statuses})`;
+  return `  ${run.label.padEnd(46)} ${run.rps.toFixed(0).padStart(6)}/s  p50 ${String(run.p50).padStart(4)} ms  p99 ${String(run.p99).padStart(4)} ms  server CPU ${run.cpuMs.toFixed(2)} ms an answer (main thread ${run.mainCpuMs.toFixed(2)})${ratio}   (${run.statuses})`;
 }
 
 async function main(): Promise<void> {
