@@ -9,5 +9,8 @@ export default defineConfig({
     fileParallelism: false,
     testTimeout: 60_000,
     hookTimeout: 120_000,
+    // What the page should come to show, waited for up to 10 s (not Vitest's 1 s): a save and the reload
+    // after it can take seconds on a busy CI machine, and a poll that gives up early fails a right page.
+    expect: { poll: { timeout: 10_000 } },
   },
 });
