@@ -1,4 +1,4 @@
-import { and, eq, inArray, sql } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { setImmediate } from 'node:timers/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { generateJob } from '../../shared/bench/generate-job';
@@ -47,7 +47,7 @@ describe('reading a job of many panels, a slice of panels at a time', () => {
     await setImmediate();
     await inDemoShop(() =>
       db.transaction(async (tx) => {
-        await tx.update(bores).set({ x: sql`${bores.x} + 1`, at: sql`${bores.at} + 1` }).where(and(inArray(bores.panelId, ends.map((e) => e.id))));
+        await tx.update(bores).set({ x: sql`${bores.x} + 1`, at: sql`${bores.at} + 1` }).where(inArray(bores.panelId, ends.map((e) => e.id)));
         await touchJob(tx, jobId);
       }),
     );

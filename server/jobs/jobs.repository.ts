@@ -75,39 +75,40 @@ export async function findJobStamp(db: Database, id: number): Promise<{ version:
  * for more than one slice.
  */
 export const PANELS_A_SLICE = 16;
-/** A job of up to this many panels (a kitchen, a wall unit) is read in one piece, as before: two queries, no second look at its stamp. */
+/** A job of up to this many panels (a kitchen, a wall unit) is read in one piece, as before, with no second look at its row. */
 const PANELS_IN_ONE_PIECE = 48;
 /** Sliced reads of a job that a change overtook, before it is read in one piece. */
 const SLICED_TRIES = 3;
-
-type Stamp = Awaited<ReturnType<typeof findJobStamp>>;
-const sameStamp = (a: Stamp, b: Stamp) => a?.version === b?.version && a?.writtenBy === b?.writtenBy && a?.updatedAt === b?.updatedAt;
 
 /**
  * Everything stored for one job, children in stored order; undefined when there is no such job. A
  * panel's `statusBy` member comes with its row. Placements and bores, thousands of rows in a large job,
  * come as JSON (rows-as-json.ts), a slice of panels at a time; as other requests may write between the
- * slices, the job's stamp is read before and after, and a read that a change overtook is read again, so
- * that what is returned is the job as it stood at one moment.
+ * slices, and every change to a job writes its row (`touchJob`), a sliced read whose job row was written
+ * meanwhile (its `xmin`, as in the job's stamp) is read again, so that what is returned is the job as it
+ * stood at one moment.
  */
 export async function loadJobRows(db: Database, id: number): Promise<JobRows | undefined> {
   for (let attempt = 1; ; attempt++) {
     const read = await readJobRows(db, id, attempt <= SLICED_TRIES);
-    if (!read || read.slices <= 1 || sameStamp(read.stamp, await findJobStamp(db, id))) return read?.rows;
+    if (!read || !read.sliced || read.writtenBy === (await findJobStamp(db, id))?.writtenBy) return read?.rows;
   }
 }
 
-async function readJobRows(db: Database, id: number, sliced: boolean): Promise<{ rows: JobRows; stamp: Stamp; slices: number } | undefined> {
-  const [stamp, job] = await Promise.all([findJobStamp(db, id), findJob(db, id)]);
-  if (!job) return undefined;
+async function readJobRows(db: Database, id: number, maySlice: boolean): Promise<{ rows: JobRows; writtenBy: string; sliced: boolean } | undefined> {
+  const [found] = await db
+    .select({ job: jobs, writtenBy: sql<string>`${jobs}.xmin::text` })
+    .from(jobs)
+    .where(inOwnShop(jobs, eq(jobs.id, id)));
+  if (!found) return undefined;
   const [carcassRows, panelRows] = await Promise.all([
     db.select().from(carcasses).where(inOwnShop(carcasses, eq(carcasses.jobId, id))).orderBy(asc(carcasses.id)),
     db.select({ panel: panels, statusByName: users.name }).from(panels).leftJoin(users, eq(users.id, panels.statusBy)).where(inOwnShop(panels, eq(panels.jobId, id))).orderBy(asc(panels.id)),
   ]);
-  const panelsASlice = sliced && panelRows.length > PANELS_IN_ONE_PIECE ? PANELS_A_SLICE : panelRows.length;
+  const sliced = maySlice && panelRows.length > PANELS_IN_ONE_PIECE;
+  const panelsASlice = sliced ? PANELS_A_SLICE : panelRows.length;
   const placementRows: JobRows['placements'] = [];
   const boreRows: JobRows['bores'] = [];
-  let slices = 0;
   for (let first = 0; first < panelRows.length; first += panelsASlice) {
     const ids = panelRows.slice(first, first + panelsASlice).map((r) => r.panel.id);
     const [placementSlice, boreSlice] = await Promise.all([
@@ -116,12 +117,11 @@ async function readJobRows(db: Database, id: number, sliced: boolean): Promise<{
     ]);
     placementRows.push(...placementSlice);
     boreRows.push(...boreSlice);
-    slices++;
-    if (panelsASlice < panelRows.length) await setImmediate();
+    if (sliced) await setImmediate();
   }
   const people = new Map<number, string>();
   for (const { panel, statusByName } of panelRows) if (panel.statusBy !== null && statusByName !== null) people.set(panel.statusBy, statusByName);
-  return { rows: { job, carcasses: carcassRows, panels: panelRows.map((r) => r.panel), placements: placementRows, bores: boreRows, people }, stamp, slices };
+  return { rows: { job: found.job, carcasses: carcassRows, panels: panelRows.map((r) => r.panel), placements: placementRows, bores: boreRows, people }, writtenBy: found.writtenBy, sliced };
 }
 
 /** Stores a whole job; call inside a transaction so a failure leaves nothing behind. Returns the job's id. */
