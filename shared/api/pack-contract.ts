@@ -19,6 +19,9 @@ export const packQuery = paperQuery.extend({
   progress: z.string().regex(/^[A-Za-z0-9_-]{16,64}$/, 'must be 16 to 64 letters, digits, "-" or "_"').optional(),
 });
 
+/** How often a client asks /api/pack-progress/:ticket how far the pack has got, while it downloads. */
+export const PROGRESS_POLL_MS = 500;
+
 /** A pack being made: the panel whose files are being made (0 while the cover and lists are), of how many. */
 export const packProgress = z.object({ panel: z.number().int(), panels: z.number().int() });
 export type PackProgressAnswer = z.output<typeof packProgress>;

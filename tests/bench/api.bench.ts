@@ -14,6 +14,7 @@
 import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { generateJob } from '../../shared/bench/generate-job';
+import { PROGRESS_POLL_MS } from '../../shared/api/pack-contract';
 import { ApiSession } from '../api-session';
 import { startThrowawayServer } from '../throwaway-server';
 
@@ -104,16 +105,22 @@ async function main(): Promise<void> {
     const whole = await load(server.pid, 'job, whole answer (no cached copy)', jobUrl, cookie, 200);
     const revalidated = etag ? await load(server.pid, 'job, revalidated (If-None-Match, 304)', jobUrl, { ...cookie, 'if-none-match': etag }, 304) : undefined;
 
-    // The same whole reads while the 300-panel job's pack is made, one after another, by one downloader.
+    // The same whole reads while the 300-panel job's pack is made, one after another, by one downloader
+    // that follows its progress as the browser does (a ticket, and a poll every PROGRESS_POLL_MS).
     let packing = true;
     let packs = 0;
-    const packUrl = `${baseUrl}/api/jobs/${imported.body.id}/pack.zip`;
     // Its failure is reported after the reads, never left unheard.
     const downloader = (async () => {
       while (packing) {
-        const res = await fetch(packUrl, { headers: cookie });
-        if (!res.ok) throw new Error(`the pack answered ${res.status}`);
-        await res.arrayBuffer();
+        const ticket = `bench-pack-${Date.now()}-${packs}`;
+        const poll = setInterval(() => void fetch(`${baseUrl}/api/pack-progress/${ticket}`, { headers: cookie }).then((r) => r.arrayBuffer()), PROGRESS_POLL_MS);
+        try {
+          const res = await fetch(`${baseUrl}/api/jobs/${imported.body.id}/pack.zip?progress=${ticket}`, { headers: cookie });
+          if (!res.ok) throw new Error(`the pack answered ${res.status}`);
+          await res.arrayBuffer();
+        } finally {
+          clearInterval(poll);
+        }
         packs++;
       }
     })();

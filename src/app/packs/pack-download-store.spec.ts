@@ -5,7 +5,8 @@ import { vi } from 'vitest';
 import { provideRouter } from '@angular/router';
 import { errorInterceptor } from '../core/error-interceptor';
 import { attachmentName } from './pack-api';
-import { PackDownloadStore, PROGRESS_POLL_MS } from './pack-download-store';
+import { PROGRESS_POLL_MS } from '../../../shared/api/pack-contract';
+import { PackDownloadStore } from './pack-download-store';
 
 describe('PackDownloadStore', () => {
   let store: PackDownloadStore;

@@ -2,7 +2,7 @@ import { HttpEvent, HttpEventType } from '@angular/common/http';
 import { computed, inject, Injectable } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { catchError, endWith, exhaustMap, filter, ignoreElements, map, merge, Observable, of, scan, share, startWith, Subject, switchMap, takeUntil, timer } from 'rxjs';
-import { PackProgressAnswer } from '../../../shared/api/pack-contract';
+import { PackProgressAnswer, PROGRESS_POLL_MS } from '../../../shared/api/pack-contract';
 import { PaperName } from '../../../shared/export/paper';
 import { describeError } from '../core/api-problem';
 import { attachmentName, PackApi } from './pack-api';
@@ -19,9 +19,6 @@ export type DownloadState =
 
 const idle: DownloadState = { step: 'idle' };
 const starting: DownloadState = { step: 'downloading', received: 0 };
-
-/** How often the server is asked how far the pack has got, while it downloads. */
-export const PROGRESS_POLL_MS = 500;
 
 /** One pack download at a time: starting another or cancelling drops the one under way. */
 @Injectable()
