@@ -1,6 +1,7 @@
 import { signal } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
-import { beforeEach, describe, expect, it } from 'vitest';
+import { Subject } from 'rxjs';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { checkPanel } from '../../../shared/checks';
 import { builtinCatalog } from '../../../shared/catalog/builtin-catalog';
 import type { Catalog } from '../../../shared/catalog/fitting';
@@ -11,7 +12,8 @@ import { makeJob, makePanel } from '../../../shared/testing/make-job';
 import { AuthStore } from '../auth/auth-store';
 import { selectionOf } from './document/selection';
 import { EditorSource } from './editor-source';
-import { EditorStore } from './editor-store';
+import { EditorStore, LISTS_FOLLOW_MS } from './editor-store';
+import type { LiveCheckAnswer } from './live-check-request';
 import { LiveChecks } from './live-checks';
 
 const job = makeJob([makePanel('left', { placements: [{ id: 'plate-0-1', fitting: 'plate-0', x: 37, y: 121, face: 'A' }] })]);
@@ -23,15 +25,22 @@ const stacked = makeJob([makePanel('left', { placements: ['a', 'b', 'c'].map((id
 
 /** A worker that answers only when told, with whatever it is told: the store must show it only while a drag lasts. */
 class HeldLiveChecks {
-  readonly asked = signal(0);
-  readonly answer = signal<{ seq: number; findings: ReturnType<typeof checkPanel> } | undefined>(undefined);
+  private asked = 0;
+  readonly answers = new Subject<LiveCheckAnswer>();
+  readonly behind = signal(false);
   readonly panels: Panel[] = [];
   working(): boolean {
     return true;
   }
+  lastAsked(): number {
+    return this.asked;
+  }
   ask(_job: JobDocument, panel: Panel, _catalog: Catalog): void {
     this.panels.push(panel);
-    this.asked.update((n) => n + 1);
+    this.asked++;
+  }
+  answer(findings: LiveCheckAnswer['findings']): void {
+    this.answers.next({ seq: this.asked, findings });
   }
 }
 
@@ -157,7 +166,7 @@ describe('EditorStore', () => {
     expect(store.hasSelection()).toBe(false);
   });
 
-  it('shows the worker\'s answer during a drag, marked pending until it answers the latest move, and the full check after the drop', () => {
+  it('shows the worker\'s answer during a drag, marked pending while the worker is late, and the full check after the drop', () => {
     const live = new HeldLiveChecks();
     const store = setUp(true, { of: stacked, live });
     const full = () => checkPanel(stacked, store.panel()!, builtinCatalog(), { fixes: false, unit: 'mm' });
@@ -168,13 +177,13 @@ describe('EditorStore', () => {
     store.dragTo('c', { x: 0, y: 384 }, false);
     TestBed.tick();
     expect(live.panels.at(-1)?.placements.find((p) => p.id === 'c')?.y).toBe(505);
-    expect(store.findingsPending()).toBe(true);
+    expect(store.findingsPending(), 'not until the worker is late').toBe(false);
     expect(store.findings(), 'until the worker answers, the findings the drag began with').toBe(atRest);
-    live.answer.set({ seq: live.asked(), findings: [] });
-    expect(store.findingsPending()).toBe(false);
+    live.answer([]);
     expect(store.findings()).toEqual([]);
     store.dragTo('c', { x: 0, y: 416 }, false);
     TestBed.tick();
+    live.behind.set(true);
     expect(store.findingsPending()).toBe(true);
     store.endDrag();
     // After the drop, whatever the worker said: the full check of the panel as dropped, with the two plates
@@ -194,7 +203,61 @@ describe('EditorStore', () => {
     store.endDrag();
     const dropped = store.findings();
     store.startDrag();
-    live.answer.set({ seq: live.asked(), findings: [] });
+    live.answer([]);
     expect(store.findings()).toBe(dropped);
+  });
+
+  it('shows an answer equal to the findings a drag began with, when that drag is a later one', () => {
+    const live = new HeldLiveChecks();
+    const store = setUp(true, { of: stacked, live });
+    store.select(selectionOf(['c']));
+    store.startDrag();
+    store.dragTo('c', { x: 0, y: 384 }, false);
+    TestBed.tick();
+    live.answer([]);
+    store.endDrag();
+    expect(store.findings().length, 'the dropped plate is clear, the two left behind still share their holes').toBeGreaterThan(0);
+    store.startDrag();
+    store.dragTo('c', { x: 0, y: 416 }, false);
+    TestBed.tick();
+    expect(store.findings().length, 'before this drag\'s first answer, the findings it began with').toBeGreaterThan(0);
+    live.answer([]);
+    expect(store.findings(), 'the same answer as the last drag\'s, but of this one').toEqual([]);
+  });
+
+  describe('the lists beside the stage during a drag', () => {
+    beforeEach(() => vi.useFakeTimers());
+    afterEach(() => vi.useRealTimers());
+
+    it(`catch up with it at most every ${LISTS_FOLLOW_MS} ms, and at once on the drop`, () => {
+      const store = setUp(true, { of: stacked });
+      const listedY = () => store.listedPanel()?.placements.find((p) => p.id === 'c')?.y;
+      store.select(selectionOf(['c']));
+      store.startDrag();
+      store.dragTo('c', { x: 0, y: 384 }, false);
+      expect(store.panel()?.placements.find((p) => p.id === 'c')?.y).toBe(505);
+      expect(listedY(), 'the drag has just begun').toBe(121);
+      expect(store.selectedPlacements()[0].y).toBe(121);
+      vi.advanceTimersByTime(LISTS_FOLLOW_MS / 2);
+      store.dragTo('c', { x: 0, y: 416 }, false);
+      expect(listedY()).toBe(121);
+      vi.advanceTimersByTime(LISTS_FOLLOW_MS / 2);
+      expect(listedY(), 'caught up with the newest move').toBe(537);
+      store.dragTo('c', { x: 0, y: 448 }, false);
+      expect(listedY()).toBe(537);
+      store.endDrag();
+      expect(listedY(), 'the drop').toBe(569);
+      expect(store.selectedPlacements()[0].y).toBe(569);
+    });
+
+    it('show where the panel went back to when a drag is called off', () => {
+      const store = setUp(true, { of: stacked });
+      store.select(selectionOf(['c']));
+      store.startDrag();
+      store.dragTo('c', { x: 0, y: 384 }, false);
+      vi.advanceTimersByTime(LISTS_FOLLOW_MS);
+      store.cancelDrag();
+      expect(store.listedPanel()?.placements.find((p) => p.id === 'c')?.y).toBe(121);
+    });
   });
 });

@@ -1,4 +1,5 @@
-import { computed, effect, inject, Injectable, linkedSignal, signal } from '@angular/core';
+import { computed, DestroyRef, effect, inject, Injectable, linkedSignal, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { checkPanel, fixesFor, type Finding } from '../../../shared/checks';
 import { findingKey, type Fix } from '../../../shared/checks/finding';
 import { layoutPanel } from '../../../shared/layout/panel-layout';
@@ -40,6 +41,13 @@ function checksWanted(): boolean {
 function sameFindings(a: readonly Finding[], b: readonly Finding[]): boolean {
   return a.length === b.length && a.every((f, i) => f.severity === b[i].severity && f.message === b[i].message && f.advice === b[i].advice && findingKey(f) === findingKey(b[i]));
 }
+
+/**
+ * While a drag lasts, the properties and the placements list catch up with it at most this often: the
+ * stage shows every move (with the plate's position beside it), and text redrawn on every snap cost the
+ * page more than the stage did.
+ */
+export const LISTS_FOLLOW_MS = 200;
 
 /**
  * The panel being edited: its history of drilling (each edit a command, a drag one step), what is
@@ -109,31 +117,47 @@ export class EditorStore {
   });
   /** How far the drag under way last moved the selection from where it began. */
   private dragOffset: { dx: number; dy: number } | undefined;
-  /** The number of the first request of the drag under way: answers before it are of an earlier drag. */
-  private readonly dragAskedFrom = signal(0);
-  /** During a drag with the checks in a worker: its newest answer for this drag, if one has come. */
-  private readonly dragAnswer = computed(() => {
-    const answer = this.live.answer();
-    return this.dragging() && this.live.working() && answer && answer.seq > this.dragAskedFrom() ? answer : undefined;
-  });
+  /** The number of the last request before the drag under way: answers up to it are of an earlier drag. */
+  private dragAskedFrom = 0;
+  /**
+   * The findings of the worker's newest answer for the drag under way, once one has come. An answer that
+   * says what is shown already sets nothing, so most answers of a drag make the page do no work at all.
+   */
+  private readonly dragFindings = signal<readonly Finding[] | undefined>(undefined, { equal: (a, b) => a === b || (!!a && !!b && sameFindings(a, b)) });
   /**
    * The full check's findings. During a drag the worker checks the moved panel once a frame and the newest
    * answer is shown (until the first comes, the findings the drag began with); on the drop, the panel is
    * checked here again, so what stays on screen is always the full check of the panel as it is.
    */
-  readonly findings = computed(() => (this.checksOn() ? (this.dragAnswer()?.findings ?? this.restingFindings()) : []), { equal: sameFindings });
-  /** The findings shown are of an earlier position of the drag: the worker has not answered for the latest. */
-  readonly findingsPending = computed(() => {
-    const asked = this.live.asked();
-    return this.checksOn() && this.dragging() && this.live.working() && asked > this.dragAskedFrom() && this.dragAnswer()?.seq !== asked;
-  });
+  readonly findings = computed(
+    () => {
+      if (!this.checksOn()) return [];
+      return (this.dragging() && this.live.working() ? this.dragFindings() : undefined) ?? this.restingFindings();
+    },
+    { equal: sameFindings },
+  );
+  /** The findings shown are of an earlier position of the drag: the worker has been late with the latest. */
+  readonly findingsPending = computed(() => this.checksOn() && this.dragging() && this.live.working() && this.live.behind());
+  /** During a drag, the panel as the lists beside the stage last caught up with it (LISTS_FOLLOW_MS). */
+  private readonly dragListed = signal<Panel | undefined>(undefined);
+  private listsFollow: ReturnType<typeof setTimeout> | undefined;
+  /**
+   * The panel as the properties and the placements list show it: the panel, but during a drag as it was
+   * at most LISTS_FOLLOW_MS ago.
+   */
+  readonly listedPanel = computed(() => (this.dragging() ? this.dragListed() : this.panel()));
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
+  /** The selected placements, as listed (listedPanel). */
   readonly selectedPlacements = computed(() => {
     const ids = this.selection().placements;
-    return this.panel()?.placements.filter((p) => ids.has(p.id)) ?? [];
+    return this.listedPanel()?.placements.filter((p) => ids.has(p.id)) ?? [];
   });
 
   constructor() {
+    this.live.answers.pipe(takeUntilDestroyed()).subscribe((answer) => {
+      if (this.dragging() && answer.seq > this.dragAskedFrom) this.dragFindings.set(answer.findings);
+    });
+    inject(DestroyRef).onDestroy(() => clearTimeout(this.listsFollow));
     // Effects run once a frame at most, so a burst of pointer moves asks the worker once, for where it ended.
     effect(() => {
       const job = this.source.job();
@@ -254,9 +278,11 @@ export class EditorStore {
   /** A drag begins: the history remembers where. */
   startDrag(): void {
     if (!this.editable()) return;
-    this.dragAskedFrom.set(this.live.asked());
+    this.dragAskedFrom = this.live.lastAsked();
+    this.dragFindings.set(undefined);
     this.dragOffset = undefined;
     this.history.update((h) => h && history.setMark(h));
+    this.dragListed.set(this.panel());
   }
 
   /**
@@ -280,15 +306,26 @@ export class EditorStore {
     this.dragOffset = offset;
     const next = moveItems(h.mark, { selection: this.selection(), ...offset });
     this.history.set(history.preview(h, syncBoringDistances(next, this.catalog())));
+    this.listsFollow ??= setTimeout(() => {
+      this.listsFollow = undefined;
+      this.dragListed.set(this.panel());
+    }, LISTS_FOLLOW_MS);
   }
 
   endDrag(): void {
     this.history.update((h) => h && history.commitMark(h));
+    this.stopListsFollowing();
   }
 
   /** Escape mid-drag: back to where it began. */
   cancelDrag(): void {
     this.history.update((h) => h && history.bailToMark(h));
+    this.stopListsFollowing();
+  }
+
+  private stopListsFollowing(): void {
+    clearTimeout(this.listsFollow);
+    this.listsFollow = undefined;
   }
 
   /** Replaces the drilling from outside the commands (applying another panel's); one undoable step. */

@@ -31,7 +31,7 @@ export class PropertiesForm {
     return p && this.store.catalog().get(p.fitting);
   });
   protected readonly fields = computed(() => {
-    const panel = this.store.panel();
+    const panel = this.store.listedPanel();
     return panel ? placementFields(panel, this.fitting()) : [];
   });
   /** Why a hinge cup stands where it does across the door, in the member's units. */
