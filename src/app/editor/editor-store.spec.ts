@@ -250,6 +250,28 @@ describe('EditorStore', () => {
       expect(store.selectedPlacements()[0].y).toBe(569);
     });
 
+    it(`list the checks' answer within ${LISTS_FOLLOW_MS} ms, also one that comes after the last move, while the stage has it at once`, () => {
+      const live = new HeldLiveChecks();
+      const store = setUp(true, { of: stacked, live });
+      const atRest = store.findings();
+      expect(atRest.length, 'the three plates share their holes').toBeGreaterThan(0);
+      store.select(selectionOf(['c']));
+      store.startDrag();
+      store.dragTo('c', { x: 0, y: 384 }, false);
+      TestBed.tick();
+      vi.advanceTimersByTime(LISTS_FOLLOW_MS);
+      expect(store.listedFindings(), 'no answer yet: the findings the drag began with').toEqual(atRest);
+      // The pointer rests; the worker answers afterwards.
+      live.answer([]);
+      expect(store.findings(), 'what the stage rings').toEqual([]);
+      expect(store.listedFindings()).toEqual(atRest);
+      vi.advanceTimersByTime(LISTS_FOLLOW_MS);
+      expect(store.listedFindings(), 'caught up with the answer though nothing moved').toEqual([]);
+      store.endDrag();
+      expect(store.listedFindings(), 'the drop: the full check').toEqual(store.findings());
+      expect(store.hasErrors()).toBe(store.findings().some((f) => f.severity === 'error'));
+    });
+
     it('show where the panel went back to when a drag is called off', () => {
       const store = setUp(true, { of: stacked });
       store.select(selectionOf(['c']));

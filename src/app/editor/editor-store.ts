@@ -138,15 +138,21 @@ export class EditorStore {
   );
   /** The findings shown are of an earlier position of the drag: the worker has been late with the latest. */
   readonly findingsPending = computed(() => this.checksOn() && this.dragging() && this.live.working() && this.live.behind());
-  /** During a drag, the panel as the lists beside the stage last caught up with it (LISTS_FOLLOW_MS). */
-  private readonly dragListed = signal<Panel | undefined>(undefined);
+  /** During a drag, the panel and its findings as the lists beside the stage last caught up with them (LISTS_FOLLOW_MS). */
+  private readonly dragListed = signal<{ panel: Panel | undefined; findings: readonly Finding[] }>({ panel: undefined, findings: [] }, {
+    equal: (a, b) => a.panel === b.panel && sameFindings(a.findings, b.findings),
+  });
   private listsFollow: ReturnType<typeof setTimeout> | undefined;
   /**
    * The panel as the properties and the placements list show it: the panel, but during a drag as it was
    * at most LISTS_FOLLOW_MS ago.
    */
-  readonly listedPanel = computed(() => (this.dragging() ? this.dragListed() : this.panel()));
+  readonly listedPanel = computed(() => (this.dragging() ? this.dragListed().panel : this.panel()));
+  /** The findings as the findings list shows them: during a drag, as they were at most LISTS_FOLLOW_MS ago (the stage rings them at once). */
+  readonly listedFindings = computed(() => (this.dragging() ? this.dragListed().findings : this.findings()), { equal: sameFindings });
   readonly errors = computed(() => this.findings().filter((f) => f.severity === 'error'));
+  /** A boolean of its own, so that the page around the stage is not checked again each time the errors change. */
+  readonly hasErrors = computed(() => this.errors().length > 0);
   /** The selected placements, as listed (listedPanel). */
   readonly selectedPlacements = computed(() => {
     const ids = this.selection().placements;
@@ -155,7 +161,9 @@ export class EditorStore {
 
   constructor() {
     this.live.answers.pipe(takeUntilDestroyed()).subscribe((answer) => {
-      if (this.dragging() && answer.seq > this.dragAskedFrom) this.dragFindings.set(answer.findings);
+      if (!this.dragging() || answer.seq <= this.dragAskedFrom) return;
+      this.dragFindings.set(answer.findings);
+      this.followLists();
     });
     inject(DestroyRef).onDestroy(() => clearTimeout(this.listsFollow));
     // Effects run once a frame at most, so a burst of pointer moves asks the worker once, for where it ended.
@@ -282,7 +290,7 @@ export class EditorStore {
     this.dragFindings.set(undefined);
     this.dragOffset = undefined;
     this.history.update((h) => h && history.setMark(h));
-    this.dragListed.set(this.panel());
+    this.dragListed.set({ panel: this.panel(), findings: this.findings() });
   }
 
   /**
@@ -306,9 +314,14 @@ export class EditorStore {
     this.dragOffset = offset;
     const next = moveItems(h.mark, { selection: this.selection(), ...offset });
     this.history.set(history.preview(h, syncBoringDistances(next, this.catalog())));
+    this.followLists();
+  }
+
+  /** The lists beside the stage catch up with the drag within LISTS_FOLLOW_MS: a move or an answer of the checks. */
+  private followLists(): void {
     this.listsFollow ??= setTimeout(() => {
       this.listsFollow = undefined;
-      this.dragListed.set(this.panel());
+      this.dragListed.set({ panel: this.panel(), findings: this.findings() });
     }, LISTS_FOLLOW_MS);
   }
 

@@ -34,7 +34,7 @@ export class FindingsList {
   private readonly opened = signal<string | null>(null);
   protected readonly openedFinding = computed(() => {
     const key = this.opened();
-    const finding = key === null ? undefined : this.store.findings().find((f) => findingKey(f) === key);
+    const finding = key === null ? undefined : this.store.listedFindings().find((f) => findingKey(f) === key);
     return finding && this.store.fixesFor(finding);
   });
 
@@ -42,7 +42,7 @@ export class FindingsList {
     return this.opened() === findingKey(finding);
   }
   protected readonly counts = computed(() => {
-    const findings = this.store.findings();
+    const findings = this.store.listedFindings();
     return { error: findings.filter((f) => f.severity === 'error').length, warning: findings.filter((f) => f.severity === 'warning').length };
   });
 
