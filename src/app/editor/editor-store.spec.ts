@@ -58,6 +58,14 @@ function setUp(editor = true, { archived = false, of = job, units = signal<Lengt
   return TestBed.inject(EditorStore);
 }
 
+/** Picks up plate c of `stacked` and drags it to y 384 on the stage (505 on the panel), the frame's effects run. */
+function dragPlateC(store: EditorStore): void {
+  store.select(selectionOf(['c']));
+  store.startDrag();
+  store.dragTo('c', { x: 0, y: 384 }, false);
+  TestBed.tick();
+}
+
 describe('EditorStore', () => {
   beforeEach(() => TestBed.resetTestingModule());
 
@@ -172,10 +180,7 @@ describe('EditorStore', () => {
     const full = () => checkPanel(stacked, store.panel()!, builtinCatalog(), { fixes: false, unit: 'mm' });
     const atRest = store.findings();
     expect(atRest).toEqual(full());
-    store.select(selectionOf(['c']));
-    store.startDrag();
-    store.dragTo('c', { x: 0, y: 384 }, false);
-    TestBed.tick();
+    dragPlateC(store);
     expect(live.panels.at(-1)?.placements.find((p) => p.id === 'c')?.y).toBe(505);
     expect(store.findingsPending(), 'not until the worker is late').toBe(false);
     expect(store.findings(), 'until the worker answers, the findings the drag began with').toBe(atRest);
@@ -196,10 +201,7 @@ describe('EditorStore', () => {
   it('drops an answer of an earlier drag', () => {
     const live = new HeldLiveChecks();
     const store = setUp(true, { of: stacked, live });
-    store.select(selectionOf(['c']));
-    store.startDrag();
-    store.dragTo('c', { x: 0, y: 384 }, false);
-    TestBed.tick();
+    dragPlateC(store);
     store.endDrag();
     const dropped = store.findings();
     store.startDrag();
@@ -210,10 +212,7 @@ describe('EditorStore', () => {
   it('shows an answer equal to the findings a drag began with, when that drag is a later one', () => {
     const live = new HeldLiveChecks();
     const store = setUp(true, { of: stacked, live });
-    store.select(selectionOf(['c']));
-    store.startDrag();
-    store.dragTo('c', { x: 0, y: 384 }, false);
-    TestBed.tick();
+    dragPlateC(store);
     live.answer([]);
     store.endDrag();
     expect(store.findings().length, 'the dropped plate is clear, the two left behind still share their holes').toBeGreaterThan(0);
@@ -255,10 +254,7 @@ describe('EditorStore', () => {
       const store = setUp(true, { of: stacked, live });
       const atRest = store.findings();
       expect(atRest.length, 'the three plates share their holes').toBeGreaterThan(0);
-      store.select(selectionOf(['c']));
-      store.startDrag();
-      store.dragTo('c', { x: 0, y: 384 }, false);
-      TestBed.tick();
+      dragPlateC(store);
       vi.advanceTimersByTime(LISTS_FOLLOW_MS);
       expect(store.listedFindings(), 'no answer yet: the findings the drag began with').toEqual(atRest);
       // The pointer rests; the worker answers afterwards.

@@ -43,9 +43,9 @@ function sameFindings(a: readonly Finding[], b: readonly Finding[]): boolean {
 }
 
 /**
- * While a drag lasts, the properties and the placements list catch up with it at most this often: the
- * stage shows every move (with the plate's position beside it), and text redrawn on every snap cost the
- * page more than the stage did.
+ * While a drag lasts, the properties, the placements list and the findings list catch up with it at most
+ * this often: the stage shows every move (with the plate's position and the finding rings), and text
+ * redrawn on every snap cost the page more than the stage did.
  */
 export const LISTS_FOLLOW_MS = 200;
 
@@ -165,7 +165,7 @@ export class EditorStore {
       this.dragFindings.set(answer.findings);
       this.followLists();
     });
-    inject(DestroyRef).onDestroy(() => clearTimeout(this.listsFollow));
+    inject(DestroyRef).onDestroy(() => this.stopListsFollowing());
     // Effects run once a frame at most, so a burst of pointer moves asks the worker once, for where it ended.
     effect(() => {
       const job = this.source.job();
@@ -290,7 +290,7 @@ export class EditorStore {
     this.dragFindings.set(undefined);
     this.dragOffset = undefined;
     this.history.update((h) => h && history.setMark(h));
-    this.dragListed.set({ panel: this.panel(), findings: this.findings() });
+    this.listNow();
   }
 
   /**
@@ -321,8 +321,13 @@ export class EditorStore {
   private followLists(): void {
     this.listsFollow ??= setTimeout(() => {
       this.listsFollow = undefined;
-      this.dragListed.set({ panel: this.panel(), findings: this.findings() });
+      this.listNow();
     }, LISTS_FOLLOW_MS);
+  }
+
+  /** The lists beside the stage show the panel and its findings as they are now. */
+  private listNow(): void {
+    this.dragListed.set({ panel: this.panel(), findings: this.findings() });
   }
 
   endDrag(): void {
