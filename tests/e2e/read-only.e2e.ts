@@ -71,13 +71,14 @@ describe('what a viewer, a bench hand and a new job show', () => {
     const nav = page.getByRole('navigation', { name: 'Main' });
     for (const name of ['Jobs', 'Catalog', 'Team', 'Bench', 'Outbox', 'How it works']) {
       const link = nav.getByRole('link', { name, exact: true });
-      expect(await link.isVisible(), name).toBe(true);
+      // The list opens on the frame after the tap: the test waits for it as a person's eye does.
+      await expect.poll(() => link.isVisible(), { message: name }).toBe(true);
       const box = await link.boundingBox();
       expect(box && box.x >= 0 && box.x + box.width <= 390, `${name} within the screen`).toBe(true);
     }
     await screenshot(page, 'phone-menu');
     await nav.getByRole('link', { name: 'Outbox', exact: true }).click();
     await page.waitForURL(/\/outbox$/);
-    expect(await nav.isVisible()).toBe(false);
+    await expect.poll(() => nav.isVisible(), { message: 'the list folds once a destination is chosen' }).toBe(false);
   });
 });

@@ -9,6 +9,7 @@ import { errorInterceptor } from '../core/error-interceptor';
 import { vi } from 'vitest';
 import { BenchPage } from './bench-page';
 import { BenchStore } from './bench-store';
+import { RETRY_FIRST_MS } from './mark-queue';
 import { MARK_STORE, MarkStore, QueuedMark } from './mark-store';
 
 /** The queue's store as IndexedDB keeps it, in memory: marks by `seq`, listed in order of making. */
@@ -45,7 +46,8 @@ describe('BenchPage', () => {
     findings: [{ code: 'bores-overlap', severity: 'error', message: 'Two bores overlap.', panel: side.id, bores: [], placements: [], fixes: [] }],
   };
 
-  async function openAs(role: Role, url: string, kept = memoryMarkStore()): Promise<void> {
+  /** Opens the bench; the server answers the queue's question whether it can be reached as `health` says (the offline worker answers 504). */
+  async function openAs(role: Role, url: string, kept = memoryMarkStore(), health: 'answers' | 'unreachable' = 'answers'): Promise<void> {
     store = kept;
     TestBed.configureTestingModule({
       providers: [
@@ -64,6 +66,11 @@ describe('BenchPage', () => {
     http.expectOne((r) => r.url === '/api/jobs').flush({ jobs: [aJobSummary()] });
     http.expectOne('/api/jobs/11').flush(aJobDetail([side, door, loose]));
     http.expectOne('/api/jobs/11/findings').flush(findings);
+    await stable();
+    // With no mark of the member's to send, the queue asks whether the server answers.
+    const asked = http.expectOne('/api/health');
+    if (health === 'answers') asked.flush({ ok: true });
+    else asked.flush('', { status: 504, statusText: 'Gateway Timeout' });
     await stable();
     page = harness.routeNativeElement!;
   }
@@ -252,6 +259,23 @@ describe('BenchPage', () => {
     await stable();
     expect(banner()).toBeUndefined();
     expect(state('Left side')).toMatch(/^Drilled by Demo bench/);
+  });
+
+  it('says the bench is offline when the server cannot be reached though the browser says it is online, until the server answers again', async () => {
+    // Time runs on by itself (the page settles on timeouts) and can be jumped to the queue's next try.
+    vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'], shouldAdvanceTime: true });
+    try {
+      await openAs('bench', '/bench?job=11', memoryMarkStore(), 'unreachable');
+      expect(navigator.onLine).toBe(true);
+      expect(banner()).toContain('The bench is offline. Marks are kept on this device and sent when the connection returns. No marks waiting to send.');
+
+      await vi.advanceTimersByTimeAsync(RETRY_FIRST_MS);
+      http.expectOne('/api/health').flush({ ok: true });
+      await stable();
+      expect(banner()).toBeUndefined();
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('neither shows nor sends the marks another member left waiting on this device', async () => {

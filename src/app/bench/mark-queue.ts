@@ -1,5 +1,6 @@
+import { HttpClient } from '@angular/common/http';
 import { computed, DestroyRef, effect, inject, Injectable, signal, untracked } from '@angular/core';
-import { Subject } from 'rxjs';
+import { firstValueFrom, Subject } from 'rxjs';
 import { PanelRecord } from '../../../shared/api/contract';
 import { AuthStore } from '../auth/auth-store';
 import { ApiProblem, describeError } from '../core/api-problem';
@@ -37,6 +38,7 @@ function verdictOf(error: unknown): 'refused' | 'signed-out' | 'unreachable' | '
 @Injectable({ providedIn: 'root' })
 export class MarkQueue {
   private readonly store = inject(MARK_STORE);
+  private readonly http = inject(HttpClient);
   private readonly api = inject(JobsApi);
   private readonly auth = inject(AuthStore);
   private readonly userId = computed(() => this.auth.user()?.id);
@@ -49,6 +51,8 @@ export class MarkQueue {
   private sending: Promise<void> | undefined;
   private retryTimer: ReturnType<typeof setTimeout> | undefined;
   private failures = 0;
+  /** Whether the server has been asked, or sent a mark, since this page opened. */
+  private reachTried = false;
 
   /** No network, or the server did not answer the last try. */
   readonly offline = computed(() => !this.browserOnline() || this.unreachable());
@@ -118,7 +122,11 @@ export class MarkQueue {
       const userId = this.userId();
       if (userId === undefined || !this.browserOnline()) return;
       const next = (await this.store.list(userId)).find((m) => !m.refused);
-      if (!next) return;
+      if (!next) {
+        if (!this.reachTried || this.unreachable()) await this.askServer();
+        return;
+      }
+      this.reachTried = true;
       this.inFlight.set(next);
       const answer = await this.api.setPanelStatus({ dbId: next.panelDbId, version: next.version }, next.to).then(
         (saved) => ({ saved }),
@@ -139,6 +147,24 @@ export class MarkQueue {
       if (verdict !== 'signed-out') this.retryLater();
       return;
     }
+  }
+
+  /**
+   * With no mark to send, the server is asked whether it answers: the browser's word that it is online
+   * only means a network is there (a workshop's Wi-Fi can lead nowhere, and a page opened from the
+   * offline worker is told it is online), so the bench says it is offline once the server fails to
+   * answer, and asks again later until it does.
+   */
+  private async askServer(): Promise<void> {
+    this.reachTried = true;
+    const error = await firstValueFrom(this.http.get('/api/health')).then(
+      () => undefined,
+      (failure: unknown) => failure,
+    );
+    if (error === undefined) return this.answered();
+    if (verdictOf(error) !== 'unreachable') return;
+    this.unreachable.set(true);
+    this.retryLater();
   }
 
   private async accepted(mark: QueuedMark, saved: PanelRecord): Promise<void> {
