@@ -51,7 +51,7 @@ export class MarkQueue {
   private sending: Promise<void> | undefined;
   private retryTimer: ReturnType<typeof setTimeout> | undefined;
   private failures = 0;
-  /** Whether the server has been asked, or sent a mark, since this page opened. */
+  /** Whether the server has been asked, or has answered a mark, since this page opened. */
   private reachTried = false;
 
   /** No network, or the server did not answer the last try. */
@@ -126,7 +126,6 @@ export class MarkQueue {
         if (!this.reachTried || this.unreachable()) await this.askServer();
         return;
       }
-      this.reachTried = true;
       this.inFlight.set(next);
       const answer = await this.api.setPanelStatus({ dbId: next.panelDbId, version: next.version }, next.to).then(
         (saved) => ({ saved }),
@@ -194,6 +193,7 @@ export class MarkQueue {
 
   /** The server answered: it can be reached, and the waits start short again. */
   private answered(): void {
+    this.reachTried = true;
     this.failures = 0;
     this.unreachable.set(false);
     this.lastFailure.set(null);
